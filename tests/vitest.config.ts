@@ -1,0 +1,35 @@
+import { defineConfig } from "vitest/config";
+import { fileURLToPath } from "node:url";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+
+// Two projects: "unit" needs nothing running; "integration" needs the throwaway
+// PostgreSQL (and mail/file stand-ins) that tests/run.ts starts and passes in env.
+export default defineConfig({
+  root,
+  resolve: { tsconfigPaths: true },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: "unit",
+          include: ["tests/engine/**/*.test.ts", "tests/unit/**/*.test.{ts,tsx}"],
+          environment: "node",
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "integration",
+          include: ["tests/app/**/*.test.ts", "tests/db/**/*.test.ts"],
+          environment: "node",
+          // One database for the whole run: files run one after another.
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+    ],
+  },
+});
