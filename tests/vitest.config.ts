@@ -30,6 +30,18 @@ export default defineConfig({
           hookTimeout: 60_000,
         },
       },
+      {
+        extends: true,
+        test: {
+          name: "e2e",
+          // Browser tests against the production build that tests/run.ts serves at BASE_URL.
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 90_000,
+        },
+      },
     ],
   },
 });

@@ -1,0 +1,12 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // Knex and pg load drivers dynamically; bundling them breaks that. The local stand-ins and
+  // PDF/argon2 packages are Node-only as well.
+  serverExternalPackages: ["knex", "pg", "@node-rs/argon2", "pdfkit", "maildev", "s3rver"],
+  poweredByHeader: false,
+  typedRoutes: false,
+  // Tests build once into the same folder; the start script reuses a build that is newer than the sources.
+  distDir: process.env.PIERWISE_DIST_DIR ?? ".next",
+};
+
+export default nextConfig;

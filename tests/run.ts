@@ -1,0 +1,112 @@
+/**
+ * `npm test`: a throwaway PostgreSQL (own folder and port, removed afterwards), migrations, the
+ * mail and file stand-ins, then the unit and integration suites; then a production build served
+ * on a free port for the browser suite. Ends with "N passed, N failed" and a non-zero exit code
+ * on any failure.
+ */
+import { spawn } from "node:child_process";
+import crypto from "node:crypto";
+import fs from "node:fs";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import knex from "knex";
+import knexConfig from "../knexfile";
+import { appEnvironment } from "../db/lib/app-env";
+import { buildApp, buildIsStale } from "../db/lib/build";
+import { freePort } from "../db/lib/ports";
+import { ensureAppDatabase, ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../db/lib/postgres";
+import { startStandIns, type StandIns } from "../db/lib/stand-ins";
+import { countResults, ensureChromium, waitForHttp } from "./support/runner";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+const workDir = path.join(root, ".test-data", `run-${process.pid}`);
+const reportDir = path.join(workDir, "reports");
+
+let cluster: Cluster | undefined;
+let standIns: StandIns | undefined;
+
+/** Runs vitest as a child without blocking: the stand-ins in this process must keep answering. */
+function runVitest(projects: string[], env: NodeJS.ProcessEnv, report: string): Promise<number> {
+  const args = ["run", "--config", "tests/vitest.config.ts", ...projects.flatMap((p) => ["--project", p]),
+    "--reporter=default", "--reporter=json", `--outputFile.json=${report}`];
+  const child = spawn(path.join(root, "node_modules/.bin/vitest"), args, { cwd: root, env, stdio: "inherit" });
+  return new Promise((resolve) => child.on("exit", (code) => resolve(code ?? 1)));
+}
+
+async function main(): Promise<number> {
+  fs.mkdirSync(reportDir, { recursive: true });
+  const { binDir, version } = findServerBinaries({ installIfMissing: true });
+  cluster = { binDir, version, dataDir: path.join(workDir, "pg"), port: await freePort() };
+  ensureCluster(cluster, { throwaway: true });
+  startServer(cluster, { throwaway: true });
+  const databaseUrl = ensureAppDatabase(cluster, "pierwise_test", crypto.randomBytes(12).toString("hex"), "pierwise_test");
+
+  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  await migrator.migrate.latest();
+  await migrator.destroy();
+
+  const ports = { smtp: await freePort(), mailWeb: await freePort(), s3: await freePort(), app: await freePort() };
+  standIns = await startStandIns({
+    smtpPort: ports.smtp, mailWebPort: ports.mailWeb, s3Port: ports.s3,
+    s3Directory: path.join(workDir, "files"), bucket: "pierwise-test",
+  });
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    ...appEnvironment({
+      databaseUrl, sessionSecret: crypto.randomBytes(32).toString("hex"), appPort: ports.app,
+      smtpPort: ports.smtp, mailWebPort: ports.mailWeb, s3Port: ports.s3, bucket: "pierwise-test",
+    }),
+    PIERWISE_TEST_CLUSTER: JSON.stringify(cluster),
+  };
+
+  let failedRuns = (await runVitest(["unit", "integration"], { ...env, NODE_ENV: "test" as const }, path.join(reportDir, "main.json"))) === 0 ? 0 : 1;
+
+  const e2eDir = path.join(root, "tests", "e2e");
+  const hasBrowserTests = fs.existsSync(e2eDir) && fs.readdirSync(e2eDir).some((f) => f.endsWith(".test.ts"));
+  if (hasBrowserTests) {
+    ensureChromium();
+    const buildEnv: NodeJS.ProcessEnv = { ...env, NODE_ENV: "production" };
+    if (buildIsStale(root)) buildApp(root, buildEnv);
+    const server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], {
+      cwd: root, env: buildEnv, stdio: ["ignore", "ignore", "inherit"],
+    });
+    try {
+      await waitForHttp(`http://127.0.0.1:${ports.app}/api/health`, 60_000);
+      const status = await runVitest(["e2e"], { ...env, BASE_URL: `http://127.0.0.1:${ports.app}` }, path.join(reportDir, "e2e.json"));
+      if (status !== 0) failedRuns += 1;
+    } finally {
+      server.kill("SIGTERM");
+    }
+  }
+
+  const { passed, failed } = countResults(reportDir);
+  const broken = failedRuns > 0 && failed === 0 ? 1 : 0; // a suite that crashed before reporting still fails the run
+  console.log(`\n${passed} passed, ${failed + broken} failed`);
+  return failed + broken > 0 ? 1 : 0;
+}
+
+async function cleanUp(): Promise<void> {
+  await standIns?.stop();
+  try {
+    if (cluster) stopServer(cluster, "immediate");
+  } catch (error) {
+    console.error(String(error));
+  }
+  fs.rmSync(workDir, { recursive: true, force: true });
+}
+
+process.on("SIGINT", () => {
+  void cleanUp().then(() => process.exit(130));
+});
+
+main()
+  .then(async (code) => {
+    await cleanUp();
+    process.exit(code);
+  })
+  .catch(async (error) => {
+    console.error("test run failed to start:", error);
+    await cleanUp();
+    console.log("\n0 passed, 1 failed");
+    process.exit(1);
+  });
