@@ -1,0 +1,46 @@
+/**
+ * Concrete for the whole job: the holes added up, a waste allowance on top (5–10 % is usual;
+ * machine-dug holes often come out larger than planned) [common practice], ready-mix rounded up
+ * to the next ¼ yd³ and bag counts for premix.
+ *
+ * @example concreteOrder({ hole: concreteForHole({ diameterIn: 24, depthIn: 60 }), holes: 2, wasteAllowancePct: 10 })
+ *   // { totalYd3: 1.164, orderYd3: 1.5, bags80Lb: 58, … }
+ */
+import { requireRange } from "../errors";
+import { BAG_YIELD_FT3, FT3_PER_YD3, type HoleConcrete } from "./concrete-for-hole";
+
+export interface ConcreteOrder {
+  holes: number;
+  totalFt3: number;
+  totalYd3: number;
+  totalWeightLb: number;
+  wasteAllowancePct: number;
+  withWasteFt3: number;
+  withWasteYd3: number;
+  /** Ready-mix order, rounded up to ¼ yd³. */
+  orderYd3: number;
+  bags40Lb: number;
+  bags60Lb: number;
+  bags80Lb: number;
+}
+
+export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllowancePct: number }): ConcreteOrder {
+  requireRange("posts.count", a.holes, 1, 1000, "Number of holes", "");
+  requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
+  const totalFt3 = a.hole.volumeFt3 * a.holes;
+  const withWasteFt3 = totalFt3 * (1 + a.wasteAllowancePct / 100);
+  const bags = (lb: 40 | 60 | 80) => Math.ceil(withWasteFt3 / BAG_YIELD_FT3[lb] - 1e-9);
+  return {
+    holes: a.holes,
+    totalFt3,
+    totalYd3: totalFt3 / FT3_PER_YD3,
+    totalWeightLb: a.hole.weightLb * a.holes,
+    wasteAllowancePct: a.wasteAllowancePct,
+    withWasteFt3,
+    withWasteYd3: withWasteFt3 / FT3_PER_YD3,
+    orderYd3: Math.ceil((withWasteFt3 / FT3_PER_YD3) * 4 - 1e-9) / 4,
+    bags40Lb: bags(40),
+    bags60Lb: bags(60),
+    bags80Lb: bags(80),
+  };
+}

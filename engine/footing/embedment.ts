@@ -1,0 +1,90 @@
+/**
+ * Embedment depth of a post in a concrete-filled hole resisting lateral load and moment.
+ *
+ * Source: IBC (2018/2021) §1807.3.2.
+ *  Nonconstrained, Eq. 18-1: d = 0.5 A {1 + [1 + 4.36 h/A]^½}, A = 2.34 P/(S1 b),
+ *    S1 = allowable lateral bearing at d/3 = S·min(d, 12 ft)/3 [memory: 12 ft cap].
+ *    Equivalent capacity form (rearranged, valid for P → 0): 4 d P + 4.36 M ≤ 4 d² S1 b / 2.34.
+ *  Constrained at grade (slab or pavement), Eq. 18-2: d² = 4.25 P h/(S3 b), S3 = S·min(d, 12 ft),
+ *    i.e. M ≤ S3 b d² / 4.25.
+ * P lateral load (lb), h = M/P its height above grade (ft), b hole diameter (ft),
+ * S lateral bearing pressure per ft of depth (psf/ft), doubled by §1806.3.4 when chosen.
+ *
+ * @example embedmentDepth({ lateralLoadLb: 1000, loadHeightFt: 4, diameterFt: 2, lateralBearingPsfPerFt: 150 })
+ *   // { depthFt: 6.294, … }
+ */
+import { requireRange } from "../errors";
+import { solveDepthFt } from "./solve-depth";
+
+const S_DEPTH_CAP_FT = 12;
+
+export interface LateralArgs {
+  shearLb: number;
+  momentLbFt: number;
+  diameterFt: number;
+  sPsfPerFt: number;
+  constrained: boolean;
+}
+
+/** Demand / capacity of the lateral check at depth d (a load ratio: doubling the loads doubles it). */
+export function lateralRatio(a: LateralArgs, depthFt: number): number {
+  const P = Math.abs(a.shearLb);
+  const M = Math.abs(a.momentLbFt);
+  if (depthFt <= 0) return P + M > 0 ? Infinity : 0;
+  const dS = Math.min(depthFt, S_DEPTH_CAP_FT);
+  if (a.constrained) return (4.25 * M) / (a.sPsfPerFt * dS * a.diameterFt * depthFt * depthFt);
+  const s1 = (a.sPsfPerFt * dS) / 3;
+  return (4 * depthFt * P + 4.36 * M) / ((4 * depthFt * depthFt * s1 * a.diameterFt) / 2.34);
+}
+
+/** Depth (ft) at which the lateral check just passes. */
+export function requiredLateralDepthFt(a: LateralArgs): { depthFt: number; converged: boolean } {
+  const P = Math.abs(a.shearLb);
+  const M = Math.abs(a.momentLbFt);
+  if (P === 0 && M === 0) return { depthFt: 0, converged: true };
+  return solveDepthFt((d) => {
+    const dS = Math.min(d, S_DEPTH_CAP_FT);
+    if (a.constrained) return (a.sPsfPerFt * dS * a.diameterFt * d * d) / 4.25 - M;
+    return (4 * d * d * ((a.sPsfPerFt * dS) / 3) * a.diameterFt) / 2.34 - 4 * d * P - 4.36 * M;
+  });
+}
+
+export interface EmbedmentDepth {
+  depthFt: number;
+  /** S1 (nonconstrained, at d/3) or S3 (constrained, at d), psf. */
+  lateralBearingAtDepthPsf: number;
+  lateralBearingPsfPerFtUsed: number;
+  equation: string;
+  converged: boolean;
+}
+
+export function embedmentDepth(a: {
+  lateralLoadLb: number;
+  loadHeightFt: number;
+  diameterFt: number;
+  lateralBearingPsfPerFt: number;
+  constrainedAtGrade?: boolean;
+  isolatedPoleIncrease?: boolean;
+}): EmbedmentDepth {
+  requireRange("lateralLoadLb", a.lateralLoadLb, 0, 1e6, "Lateral load", "lb");
+  requireRange("loadHeightFt", a.loadHeightFt, 0, 100, "Height of the lateral load above grade", "ft");
+  requireRange("posts.holeDiameterIn", a.diameterFt, 0.25, 10, "Hole diameter", "ft");
+  requireRange("site.soil.lateralBearingPsfPerFt", a.lateralBearingPsfPerFt, 25, 2000, "Lateral bearing pressure", "psf per ft");
+  const s = a.lateralBearingPsfPerFt * (a.isolatedPoleIncrease ? 2 : 1);
+  const constrained = a.constrainedAtGrade ?? false;
+  const r = requiredLateralDepthFt({
+    shearLb: a.lateralLoadLb,
+    momentLbFt: a.lateralLoadLb * a.loadHeightFt,
+    diameterFt: a.diameterFt,
+    sPsfPerFt: s,
+    constrained,
+  });
+  const dS = Math.min(r.depthFt, S_DEPTH_CAP_FT);
+  return {
+    depthFt: r.depthFt,
+    lateralBearingAtDepthPsf: constrained ? s * dS : (s * dS) / 3,
+    lateralBearingPsfPerFtUsed: s,
+    equation: constrained ? "IBC §1807.3.2.2 Eq. 18-2 (constrained)" : "IBC §1807.3.2.1 Eq. 18-1 (nonconstrained)",
+    converged: r.converged,
+  };
+}

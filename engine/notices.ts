@@ -1,0 +1,39 @@
+/**
+ * What every result says about itself: the defer-to-code caution, the usual site-safety cautions,
+ * and the editions and sections the calculation used.
+ */
+import type { DesignInput } from "./schema";
+
+export const DEFER_TO_CODE =
+  "Preliminary sizing only. The local building code, the authority having jurisdiction and a licensed engineer govern; have this design reviewed and stamped before it is built.";
+
+export const SITE_CAUTIONS = [
+  "Call before you dig: have buried utilities located and marked before any hole is drilled.",
+  "Open holes are a fall and collapse hazard: cover or barricade them, keep out of holes deeper than 4 ft, and keep spoil back from the edge.",
+  "Lift posts, beams and concrete bags with proper technique or equipment; mind the auger's torque and pinch points.",
+  "Do not handle modules in high wind: a module is a sail and can injure the crew or be torn loose.",
+  "Check the concrete mix (≥ 2,500 psi premix is typical; the code minimum for post backfill is 2,000 psi) and let it cure before loading the posts.",
+];
+
+export const WIND_METHOD_NOTE =
+  "Wind: ASCE 7 open monoslope free-roof method (Fig. 27.3-4) for both editions. ASCE 7-22's provisions specific to ground-mounted fixed-tilt solar arrays are not implemented.";
+
+export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; aisc: string; sections: string[] } {
+  const e = input.site.edition;
+  const lateral = input.posts.constrainedAtGrade ? "IBC §1807.3.2.2 Eq. 18-2 (constrained)" : "IBC §1807.3.2.1 Eq. 18-1 (nonconstrained)";
+  const soil = input.site.soil.method === "class" ? "IBC Table 1806.2 (presumptive soil values)" : "Engineer's soil values (geotechnical report)";
+  const sections = [
+    `ASCE 7-${e.slice(2)} Eq. 26.10-1 velocity pressure; Table 26.10-1 Kz; §26.8 Kzt; §26.9 Ke; Table 26.6-1 Kd`,
+    "ASCE 7-16 §26.11 gust-effect factor G = 0.85 (rigid)",
+    "ASCE 7-16 §27.3.2 Fig. 27.3-4 open monoslope free roof, net pressure coefficients CN",
+    `ASCE 7-${e.slice(2)} Ch. 7 snow: Eq. 7.3-1 pf, §7.4 Fig. 7.4-1 Cs`,
+    `ASCE 7-${e.slice(2)} §2.4.1 ASD load combinations`,
+    lateral,
+    soil,
+    ...(input.posts.isolatedPoleIncrease ? ["IBC §1806.3.4 lateral value doubled for an isolated pole (designer's choice)"] : []),
+    "IBC §1807.3.3 post backfill and hole size",
+    "IBC §1809.4–1809.5 frost protection and 12 in minimum depth",
+    "AISC 360-16 §F8 round HSS flexure, Ω = 1.67",
+  ];
+  return { asce: `ASCE 7-${e.slice(2)}`, ibc: "IBC 2018/2021", aisc: "AISC 360-16", sections };
+}

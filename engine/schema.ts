@@ -1,0 +1,126 @@
+/**
+ * The one input schema that forms, the API and the engine share. Grouped for a form: `site`,
+ * `array`, `posts`. Units are in the field names. Defaults fill optional fields, so the parsed
+ * `DesignInput` is complete. Each rule's message names the field and its allowed range.
+ */
+import { z } from "zod";
+import { choice, flag, num } from "./schema-helpers";
+import { PIPE_SIZES } from "./footing/pipe";
+
+const soilClassValue = z.preprocess(
+  (v) => (typeof v === "string" && /^[1-5]$/.test(v) ? Number(v) : v),
+  z.union([z.literal([1, 2, 3, 4, 5]), z.enum(["fill", "organic", "mud"])], {
+    error: "Soil class must be 1, 2, 3, 4 or 5 (IBC Table 1806.2)",
+  }),
+).refine((v) => typeof v === "number", {
+  error: "Fill, organic soil and mud have no presumptive bearing value (IBC Table 1806.2): enter values from a geotechnical report as custom soil",
+});
+
+const soilSchema = z.discriminatedUnion(
+  "method",
+  [
+    z.object({ method: z.literal("class"), soilClass: soilClassValue }),
+    z.object({
+      method: z.literal("custom"),
+      allowableBearingPsf: num("Allowable bearing pressure", 500, 20000, "psf"),
+      lateralBearingPsfPerFt: num("Lateral bearing pressure", 25, 2000, "psf per ft"),
+      description: z.string().max(200, { error: "Soil description must be at most 200 characters" }).optional(),
+    }),
+  ],
+  { error: 'Soil method must be "class" (IBC Table 1806.2) or "custom" (engineer\'s values)' },
+);
+
+const topographySchema = z.discriminatedUnion(
+  "method",
+  [
+    z.object({ method: z.literal("flat") }),
+    z.object({ method: z.literal("kzt"), kzt: num("Topographic factor Kzt", 1, 3) }),
+    z.object({
+      method: z.literal("hill"),
+      k1: num("Topographic multiplier K1", 0, 1.5),
+      k2: num("Topographic multiplier K2", 0, 1),
+      k3: num("Topographic multiplier K3", 0, 1),
+    }),
+  ],
+  { error: 'Topography method must be "flat", "kzt" or "hill"' },
+);
+
+export const siteSchema = z.object({
+  edition: choice("ASCE 7 edition", ["7-16", "7-22"]),
+  riskCategory: choice("Risk category", ["I", "II", "III", "IV"]).default("II"),
+  windSpeedMph: num("Wind speed", 85, 200, "mph"),
+  exposure: choice("Exposure category", ["B", "C", "D"]),
+  groundElevationFt: num("Ground elevation", -300, 15000, "ft").default(0),
+  topography: topographySchema.default({ method: "flat" }),
+  groundSnowPsf: num("Ground snow load", 0, 300, "psf").default(0),
+  snowExposureCe: num("Snow exposure factor Ce", 0.7, 1.3).default(1.0),
+  snowThermalCt: num("Snow thermal factor Ct", 0.85, 1.3).default(1.2),
+  soil: soilSchema,
+  frostDepthIn: num("Frost depth", 0, 120, "in"),
+  slopeAlongPct: num("Ground slope along the array", -50, 50, "%").default(0),
+  slopeAcrossPct: num("Ground slope across the array", -50, 50, "%").default(0),
+  waterTableDepthFt: num("Water table depth", 0, 200, "ft").optional(),
+});
+
+export const arraySchema = z.object({
+  moduleLengthIn: num("Module length", 30, 110, "in"),
+  moduleWidthIn: num("Module width", 15, 60, "in"),
+  moduleWeightLb: num("Module weight", 10, 150, "lb"),
+  orientation: choice("Orientation", ["portrait", "landscape"]),
+  rows: num("Rows", 1, 8, "", { int: true }),
+  columns: num("Columns", 1, 40, "", { int: true }),
+  gapIn: num("Gap between modules", 0, 12, "in").default(1),
+  tiltDeg: num("Tilt", 0, 60, "degrees"),
+  tiltSettingsDeg: z
+    .array(num("Each tilt setting", 0, 60, "degrees"), { error: "Tilt settings must be a list of angles in degrees" })
+    .min(1, { error: "Tilt settings must list between 1 and 24 angles" })
+    .max(24, { error: "Tilt settings must list between 1 and 24 angles" })
+    .optional(),
+  lowestEdgeClearanceIn: num("Lowest edge clearance", 6, 120, "in"),
+  rackingDeadPsf: num("Racking dead load", 0, 15, "psf").default(1.5),
+  rackDepthIn: num("Rack depth (panel underside to post top)", 0, 24, "in").default(6),
+  flow: choice("Wind flow beneath the array", ["clear", "obstructed"]).default("clear"),
+  slipperySurface: flag("Slippery surface").default(true),
+});
+
+const diameterList = (label: string) =>
+  z.array(num(`Each ${label} diameter`, 8, 60, "in"), { error: `${label} diameters must be a list of inches` })
+    .min(1, { error: `${label} diameters must list between 1 and 20 sizes` })
+    .max(20, { error: `${label} diameters must list between 1 and 20 sizes` });
+
+export const postsSchema = z.object({
+  count: num("Number of posts", 2, 20, "", { int: true }).default(2),
+  spacingFt: num("Post spacing", 1, 40, "ft").optional(),
+  pipeSize: choice("Pipe size", PIPE_SIZES),
+  yieldKsi: num("Post yield strength", 25, 60, "ksi").default(35),
+  holeDiameterIn: z.union([num("Hole diameter", 8, 60, "in"), z.literal("auto")], {
+    error: 'Hole diameter must be between 8 and 60 in, or "auto"',
+  }).default(24),
+  autoDiametersIn: diameterList("Candidate").default([12, 18, 24, 30, 36]),
+  maxAutoDepthIn: num("Largest reasonable depth for automatic sizing", 24, 240, "in").default(96),
+  sweepDiametersIn: diameterList("Sweep").default([12, 18, 24, 30, 36]),
+  fixedDepthIn: num("Given footing depth", 12, 360, "in").optional(),
+  constrainedAtGrade: flag("Constrained at grade").default(false),
+  isolatedPoleIncrease: flag("Isolated pole lateral increase (IBC §1806.3.4)").default(false),
+  concreteUnitWeightPcf: num("Concrete unit weight", 100, 160, "pcf").default(145),
+  wasteAllowancePct: num("Concrete waste allowance", 0, 50, "%").default(10),
+  subtractPostDisplacement: flag("Subtract post displacement").default(false),
+  depthIncrementIn: num("Depth increment", 1, 12, "in").default(6),
+  sideFrictionPsf: num("Side friction", 0, 2000, "psf").optional(),
+});
+
+export const designInputSchema = z
+  .object({ site: siteSchema, array: arraySchema, posts: postsSchema, projectName: z.string().max(120).optional() })
+  .superRefine((v, ctx) => {
+    const alongWidthIn = v.array.orientation === "portrait" ? v.array.moduleWidthIn : v.array.moduleLengthIn;
+    const widthFt = (v.array.columns * alongWidthIn + (v.array.columns - 1) * v.array.gapIn) / 12;
+    if (v.posts.spacingFt !== undefined && (v.posts.count - 1) * v.posts.spacingFt > widthFt) {
+      const max = widthFt / (v.posts.count - 1);
+      ctx.addIssue({ code: "custom", path: ["posts", "spacingFt"], message: `Post spacing must be between 1 and ${max.toFixed(2)} ft so the posts fit under the ${widthFt.toFixed(2)} ft wide array` });
+    }
+  });
+
+/** The parsed, defaults-filled input the engine works on. */
+export type DesignInput = z.output<typeof designInputSchema>;
+/** What a form or API caller may send (optional fields may be left out). */
+export type DesignInputDraft = z.input<typeof designInputSchema>;

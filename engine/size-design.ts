@@ -1,0 +1,95 @@
+/**
+ * The whole design: validate, build loads at every tilt, choose or take the hole, size the depth,
+ * check everything, add concrete, options, field list, warnings and the preview geometry.
+ *
+ * @example sizeDesign(defaultDesignInput).footing // { diameterIn: 24, depthIn: …, controllingCheck: "lateral", … }
+ * @throws DesignInputError when the input fails the schema (each field named)
+ */
+import { concreteForHole } from "./concrete/concrete-for-hole";
+import { concreteOrder } from "./concrete/concrete-order";
+import { designContext } from "./design-context";
+import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
+import { smallestPipeFor } from "./footing/pipe";
+import { previewGeometry } from "./geometry/preview";
+import { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
+import { autoDiameter } from "./options/auto-diameter";
+import { diameterSweep } from "./options/diameter-sweep";
+import { tiltEnvelope } from "./options/tilt-envelope";
+import { parseDesignInput } from "./parse";
+import { governingLoads, postLoadTable, windCaseRows } from "./result-sections";
+import type { DesignInput } from "./schema";
+import type { DesignResult } from "./types";
+import { collectWarnings, type DesignWarning } from "./warnings";
+import { ENGINE_VERSION } from "./version";
+
+export function sizeDesign(raw: unknown): DesignResult {
+  return sizeParsedDesign(parseDesignInput(raw));
+}
+
+/** As `sizeDesign`, for input already parsed by `designInputSchema` (skips validation). */
+export function sizeParsedDesign(input: DesignInput): DesignResult {
+  const ctx = designContext(input);
+  const { main, pipe, footing: fctx } = ctx;
+  const { posts, array } = input;
+  const extra: DesignWarning[] = [];
+  let ev: FootingEvaluation;
+  const auto = posts.holeDiameterIn === "auto";
+  if (auto) {
+    const a = autoDiameter(fctx, posts.autoDiametersIn, posts.maxAutoDepthIn, pipe.outsideDiameterIn);
+    ev = a.evaluation;
+    if (!a.reasonable) extra.push({ code: "AUTO_DIAMETER_NO_REASONABLE_DEPTH", severity: "warning", message: `No candidate hole gives a depth within ${posts.maxAutoDepthIn} in with bearing passing; the shallowest (${ev.diameterIn} in) is shown.` });
+  } else ev = evaluateFooting(fctx, posts.holeDiameterIn as number);
+  const diameterIn = ev.diameterIn;
+  const hole = concreteForHole({
+    diameterIn, depthIn: ev.depthIn, unitWeightPcf: posts.concreteUnitWeightPcf,
+    postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement && diameterIn > pipe.outsideDiameterIn,
+  });
+  const job = concreteOrder({ hole, holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct });
+  const sweep = diameterSweep(fctx, posts.sweepDiametersIn, { holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct, postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement });
+  const envelope = ctx.tilts.length > 1 ? tiltEnvelope(fctx, ctx.tilts, diameterIn) : null;
+  const lateral = ev.checks.find((c) => c.id === "lateral")!;
+  const controlling = ev.checks.find((c) => c.id === ev.controllingCheck)!;
+  const governingPostId = (controlling.governing ?? lateral.governing)?.postId ?? null;
+  const windCase = (lateral.governing ?? controlling.governing)?.windCase ?? -1;
+  const drawState = main;
+  const { dims, heights, layout } = main;
+  return {
+    engineVersion: ENGINE_VERSION,
+    projectName: input.projectName,
+    input,
+    caution: DEFER_TO_CODE,
+    cautions: SITE_CAUTIONS,
+    methodNote: WIND_METHOD_NOTE,
+    references: sectionsUsed(input),
+    geometry: {
+      tiltDeg: array.tiltDeg, clearanceTiltDeg: ctx.clearanceTiltDeg, widthFt: dims.widthFt, slopeLengthFt: dims.slopeLengthFt,
+      horizontalDepthFt: dims.slopeLengthFt * Math.cos((array.tiltDeg * Math.PI) / 180), moduleCount: dims.moduleCount,
+      surfaceAreaFt2: dims.surfaceAreaFt2, lowestEdgeFt: heights.lowestEdgeFt, highestEdgeFt: heights.highestEdgeFt,
+      meanHeightFt: heights.meanHeightFt, hOverL: main.hOverL, minClearanceIn: heights.minClearanceIn, postTopFt: heights.postTopFt,
+      spacingFt: layout.spacingFt, overhangFt: layout.overhangFt,
+      posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt })),
+    },
+    wind: { edition: input.site.edition, heightFt: heights.meanHeightFt, gustFactor: main.gustFactor, velocity: main.velocity, cases: windCaseRows(main), method: WIND_METHOD_NOTE },
+    snow: { ...main.snow, totalLb: main.snowTotalLb },
+    dead: { modulesLb: dims.moduleCount * array.moduleWeightLb, rackingLb: array.rackingDeadPsf * dims.surfaceAreaFt2, arrayLb: main.deadArrayLb, postLbPerFt: pipe.weightLbPerFt },
+    postLoads: postLoadTable(ctx.rows, array.tiltDeg),
+    governingLoads: governingLoads(ctx.rows),
+    footing: {
+      diameterIn, diameterMode: auto ? "auto" : "given", depthIn: ev.depthIn, depthFt: ev.depthIn / 12,
+      depthMode: posts.fixedDepthIn !== undefined ? "given" : "sized", controllingCheck: ev.controllingCheck,
+      requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
+      suggestedPipeSize: smallestPipeFor(ev.checks.find((c) => c.id === "postBending")!.demand, posts.yieldKsi),
+    },
+    concrete: { perHole: hole, job },
+    options: { diameterSweep: sweep, tiltEnvelope: envelope },
+    field: {
+      posts: main.posts.map((p) => ({ id: p.id, heightAboveGradeIn: p.heightAboveGradeFt * 12, embedmentIn: ev.depthIn, postLengthIn: p.heightAboveGradeFt * 12 + ev.depthIn })),
+      note: "Post length = height above its own grade + embedment, post standing on the hole bottom. Set posts level with a laser and use the cut list to trim or shim.",
+    },
+    warnings: collectWarnings(input, ctx.states, ev, extra),
+    geometryPreview: previewGeometry(drawState, {
+      gapIn: array.gapIn, rackDepthIn: array.rackDepthIn, postOutsideDiameterIn: pipe.outsideDiameterIn,
+      diameterIn, depthIn: ev.depthIn, governingPostId, windCase,
+    }),
+  };
+}

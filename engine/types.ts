@@ -1,0 +1,98 @@
+/**
+ * The shape of a whole design result. Every length, force and pressure names its unit.
+ */
+import type { ConcreteOrder } from "./concrete/concrete-order";
+import type { HoleConcrete } from "./concrete/concrete-for-hole";
+import type { CheckId, FootingCheck, Governing } from "./footing/checks";
+import type { PipeMoment } from "./footing/pipe";
+import type { SoilValues } from "./footing/soil";
+import type { PreviewGeometry } from "./geometry/preview";
+import type { SweepRow } from "./options/diameter-sweep";
+import type { TiltEnvelopeRow } from "./options/tilt-envelope";
+import type { DesignInput } from "./schema";
+import type { SnowLoad } from "./snow/snow-load";
+import type { DesignWarning } from "./warnings";
+import type { VelocityPressure } from "./wind/velocity-pressure";
+
+export interface WindCaseResult {
+  label: string;
+  windDirectionDeg: 0 | 180;
+  loadCase: "A" | "B";
+  cnWindward: number;
+  cnLeeward: number;
+  windwardPressurePsf: number;
+  leewardPressurePsf: number;
+  normalForceLb: number;
+  centreOfPressureFromWindwardEdgeFt: number | null;
+  horizontalLb: number;
+  downwardLb: number;
+  momentAtPostTopLbFt: number;
+}
+
+export interface CombinationRow {
+  combination: string;
+  shearLb: number;
+  momentAtGradeLbFt: number;
+  downwardLb: number;
+  windUpliftLb: number;
+}
+
+export interface GoverningLoad extends Governing {
+  valueLb?: number;
+  valueLbFt?: number;
+}
+
+export interface DesignResult {
+  engineVersion: string;
+  projectName?: string;
+  input: DesignInput;
+  /** Preliminary-sizing caution: the code, the AHJ and a licensed engineer govern. */
+  caution: string;
+  cautions: string[];
+  methodNote: string;
+  references: { asce: string; ibc: string; aisc: string; sections: string[] };
+  geometry: {
+    tiltDeg: number;
+    clearanceTiltDeg: number;
+    widthFt: number;
+    slopeLengthFt: number;
+    horizontalDepthFt: number;
+    moduleCount: number;
+    surfaceAreaFt2: number;
+    lowestEdgeFt: number;
+    highestEdgeFt: number;
+    meanHeightFt: number;
+    hOverL: number;
+    minClearanceIn: number;
+    postTopFt: number;
+    spacingFt: number;
+    overhangFt: number;
+    posts: { id: string; xFt: number; yFt: number; tributaryWidthFt: number; gradeFt: number; heightAboveGradeFt: number }[];
+  };
+  wind: { edition: "7-16" | "7-22"; heightFt: number; gustFactor: number; velocity: VelocityPressure; cases: WindCaseResult[]; method: string };
+  snow: SnowLoad & { totalLb: number };
+  dead: { modulesLb: number; rackingLb: number; arrayLb: number; postLbPerFt: number };
+  postLoads: { postId: string; tiltDeg: number; combinations: CombinationRow[] }[];
+  governingLoads: { shear: GoverningLoad; moment: GoverningLoad; uplift: GoverningLoad | null; downward: GoverningLoad };
+  footing: {
+    diameterIn: number;
+    diameterMode: "given" | "auto";
+    depthIn: number;
+    depthFt: number;
+    depthMode: "sized" | "given";
+    controllingCheck: CheckId;
+    requiredDepthIn: Record<"lateral" | "uplift" | "frost", number>;
+    checks: FootingCheck[];
+    pass: boolean;
+    post: PipeMoment;
+    soil: SoilValues;
+    /** Smallest standard pipe whose allowable moment covers the bending demand (null: none listed does). */
+    suggestedPipeSize: PipeMoment["size"] | null;
+  };
+  concrete: { perHole: HoleConcrete; job: ConcreteOrder };
+  options: { diameterSweep: SweepRow[]; tiltEnvelope: { rows: TiltEnvelopeRow[]; governingTiltDeg: number } | null };
+  field: { posts: { id: string; heightAboveGradeIn: number; embedmentIn: number; postLengthIn: number }[]; note: string };
+  warnings: DesignWarning[];
+  /** The 3D preview's drawing data (ft). */
+  geometryPreview: PreviewGeometry;
+}
