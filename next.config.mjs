@@ -5,6 +5,8 @@ const nextConfig = {
   serverExternalPackages: ["knex", "pg", "@node-rs/argon2", "pdfkit", "maildev", "s3rver"],
   poweredByHeader: false,
   typedRoutes: false,
+  // forbidden() renders app/forbidden.tsx with a 403 for members who lack a role.
+  experimental: { authInterrupts: true },
   // Tests build once into the same folder; the start script reuses a build that is newer than the sources.
   distDir: process.env.PIERWISE_DIST_DIR ?? ".next",
 };

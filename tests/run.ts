@@ -21,13 +21,18 @@ import { countResults, ensureChromium, waitForHttp } from "./support/runner";
 const root = fileURLToPath(new URL("..", import.meta.url));
 const workDir = path.join(root, ".test-data", `run-${process.pid}`);
 const reportDir = path.join(workDir, "reports");
+// `npm test -- <file or name filter>` runs only matching test files (browser tests only when a filter names them).
+const filters = process.argv.slice(2);
+// Several developers' runs at once on one checkout each need their own build folder.
+const distDir = process.env.PIERWISE_DIST_DIR ?? ".next";
 
 let cluster: Cluster | undefined;
 let standIns: StandIns | undefined;
 
 /** Runs vitest as a child without blocking: the stand-ins in this process must keep answering. */
 function runVitest(projects: string[], env: NodeJS.ProcessEnv, report: string): Promise<number> {
-  const args = ["run", "--config", "tests/vitest.config.ts", ...projects.flatMap((p) => ["--project", p]),
+  const args = ["run", "--config", "tests/vitest.config.ts", ...projects.flatMap((p) => ["--project", p]), ...filters,
+    ...(filters.length ? ["--passWithNoTests"] : []),
     "--reporter=default", "--reporter=json", `--outputFile.json=${report}`];
   const child = spawn(path.join(root, "node_modules/.bin/vitest"), args, { cwd: root, env, stdio: "inherit" });
   return new Promise((resolve) => child.on("exit", (code) => resolve(code ?? 1)));
@@ -43,6 +48,8 @@ async function main(): Promise<number> {
 
   const migrator = knex({ ...knexConfig, connection: databaseUrl });
   await migrator.migrate.latest();
+  // The demo organisations and people are the cast of the access tests.
+  await migrator.seed.run();
   await migrator.destroy();
 
   const ports = { smtp: await freePort(), mailWeb: await freePort(), s3: await freePort(), app: await freePort() };
@@ -62,11 +69,12 @@ async function main(): Promise<number> {
   let failedRuns = (await runVitest(["unit", "integration"], { ...env, NODE_ENV: "test" as const }, path.join(reportDir, "main.json"))) === 0 ? 0 : 1;
 
   const e2eDir = path.join(root, "tests", "e2e");
-  const hasBrowserTests = fs.existsSync(e2eDir) && fs.readdirSync(e2eDir).some((f) => f.endsWith(".test.ts"));
+  const hasBrowserTests = fs.existsSync(e2eDir) && fs.readdirSync(e2eDir).some((f) => f.endsWith(".test.ts"))
+    && (filters.length === 0 || filters.some((f) => f.includes("e2e")));
   if (hasBrowserTests) {
     ensureChromium();
-    const buildEnv: NodeJS.ProcessEnv = { ...env, NODE_ENV: "production" };
-    if (buildIsStale(root)) buildApp(root, buildEnv);
+    const buildEnv: NodeJS.ProcessEnv = { ...env, NODE_ENV: "production", PIERWISE_DIST_DIR: distDir };
+    if (buildIsStale(root, distDir)) buildApp(root, buildEnv);
     const server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], {
       cwd: root, env: buildEnv, stdio: ["ignore", "ignore", "inherit"],
     });

@@ -24,6 +24,7 @@ export default defineConfig({
           name: "integration",
           include: ["tests/app/**/*.test.ts", "tests/db/**/*.test.ts"],
           environment: "node",
+          setupFiles: ["tests/support/next-context.ts"],
           // One database for the whole run: files run one after another.
           fileParallelism: false,
           testTimeout: 30_000,

@@ -1,0 +1,40 @@
+import Link from "next/link";
+import { currentUser } from "@/app/_lib/auth";
+import { signOutAction } from "@/app/(auth)/login/actions";
+import { Brand } from "@/components/ui/brand";
+import { ROLE_LABELS } from "@/db/roles";
+
+/**
+ * The signed-in shell. It shows who is signed in but makes no access decision: every page below
+ * checks access itself next to its query (layouts do not re-render on navigation).
+ */
+export default async function WorkspaceLayout({ children }: { children: React.ReactNode }) {
+  const user = await currentUser();
+  return (
+    <div className="min-h-screen">
+      <header className="no-print border-b border-slate-200 bg-white">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+          <Brand href="/projects" />
+          <nav aria-label="Main" className="flex flex-wrap gap-4 text-sm">
+            <Link href="/projects" className="hover:text-accent-700">Projects</Link>
+            <Link href="/reviews" className="hover:text-accent-700">Reviews</Link>
+            <Link href="/field" className="hover:text-accent-700">Field specs</Link>
+            {user?.roles.includes("admin") ? <Link href="/admin/members" className="hover:text-accent-700">Members</Link> : null}
+          </nav>
+          {user ? (
+            <div className="ml-auto flex items-center gap-3 text-sm">
+              <span className="text-slate-600">
+                {user.name} · {user.organisationName}
+                <span className="ml-1 text-xs text-slate-500">({user.roles.map((r) => ROLE_LABELS[r]).join(", ")})</span>
+              </span>
+              <form action={signOutAction}>
+                <button type="submit" className="rounded-md border border-slate-300 px-3 py-1 hover:bg-slate-50">Sign out</button>
+              </form>
+            </div>
+          ) : null}
+        </div>
+      </header>
+      <div className="mx-auto max-w-6xl px-4 py-6">{children}</div>
+    </div>
+  );
+}

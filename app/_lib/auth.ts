@@ -1,0 +1,59 @@
+import { cache } from "react";
+import { findActiveMember, type MemberRecord } from "@/db/queries/users";
+import { ROLE_LABELS, type Role } from "@/db/roles";
+import { getSession } from "./session";
+
+/**
+ * The data-access checks. Every page, server action and route handler that reads or writes data
+ * calls one of these next to its query; layouts never decide access. Order matters: first who you
+ * are (401), then whether the data is your organisation's (404, so other organisations cannot
+ * probe for ids), then whether your role may do this (403).
+ */
+export type CurrentUser = MemberRecord;
+
+export class AccessError extends Error {
+  constructor(
+    readonly status: 401 | 403 | 404,
+    message: string,
+  ) {
+    super(message);
+    this.name = "AccessError";
+  }
+}
+
+/** The signed-in, active member for this request, or null. Cached per request. */
+export const currentUser = cache(async (): Promise<CurrentUser | null> => {
+  const session = await getSession();
+  if (!session.userId || !session.organisationId) return null;
+  return (await findActiveMember(session.userId, session.organisationId)) ?? null;
+});
+
+export async function requireUser(): Promise<CurrentUser> {
+  const user = await currentUser();
+  if (!user) throw new AccessError(401, "Sign in to continue.");
+  return user;
+}
+
+export function hasRole(user: CurrentUser, ...roles: Role[]): boolean {
+  return roles.some((role) => user.roles.includes(role));
+}
+
+/** Throws 403 unless the user holds at least one of the roles. */
+export function assertRole(user: CurrentUser, ...roles: Role[]): void {
+  if (!hasRole(user, ...roles)) {
+    const names = roles.map((r) => ROLE_LABELS[r].toLowerCase()).join(" or ");
+    throw new AccessError(403, `Only a member with the ${names} role can do this.`);
+  }
+}
+
+export async function requireRole(...roles: Role[]): Promise<CurrentUser> {
+  const user = await requireUser();
+  assertRole(user, ...roles);
+  return user;
+}
+
+/** Throws 404 when a record is missing or belongs to another organisation. */
+export function assertOwned<T extends { organisationId: string }>(user: CurrentUser, record: T | undefined, what = "That record"): T {
+  if (!record || record.organisationId !== user.organisationId) throw new AccessError(404, `${what} was not found.`);
+  return record;
+}
