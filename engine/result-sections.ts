@@ -26,17 +26,17 @@ export function postLoadTable(rows: FactoredPostLoad[], tiltDeg: number): { post
   return [...byPost].map(([postId, combinations]) => ({ postId, tiltDeg, combinations }));
 }
 
-function worst(rows: FactoredPostLoad[], value: (r: FactoredPostLoad) => number): FactoredPostLoad {
-  return rows.reduce((a, r) => (value(r) > value(a) ? r : a));
-}
-
 const named = (r: FactoredPostLoad): GoverningLoad => ({ postId: r.postId, tiltDeg: r.tiltDeg, combination: r.combination, windCase: r.windCase });
 
+/** The largest shear, moment, uplift and downward load on any post, each with its combination named. */
 export function governingLoads(rows: FactoredPostLoad[]) {
-  const shear = worst(rows, (r) => Math.abs(r.shearLb));
-  const moment = worst(rows, (r) => Math.abs(r.momentAtGradeLbFt));
-  const up = worst(rows, (r) => -r.downwardLb);
-  const down = worst(rows, (r) => r.downwardLb);
+  let shear = rows[0], moment = rows[0], up = rows[0], down = rows[0];
+  for (const r of rows) {
+    if (Math.abs(r.shearLb) > Math.abs(shear.shearLb)) shear = r;
+    if (Math.abs(r.momentAtGradeLbFt) > Math.abs(moment.momentAtGradeLbFt)) moment = r;
+    if (r.downwardLb < up.downwardLb) up = r;
+    if (r.downwardLb > down.downwardLb) down = r;
+  }
   return {
     shear: { ...named(shear), valueLb: Math.abs(shear.shearLb) },
     moment: { ...named(moment), valueLbFt: Math.abs(moment.momentAtGradeLbFt) },

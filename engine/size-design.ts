@@ -45,7 +45,7 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
     postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement && diameterIn > pipe.outsideDiameterIn,
   });
   const job = concreteOrder({ hole, holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct });
-  const sweep = diameterSweep(fctx, posts.sweepDiametersIn, { holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct, postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement });
+  const sweep = diameterSweep(fctx, posts.sweepDiametersIn, { holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct, postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement, postBendingPass: ev.checks[5].pass });
   const envelope = ctx.tilts.length > 1 ? tiltEnvelope(fctx, ctx.tilts, diameterIn) : null;
   const lateral = ev.checks.find((c) => c.id === "lateral")!;
   const controlling = ev.checks.find((c) => c.id === ev.controllingCheck)!;

@@ -14,7 +14,6 @@
  *   // { depthFt: 6.294, … }
  */
 import { requireRange } from "../errors";
-import { solveDepthFt } from "./solve-depth";
 
 const S_DEPTH_CAP_FT = 12;
 
@@ -37,16 +36,38 @@ export function lateralRatio(a: LateralArgs, depthFt: number): number {
   return (4 * depthFt * P + 4.36 * M) / ((4 * depthFt * depthFt * s1 * a.diameterFt) / 2.34);
 }
 
-/** Depth (ft) at which the lateral check just passes. */
+/**
+ * Depth (ft) at which the lateral check just passes, in closed form or by Newton's method (fast:
+ * this sits in the sizing loop). Below 12 ft, Eq. 18-1 becomes a d³ − 4P d − 4.36 M = 0 with
+ * a = 4 S b /(3 × 2.34), convex for d > 0, so Newton from a point right of the root converges
+ * monotonically; beyond 12 ft S1 is constant and the equation is quadratic.
+ */
 export function requiredLateralDepthFt(a: LateralArgs): { depthFt: number; converged: boolean } {
   const P = Math.abs(a.shearLb);
   const M = Math.abs(a.momentLbFt);
   if (P === 0 && M === 0) return { depthFt: 0, converged: true };
-  return solveDepthFt((d) => {
-    const dS = Math.min(d, S_DEPTH_CAP_FT);
-    if (a.constrained) return (a.sPsfPerFt * dS * a.diameterFt * d * d) / 4.25 - M;
-    return (4 * d * d * ((a.sPsfPerFt * dS) / 3) * a.diameterFt) / 2.34 - 4 * d * P - 4.36 * M;
-  });
+  const S = a.sPsfPerFt, b = a.diameterFt, cap = S_DEPTH_CAP_FT;
+  let d: number;
+  if (a.constrained) {
+    d = Math.cbrt((4.25 * M) / (S * b));
+    if (d > cap) d = Math.sqrt((4.25 * M) / (S * cap * b));
+  } else {
+    const k = (4 * S * b) / (3 * 2.34);
+    d = Math.max(Math.sqrt((8 * P) / k), Math.cbrt((8.72 * M) / k));
+    for (let i = 0; i < 60; i++) {
+      const g = k * d * d * d - 4 * P * d - 4.36 * M;
+      const next = d - g / (3 * k * d * d - 4 * P);
+      if (Math.abs(next - d) < 1e-10) { d = next; break; }
+      d = next;
+    }
+    if (d > cap) {
+      // S1 = S·12/3: (4 × 4S b /2.34) d² − 4P d − 4.36 M = 0
+      const q = (16 * S * b) / 2.34;
+      d = (4 * P + Math.sqrt(16 * P * P + 4 * q * 4.36 * M)) / (2 * q);
+    }
+  }
+  if (d > 60) return { depthFt: 60, converged: false };
+  return { depthFt: d, converged: true };
 }
 
 export interface EmbedmentDepth {

@@ -12,7 +12,8 @@ import { makeCheck, type CheckId, type FootingCheck, type Governing } from "./ch
 import { lateralRatio, requiredLateralDepthFt } from "./embedment";
 import type { PipeMoment } from "./pipe";
 import { roundUpIn } from "./solve-depth";
-import { pierConcreteWeightLb, upliftCapacityLb } from "./uplift";
+import { pierConcreteWeightLb } from "./uplift";
+import { requiredUpliftDepthFt } from "./uplift-depth";
 import type { SoilValues } from "./soil";
 
 export interface FootingContext {
@@ -27,6 +28,13 @@ export interface FootingContext {
   fixedDepthIn?: number;
   waterTableDepthFt?: number;
   sideFrictionPsf?: number;
+}
+
+export interface FootingDepth {
+  depthIn: number;
+  need: Record<"lateral" | "uplift" | "frost", number>;
+  controllingCheck: CheckId;
+  lateralConverged: boolean;
 }
 
 export interface FootingEvaluation {
@@ -54,64 +62,87 @@ function lateralCheck(row: FactoredPostLoad | null, ratio: number, source: strin
 const gov = (r: FactoredPostLoad): Governing => ({ postId: r.postId, tiltDeg: r.tiltDeg, combination: r.combination, windCase: r.windCase });
 const LATERAL_SOURCE = (c: boolean) => (c ? "IBC §1807.3.2.2 Eq. 18-2" : "IBC §1807.3.2.1 Eq. 18-1");
 
-export function evaluateFooting(ctx: FootingContext, diameterIn: number): FootingEvaluation {
+/** The depth each check needs at this hole and the design depth (the cheap part, for sweeps). */
+export function footingDepth(ctx: FootingContext, diameterIn: number, useFixed = true): FootingDepth {
   const b = diameterIn / 12;
-  const lat = { diameterFt: b, sPsfPerFt: ctx.soil.lateralPsfPerFt, constrained: ctx.constrained };
-  const upliftArgs = (r: FactoredPostLoad) => ({
-    diameterFt: b, concretePcf: ctx.concretePcf, postLbPerFt: ctx.pipe.weightLbPerFt, postAboveGradeFt: r.postHeightAboveGradeFt,
-    deadLb: r.deadResistLb / (r.deadFactor || 1), waterTableDepthFt: ctx.waterTableDepthFt, sideFrictionPsf: ctx.sideFrictionPsf,
-  });
-  const upliftCap = (r: FactoredPostLoad, d: number) => {
-    const a = upliftArgs(r);
-    const post = a.postLbPerFt * (a.postAboveGradeFt + d);
-    return r.deadFactor * (pierConcreteWeightLb(a, d) + post + a.deadLb) + (a.sideFrictionPsf ?? 0) * Math.PI * b * d;
-  };
+  const S = ctx.soil.lateralPsfPerFt;
+  const wp = ctx.pipe.weightLbPerFt;
+  const isUplift = (r: FactoredPostLoad) => r.windUpliftLb > 0 && !r.hasSnow;
+  const deadOf = (r: FactoredPostLoad) => (r.deadFactor ? r.deadResistLb / r.deadFactor : 0);
+
   let latNeed = { ft: 0, row: null as FactoredPostLoad | null, converged: true };
   for (const r of ctx.lateralRows) {
-    const s = requiredLateralDepthFt({ ...lat, shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt });
+    const s = requiredLateralDepthFt({ shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt, diameterFt: b, sPsfPerFt: S, constrained: ctx.constrained });
     if (s.depthFt > latNeed.ft || !latNeed.row) latNeed = { ft: s.depthFt, row: r, converged: latNeed.converged && s.converged };
   }
   let upNeed = { ft: 0, row: null as FactoredPostLoad | null };
   for (const r of ctx.rows) {
-    if (r.windUpliftLb <= 0 || r.hasSnow || upliftCap(r, 0) >= r.windUpliftLb) continue;
-    let lo = 0, hi = 60;
-    if (upliftCap(r, hi) < r.windUpliftLb) { upNeed = { ft: hi, row: r }; continue; }
-    while (hi - lo > 1e-7) { const m = 0.5 * (lo + hi); if (upliftCap(r, m) >= r.windUpliftLb) hi = m; else lo = m; }
-    if (hi > upNeed.ft) upNeed = { ft: hi, row: r };
+    if (!isUplift(r)) continue;
+    const ft = requiredUpliftDepthFt({
+      upliftLb: r.windUpliftLb, deadFactor: r.deadFactor, diameterFt: b, concretePcf: ctx.concretePcf, postLbPerFt: wp,
+      postAboveGradeFt: r.postHeightAboveGradeFt, deadLb: deadOf(r), waterTableDepthFt: ctx.waterTableDepthFt, sideFrictionPsf: ctx.sideFrictionPsf,
+    });
+    if (ft > upNeed.ft) upNeed = { ft, row: r };
   }
   const frostIn = Math.max(ctx.frostDepthIn, 12);
   const need = { lateral: latNeed.ft * 12, uplift: upNeed.ft * 12, frost: frostIn };
   const controllingCheck = (Object.keys(need) as (keyof typeof need)[]).reduce((a, k) => (need[k] > need[a] ? k : a), "frost" as keyof typeof need);
-  const depthIn = ctx.fixedDepthIn ?? roundUpIn(need[controllingCheck], ctx.depthIncrementIn);
-  const d = depthIn / 12;
+  const fixed = useFixed ? ctx.fixedDepthIn : undefined;
+  const depthIn = fixed ?? roundUpIn(need[controllingCheck], ctx.depthIncrementIn);
+  return { depthIn, need, controllingCheck, lateralConverged: latNeed.converged };
+}
 
+
+export function evaluateFooting(ctx: FootingContext, diameterIn: number): FootingEvaluation {
+  const { depthIn, need, controllingCheck, lateralConverged } = footingDepth(ctx, diameterIn);
+  const b = diameterIn / 12;
+  const S = ctx.soil.lateralPsfPerFt;
+  const wp = ctx.pipe.weightLbPerFt;
+  const friction = (ctx.sideFrictionPsf ?? 0) * Math.PI * b;
+  const isUplift = (r: FactoredPostLoad) => r.windUpliftLb > 0 && !r.hasSnow;
+  const deadOf = (r: FactoredPostLoad) => (r.deadFactor ? r.deadResistLb / r.deadFactor : 0);
+  const frostIn = need.frost;
+  const d = depthIn / 12;
+  const concreteLb = pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d);
   // Checks at the design depth: the worst row of each.
   let latWorst = { ratio: -1, row: null as FactoredPostLoad | null };
   for (const r of ctx.lateralRows) {
-    const q = lateralRatio({ ...lat, shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt }, d);
+    const q = lateralRatio({ shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt, diameterFt: b, sPsfPerFt: S, constrained: ctx.constrained }, d);
     if (q > latWorst.ratio) latWorst = { ratio: q, row: r };
   }
-  let upWorst = { demand: 0, cap: 1, row: null as FactoredPostLoad | null };
-  let brgWorst = { psf: 0, row: null as FactoredPostLoad | null };
-  let bendWorst = { m: 0, row: null as FactoredPostLoad | null };
+  let up = { demand: 0, cap: 0, ratio: -1, row: null as FactoredPostLoad | null };
+  let brg = { psf: 0, row: null as FactoredPostLoad | null };
+  let bend = { m: 0, row: null as FactoredPostLoad | null };
   for (const r of ctx.rows) {
-    if (r.windUpliftLb > 0 && !r.hasSnow) {
-      const cap = upliftCap(r, d);
-      if (!upWorst.row || r.windUpliftLb / cap > upWorst.demand / upWorst.cap) upWorst = { demand: r.windUpliftLb, cap, row: r };
+    const pier = concreteLb + wp * (r.postHeightAboveGradeFt + d);
+    if (isUplift(r)) {
+      const cap = r.deadFactor * (pier + deadOf(r)) + friction * d;
+      if (r.windUpliftLb / cap > up.ratio) up = { demand: r.windUpliftLb, cap, ratio: r.windUpliftLb / cap, row: r };
     }
-    const pier = r.deadFactor * (pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d) + ctx.pipe.weightLbPerFt * (r.postHeightAboveGradeFt + d));
-    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: pier, diameterFt: b });
-    if (psf > brgWorst.psf) brgWorst = { psf, row: r };
-    if (Math.abs(r.momentAtGradeLbFt) > bendWorst.m || !bendWorst.row) bendWorst = { m: Math.abs(r.momentAtGradeLbFt), row: r };
+    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * pier, diameterFt: b });
+    if (psf > brg.psf) brg = { psf, row: r };
+    if (Math.abs(r.momentAtGradeLbFt) > bend.m || !bend.row) bend = { m: Math.abs(r.momentAtGradeLbFt), row: r };
   }
-  const latRatio = Math.max(0, latWorst.ratio);
+  const upCap = up.row ? up.cap : 0.6 * (concreteLb + wp * d) + friction * d;
   const checks: FootingCheck[] = [
-    lateralCheck(latWorst.row, latRatio, LATERAL_SOURCE(ctx.constrained), need.lateral),
-    makeCheck("uplift", upWorst.demand, upWorst.row ? upWorst.cap : upliftCapacityLb({ ...upliftArgs(ctx.rows[0]), depthFt: d }), "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upWorst.row && gov(upWorst.row), need.uplift),
+    lateralCheck(latWorst.row, Math.max(0, latWorst.ratio), LATERAL_SOURCE(ctx.constrained), need.lateral),
+    makeCheck("uplift", up.demand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", up.row && gov(up.row), need.uplift),
     makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (frost), §1809.5 (12 in minimum)", null, need.frost),
-    makeCheck("bearing", brgWorst.psf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brgWorst.row && gov(brgWorst.row)),
+    makeCheck("bearing", brg.psf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brg.row && gov(brg.row)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 [memory]", null),
-    makeCheck("postBending", bendWorst.m / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendWorst.row && gov(bendWorst.row)),
+    makeCheck("postBending", bend.m / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bend.row && gov(bend.row)),
   ];
-  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass: checks.every((c) => c.pass), lateralConverged: latNeed.converged };
+  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass: checks.every((c) => c.pass), lateralConverged };
+}
+
+/** Worst bearing ratio at a hole and depth (for sweeps and automatic sizing). */
+export function bearingRatio(ctx: FootingContext, diameterIn: number, depthIn: number): number {
+  const b = diameterIn / 12, d = depthIn / 12;
+  const concreteLb = pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d);
+  let worst = 0;
+  for (const r of ctx.rows) {
+    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * (concreteLb + ctx.pipe.weightLbPerFt * (r.postHeightAboveGradeFt + d)), diameterFt: b });
+    if (psf > worst) worst = psf;
+  }
+  return worst / ctx.soil.verticalPsf;
 }

@@ -3,7 +3,7 @@
  * passes bearing and needs no more than the largest reasonable depth. When none does, the
  * candidate with the shallowest depth is returned with `reasonable: false`.
  */
-import { evaluateFooting, type FootingContext, type FootingEvaluation } from "../footing/evaluate-footing";
+import { bearingRatio, evaluateFooting, footingDepth, type FootingContext, type FootingEvaluation } from "../footing/evaluate-footing";
 
 export function autoDiameter(ctx: FootingContext, candidatesIn: number[], maxDepthIn: number, postOutsideDiameterIn: number): {
   evaluation: FootingEvaluation;
@@ -12,12 +12,11 @@ export function autoDiameter(ctx: FootingContext, candidatesIn: number[], maxDep
   const sorted = [...new Set(candidatesIn)].sort((a, b) => a - b);
   const fitting = sorted.filter((d) => d >= postOutsideDiameterIn + 4 - 1e-9);
   const list = fitting.length ? fitting : [Math.ceil(postOutsideDiameterIn + 4)];
-  let best: FootingEvaluation | null = null;
+  let best = { diameterIn: list[0], depthIn: Infinity };
   for (const d of list) {
-    const ev = evaluateFooting(ctx, d);
-    const bearingOk = ev.checks.find((c) => c.id === "bearing")!.pass;
-    if (ev.depthIn <= maxDepthIn && bearingOk) return { evaluation: ev, reasonable: true };
-    if (!best || ev.depthIn < best.depthIn) best = ev;
+    const { depthIn } = footingDepth(ctx, d);
+    if (depthIn <= maxDepthIn && bearingRatio(ctx, d, depthIn) <= 1 + 1e-9) return { evaluation: evaluateFooting(ctx, d), reasonable: true };
+    if (depthIn < best.depthIn) best = { diameterIn: d, depthIn };
   }
-  return { evaluation: best!, reasonable: false };
+  return { evaluation: evaluateFooting(ctx, best.diameterIn) as FootingEvaluation, reasonable: false };
 }

@@ -5,7 +5,7 @@
  */
 import { concreteForHole } from "../concrete/concrete-for-hole";
 import { concreteOrder } from "../concrete/concrete-order";
-import { evaluateFooting, type FootingContext } from "../footing/evaluate-footing";
+import { bearingRatio, footingDepth, type FootingContext } from "../footing/evaluate-footing";
 import type { CheckId } from "../footing/checks";
 
 export interface SweepRow {
@@ -25,19 +25,22 @@ export interface SweepRow {
 export function diameterSweep(
   ctx: FootingContext,
   diametersIn: number[],
-  job: { holes: number; wasteAllowancePct: number; postOutsideDiameterIn: number; subtractPostDisplacement: boolean },
+  job: { holes: number; wasteAllowancePct: number; postOutsideDiameterIn: number; subtractPostDisplacement: boolean; postBendingPass: boolean },
 ): SweepRow[] {
   return [...new Set(diametersIn)].sort((a, b) => a - b).map((diameterIn) => {
-    const ev = evaluateFooting(ctx, diameterIn);
+    // Sized depth (a given depth does not apply to the sweep): lateral, uplift and frost pass by
+    // construction; bearing and hole size depend on the diameter; post bending does not.
+    const ev = footingDepth(ctx, diameterIn, false);
+    const fitsPost = diameterIn >= job.postOutsideDiameterIn + 4 - 1e-9;
+    const bearingPass = bearingRatio(ctx, diameterIn, ev.depthIn) <= 1 + 1e-9;
     const hole = concreteForHole({
       diameterIn, depthIn: ev.depthIn, unitWeightPcf: ctx.concretePcf,
       postOutsideDiameterIn: job.postOutsideDiameterIn, subtractPostDisplacement: job.subtractPostDisplacement && diameterIn > job.postOutsideDiameterIn,
     });
     const order = concreteOrder({ hole, holes: job.holes, wasteAllowancePct: job.wasteAllowancePct });
-    const check = (id: CheckId) => ev.checks.find((c) => c.id === id)!.pass;
     return {
       diameterIn, depthIn: ev.depthIn, controllingCheck: ev.controllingCheck,
-      fitsPost: check("holeSize"), bearingPass: check("bearing"), allChecksPass: ev.pass,
+      fitsPost, bearingPass, allChecksPass: fitsPost && bearingPass && ev.lateralConverged && job.postBendingPass,
       volumeFt3PerHole: hole.volumeFt3, volumeYd3PerHole: hole.volumeYd3, weightLbPerHole: hole.weightLb,
       bags80LbPerHole: hole.bags80Lb, jobOrderYd3: order.orderYd3,
     };

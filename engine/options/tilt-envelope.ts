@@ -3,7 +3,7 @@
  * chosen hole, and the governing tilt (deepest; ties go to the larger overturning moment).
  * The posts are set for the steepest setting's clearance and the modules pivot about the beam.
  */
-import { evaluateFooting, type FootingContext } from "../footing/evaluate-footing";
+import { footingDepth, type FootingContext } from "../footing/evaluate-footing";
 import type { CheckId } from "../footing/checks";
 import { lateralFrontier } from "../loads/factored";
 
@@ -17,7 +17,7 @@ export interface TiltEnvelopeRow {
 export function tiltEnvelope(ctx: FootingContext, tiltsDeg: number[], diameterIn: number): { rows: TiltEnvelopeRow[]; governingTiltDeg: number } {
   const rows = tiltsDeg.map((tiltDeg) => {
     const mine = ctx.rows.filter((r) => r.tiltDeg === tiltDeg);
-    const ev = evaluateFooting({ ...ctx, rows: mine, lateralRows: lateralFrontier(mine), fixedDepthIn: undefined }, diameterIn);
+    const ev = footingDepth({ ...ctx, rows: mine, lateralRows: lateralFrontier(mine) }, diameterIn, false);
     const maxMomentAtGradeLbFt = mine.reduce((m, r) => Math.max(m, Math.abs(r.momentAtGradeLbFt)), 0);
     return { tiltDeg, requiredDepthIn: ev.depthIn, controllingCheck: ev.controllingCheck, maxMomentAtGradeLbFt };
   });
