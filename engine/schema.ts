@@ -114,6 +114,13 @@ export const designInputSchema = z
   .superRefine((v, ctx) => {
     const alongWidthIn = v.array.orientation === "portrait" ? v.array.moduleWidthIn : v.array.moduleLengthIn;
     const widthFt = (v.array.columns * alongWidthIn + (v.array.columns - 1) * v.array.gapIn) / 12;
+    if (v.posts.spacingFt === undefined) {
+      const min = Math.max(2, Math.ceil(widthFt / 40 - 1e-9));
+      const max = Math.max(2, Math.floor(widthFt + 1e-9));
+      if (v.posts.count < min || v.posts.count > max) {
+        ctx.addIssue({ code: "custom", path: ["posts", "count"], message: `Number of posts must be between ${min} and ${Math.max(min, max)} for the ${widthFt.toFixed(2)} ft wide array (posts 1–40 ft apart)` });
+      }
+    }
     if (v.posts.spacingFt !== undefined && (v.posts.count - 1) * v.posts.spacingFt > widthFt) {
       const max = widthFt / (v.posts.count - 1);
       ctx.addIssue({ code: "custom", path: ["posts", "spacingFt"], message: `Post spacing must be between 1 and ${max.toFixed(2)} ft so the posts fit under the ${widthFt.toFixed(2)} ft wide array` });

@@ -33,6 +33,7 @@ export function collectWarnings(input: DesignInput, states: ArrayLoadState[], ev
   if (input.site.waterTableDepthFt !== undefined && input.site.waterTableDepthFt * 12 < ev.depthIn)
     w("WATER_TABLE", "The footing reaches the water table: buoyant concrete weight was used for uplift; the hole may need casing or tremie concrete.");
   if (ev.depthIn > 144) w("DEPTH_OVER_12_FT", "Footing deeper than 12 ft: S1 is capped at its 12 ft value and the post-in-hole method is being stretched.");
+  if (ev.requiredDepthIn.uplift >= 720 - 1e-6) w("UPLIFT_NOT_CONVERGED", "Uplift needs more than 60 ft of pier: enlarge the hole, add posts, or have the engineer add side friction or an anchor.");
   if (!ev.lateralConverged) w("LATERAL_NOT_CONVERGED", "The lateral check needs more than 60 ft of embedment: enlarge the hole, add posts or revisit the soil values.");
   const frost = ev.checks.find((c) => c.id === "frost")!;
   if (!frost.pass) w("FROST_DEPTH_NOT_MET", `Footing depth ${ev.depthIn} in is above the required ${frost.demand} in (frost depth or 12 in minimum).`);
