@@ -4,6 +4,9 @@ const nextConfig = {
   // PDF/argon2 packages are Node-only as well.
   serverExternalPackages: ["knex", "pg", "@node-rs/argon2", "pdfkit", "maildev", "s3rver"],
   poweredByHeader: false,
+  // The test command runs `tsc --noEmit` over the whole tree (app, engine, db, tests) as its own
+  // step; the build need not repeat it.
+  typescript: { ignoreBuildErrors: true },
   typedRoutes: false,
   // forbidden() renders app/forbidden.tsx with a 403 for members who lack a role.
   experimental: { authInterrupts: true },

@@ -4,7 +4,7 @@
  * on a free port for the browser suite. Ends with "N passed, N failed" and a non-zero exit code
  * on any failure.
  */
-import { spawn } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import crypto from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
@@ -38,6 +38,17 @@ function runVitest(projects: string[], env: NodeJS.ProcessEnv, report: string): 
   return new Promise((resolve) => child.on("exit", (code) => resolve(code ?? 1)));
 }
 
+function typecheckPasses(): boolean {
+  const result = spawnSync(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { cwd: root, stdio: "inherit" });
+  if (result.status === 0) console.log("typecheck: tsc --noEmit passed");
+  else console.log("typecheck: tsc --noEmit FAILED (errors above)");
+  return result.status === 0;
+}
+
+let failedRuns = 0;
+// The type check counts as one test of its own in the closing line.
+const typecheck = { passed: 0, failed: 0 };
+
 async function main(): Promise<number> {
   fs.mkdirSync(reportDir, { recursive: true });
   const { binDir, version } = findServerBinaries({ installIfMissing: true });
@@ -66,7 +77,9 @@ async function main(): Promise<number> {
     PIERWISE_TEST_CLUSTER: JSON.stringify(cluster),
   };
 
-  let failedRuns = (await runVitest(["unit", "integration"], { ...env, NODE_ENV: "test" as const }, path.join(reportDir, "main.json"))) === 0 ? 0 : 1;
+  // Type errors anywhere in the tree fail the run (the build itself skips type-checking).
+  if (filters.length === 0) typecheck[typecheckPasses() ? "passed" : "failed"] += 1;
+  failedRuns += (await runVitest(["unit", "integration"], { ...env, NODE_ENV: "test" as const }, path.join(reportDir, "main.json"))) === 0 ? 0 : 1;
 
   const e2eDir = path.join(root, "tests", "e2e");
   const hasBrowserTests = fs.existsSync(e2eDir) && fs.readdirSync(e2eDir).some((f) => f.endsWith(".test.ts"))
@@ -80,15 +93,17 @@ async function main(): Promise<number> {
     });
     try {
       await waitForHttp(`http://127.0.0.1:${ports.app}/api/health`, 60_000);
-      const status = await runVitest(["e2e"], { ...env, BASE_URL: `http://127.0.0.1:${ports.app}` }, path.join(reportDir, "e2e.json"));
+      const status = await runVitest(["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${ports.app}` }, path.join(reportDir, "e2e.json"));
       if (status !== 0) failedRuns += 1;
     } finally {
       server.kill("SIGTERM");
     }
   }
 
-  const { passed, failed } = countResults(reportDir);
-  const broken = failedRuns > 0 && failed === 0 ? 1 : 0; // a suite that crashed before reporting still fails the run
+  const counted = countResults(reportDir);
+  const passed = counted.passed + typecheck.passed;
+  const failed = counted.failed + typecheck.failed;
+  const broken = failedRuns > 0 && counted.failed === 0 ? 1 : 0; // a suite that crashed before reporting still fails the run
   console.log(`\n${passed} passed, ${failed + broken} failed`);
   return failed + broken > 0 ? 1 : 0;
 }

@@ -2,7 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import type { ActionState } from "@/components/ui/form";
+import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
 
@@ -14,9 +14,10 @@ function safeNext(value: FormDataEntryValue | null): string {
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const parsed = signInSchema.safeParse({ email: form.get("email"), password: form.get("password") });
-  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors };
+  const values = typedValues(form);
+  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   const outcome = await signIn(parsed.data);
-  if (!outcome.ok) return { message: outcome.message };
+  if (!outcome.ok) return { message: outcome.message, values };
   redirect(safeNext(form.get("next")));
 }
 

@@ -10,7 +10,7 @@ export function LoginForm({ next }: { next?: string }) {
   return (
     <form action={action} className="space-y-4" noValidate>
       <input type="hidden" name="next" value={next ?? ""} />
-      <Field label="E-mail" name="email" type="email" autoComplete="email" required error={state.fieldErrors?.email} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" required defaultValue={state.values?.email} error={state.fieldErrors?.email} />
       <Field label="Password" name="password" type="password" autoComplete="current-password" required error={state.fieldErrors?.password} />
       <FormStatus state={state} />
       <div className="flex items-center justify-between">
