@@ -26,7 +26,7 @@ export { pipeAllowableMoment, smallestPipeFor, PIPE_SIZES, STD_PIPE, type PipeSi
 export { soilValues, SOIL_CLASSES, type SoilInput, type SoilValues } from "./footing/soil";
 export { upliftCapacityLb, pierConcreteWeightLb } from "./footing/uplift";
 export { bearingPressurePsf } from "./footing/bearing";
-export type { FootingCheck, CheckId } from "./footing/checks";
+export type { FootingCheck, CheckId, DepthCheckId } from "./footing/checks";
 export { concreteForHole, type HoleConcrete } from "./concrete/concrete-for-hole";
 export { concreteOrder, type ConcreteOrder } from "./concrete/concrete-order";
 export { arrayDimensions } from "./geometry/array-dimensions";

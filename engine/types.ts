@@ -3,7 +3,7 @@
  */
 import type { ConcreteOrder } from "./concrete/concrete-order";
 import type { HoleConcrete } from "./concrete/concrete-for-hole";
-import type { CheckId, FootingCheck, Governing } from "./footing/checks";
+import type { DepthCheckId, FootingCheck, Governing } from "./footing/checks";
 import type { PipeMoment } from "./footing/pipe";
 import type { SoilValues } from "./footing/soil";
 import type { PreviewGeometry } from "./geometry/preview";
@@ -80,7 +80,7 @@ export interface DesignResult {
     depthIn: number;
     depthFt: number;
     depthMode: "sized" | "given";
-    controllingCheck: CheckId;
+    controllingCheck: DepthCheckId;
     requiredDepthIn: Record<"lateral" | "uplift" | "frost", number>;
     checks: FootingCheck[];
     pass: boolean;

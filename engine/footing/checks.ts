@@ -3,6 +3,8 @@
  * tilt and load combination that govern.
  */
 export type CheckId = "lateral" | "uplift" | "frost" | "bearing" | "holeSize" | "postBending";
+/** The checks that set the depth. */
+export type DepthCheckId = "lateral" | "uplift" | "frost";
 
 export interface Governing {
   postId: string;

@@ -8,7 +8,7 @@
  */
 import type { FactoredPostLoad } from "../loads/factored";
 import { bearingPressurePsf } from "./bearing";
-import { makeCheck, type CheckId, type FootingCheck, type Governing } from "./checks";
+import { makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
 import { lateralRatio, requiredLateralDepthFt } from "./embedment";
 import type { PipeMoment } from "./pipe";
 import { roundUpIn } from "./solve-depth";
@@ -33,14 +33,14 @@ export interface FootingContext {
 export interface FootingDepth {
   depthIn: number;
   need: Record<"lateral" | "uplift" | "frost", number>;
-  controllingCheck: CheckId;
+  controllingCheck: DepthCheckId;
   lateralConverged: boolean;
 }
 
 export interface FootingEvaluation {
   diameterIn: number;
   depthIn: number;
-  controllingCheck: CheckId;
+  controllingCheck: DepthCheckId;
   requiredDepthIn: Record<"lateral" | "uplift" | "frost", number>;
   checks: FootingCheck[];
   pass: boolean;

@@ -6,12 +6,12 @@
 import { concreteForHole } from "../concrete/concrete-for-hole";
 import { concreteOrder } from "../concrete/concrete-order";
 import { bearingRatio, footingDepth, type FootingContext } from "../footing/evaluate-footing";
-import type { CheckId } from "../footing/checks";
+import type { DepthCheckId } from "../footing/checks";
 
 export interface SweepRow {
   diameterIn: number;
   depthIn: number;
-  controllingCheck: CheckId;
+  controllingCheck: DepthCheckId;
   fitsPost: boolean;
   bearingPass: boolean;
   allChecksPass: boolean;

@@ -4,13 +4,13 @@
  * The posts are set for the steepest setting's clearance and the modules pivot about the beam.
  */
 import { footingDepth, type FootingContext } from "../footing/evaluate-footing";
-import type { CheckId } from "../footing/checks";
+import type { DepthCheckId } from "../footing/checks";
 import { lateralFrontier } from "../loads/factored";
 
 export interface TiltEnvelopeRow {
   tiltDeg: number;
   requiredDepthIn: number;
-  controllingCheck: CheckId;
+  controllingCheck: DepthCheckId;
   maxMomentAtGradeLbFt: number;
 }
 
