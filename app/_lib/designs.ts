@@ -1,0 +1,68 @@
+import { ZodError } from "zod";
+import { DesignInputError, EngineInputError, ENGINE_VERSION, sizeParsedDesign, type DesignInput, type DesignResult } from "@/engine";
+import { getCriteriaCard, type CriteriaCard } from "@/db/queries/criteria-cards";
+import { getDesign, type Design } from "@/db/queries/designs";
+import { getProject, type Project } from "@/db/queries/projects";
+import { createRevision, getRevision, StaleRevisionError, type Revision } from "@/db/queries/revisions";
+import { ConflictError } from "./api";
+import { assertOwned, assertRole, type CurrentUser } from "./auth";
+
+/**
+ * Loading a project, design or revision for the signed-in member (404 when it is another
+ * organisation's), and saving a revision: validate, size with the engine, insert in one transaction.
+ */
+export type DesignRevision = Revision<DesignInput, DesignResult>;
+
+export async function projectFor(user: CurrentUser, id: string): Promise<Project> {
+  return assertOwned(user, isUuid(id) ? await getProject(id) : undefined, "That project");
+}
+
+export async function designFor(user: CurrentUser, id: string): Promise<Design> {
+  return assertOwned(user, isUuid(id) ? await getDesign(id) : undefined, "That design");
+}
+
+export async function revisionFor(user: CurrentUser, id: string): Promise<DesignRevision> {
+  return assertOwned(user, isUuid(id) ? await getRevision<DesignInput, DesignResult>(id) : undefined, "That revision");
+}
+
+export async function cardFor(user: CurrentUser, id: string | null): Promise<CriteriaCard | null> {
+  if (!id) return null;
+  return assertOwned(user, isUuid(id) ? await getCriteriaCard(id) : undefined, "That criteria card");
+}
+
+/** Designers and admins write; engineers and installers of the organisation read. */
+export function assertCanWrite(user: CurrentUser): void {
+  assertRole(user, "designer", "admin");
+}
+
+export function isUuid(value: string): boolean {
+  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
+}
+
+/** Runs the engine; a range only the engine knows about becomes a 422 naming the field (under `prefix`). */
+export function computeResult(input: DesignInput, prefix: string[] = []): DesignResult {
+  try {
+    return sizeParsedDesign(input);
+  } catch (error) {
+    if (error instanceof DesignInputError || error instanceof EngineInputError) {
+      throw new ZodError(error.issues.map((i) => ({ code: "custom" as const, path: [...prefix, ...i.path.split(".")], message: i.message, input: undefined })));
+    }
+    throw error;
+  }
+}
+
+/** Saves the next revision of a design from `baseRevisionId`; a stale base is a 409 naming the latest. */
+export async function saveRevision(user: CurrentUser, design: Design, body: { baseRevisionId: string; input: DesignInput; note: string }) {
+  const result = computeResult(body.input, ["input"]);
+  try {
+    return await createRevision({
+      designId: design.id, organisationId: design.organisationId, baseRevisionId: body.baseRevisionId,
+      input: body.input, result, engineVersion: ENGINE_VERSION, note: body.note, authorId: user.userId,
+    });
+  } catch (error) {
+    if (error instanceof StaleRevisionError) {
+      throw new ConflictError(error.message, { latestRevisionId: error.latest?.id ?? null, latestNumber: error.latest?.number ?? null });
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,36 @@
+import { apiRoute } from "@/app/_lib/api";
+import { assertOwned, requireUser } from "@/app/_lib/auth";
+import { isUuid, projectFor } from "@/app/_lib/designs";
+import { getObject } from "@/app/_lib/storage";
+import { getProjectFile } from "@/db/queries/project-files";
+
+export const dynamic = "force-dynamic";
+type Context = { params: Promise<{ projectId: string; fileId: string }> };
+
+/**
+ * Download an upload (or `?variant=thumbnail` for a photo's thumbnail) after the access check.
+ * Photos open in the browser; PDFs download. The stored, sniffed type is sent with nosniff.
+ */
+export const GET = apiRoute<Context>(async (request, { params }) => {
+  const user = await requireUser();
+  const { projectId, fileId } = await params;
+  const project = await projectFor(user, projectId);
+  const found = isUuid(fileId) ? await getProjectFile(fileId) : undefined;
+  const file = assertOwned(user, found && found.projectId === project.id ? found : undefined, "That file");
+  const wantsThumbnail = new URL(request.url).searchParams.get("variant") === "thumbnail";
+  if (wantsThumbnail && !file.thumbnailKey) return Response.json({ errors: [{ path: "variant", message: "Only photos have thumbnails" }] }, { status: 404 });
+  const object = await getObject(wantsThumbnail ? file.thumbnailKey! : file.objectKey);
+  const contentType = wantsThumbnail ? "image/webp" : file.contentType;
+  const disposition = file.kind === "photo" ? "inline" : "attachment";
+  const asciiName = file.originalName.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
+  return new Response(object.body as BodyInit, {
+    headers: {
+      "content-type": contentType,
+      "content-length": String(object.body.byteLength),
+      "content-disposition": `${disposition}; filename="${asciiName}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
+      "x-content-type-options": "nosniff",
+      "cache-control": "private, max-age=300",
+      "content-security-policy": "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; sandbox",
+    },
+  });
+});

@@ -1,0 +1,82 @@
+import { db } from "../client";
+import { listPage, type ListPage, type ListQuery } from "./list-page";
+
+/** A customer site. */
+export interface Project {
+  id: string;
+  organisationId: string;
+  name: string;
+  address: string;
+  state: string;
+  latitude: number | null;
+  longitude: number | null;
+  notes: string;
+  criteriaCardId: string | null;
+  createdAt: Date;
+  updatedAt: Date;
+}
+
+export interface ProjectFields {
+  name: string;
+  address: string;
+  state: string;
+  latitude: number | null;
+  longitude: number | null;
+  notes: string;
+  criteriaCardId: string | null;
+}
+
+export interface ProjectRow {
+  id: string;
+  name: string;
+  address: string;
+  state: string;
+  jurisdiction: string | null;
+  designCount: number;
+  updatedAt: string;
+}
+
+const columns = [
+  "id", "organisation_id as organisationId", "name", "address", "state", "latitude", "longitude", "notes",
+  "criteria_card_id as criteriaCardId", "created_at as createdAt", "updated_at as updatedAt",
+];
+
+export async function getProject(id: string): Promise<Project | undefined> {
+  return db("projects").where({ id }).first(columns);
+}
+
+export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "\"designCount\"", updatedAt: "p.updated_at" } as const;
+
+/** One page of the organisation's projects with their criteria card and design count. */
+export async function listProjects(organisationId: string, query: ListQuery): Promise<ListPage<ProjectRow>> {
+  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").where("p.organisation_id", organisationId);
+  const page = await listPage<ProjectRow>(base, query, {
+    sortable: PROJECT_SORTS,
+    defaultSort: "updatedAt",
+    defaultDir: "desc",
+    search: ["p.name", "p.address", "p.state", "c.jurisdiction"],
+    select: (qb) =>
+      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt",
+        db.raw("(select count(*)::int from designs d where d.project_id = p.id) as \"designCount\"")),
+  });
+  return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
+}
+
+const toRow = (f: Partial<ProjectFields>) => ({
+  ...(f.name !== undefined && { name: f.name }),
+  ...(f.address !== undefined && { address: f.address }),
+  ...(f.state !== undefined && { state: f.state }),
+  ...(f.latitude !== undefined && { latitude: f.latitude }),
+  ...(f.longitude !== undefined && { longitude: f.longitude }),
+  ...(f.notes !== undefined && { notes: f.notes }),
+  ...(f.criteriaCardId !== undefined && { criteria_card_id: f.criteriaCardId }),
+});
+
+export async function createProject(organisationId: string, createdBy: string, fields: ProjectFields): Promise<string> {
+  const [row] = await db("projects").insert({ ...toRow(fields), organisation_id: organisationId, created_by: createdBy }).returning("id");
+  return row.id;
+}
+
+export async function updateProject(id: string, fields: Partial<ProjectFields>): Promise<void> {
+  await db("projects").where({ id }).update({ ...toRow(fields), updated_at: db.fn.now() });
+}

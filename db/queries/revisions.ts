@@ -1,0 +1,147 @@
+import crypto from "node:crypto";
+import type { Knex } from "knex";
+import { db } from "../client";
+import { listPage, type ListPage, type ListQuery } from "./list-page";
+
+/**
+ * Revisions: every saved state of a design. A revision is written once, by `createRevision`, and
+ * never updated or deleted from the app (review and approval add their own tables on top). The
+ * stale-base check and the insert share one transaction with the design row locked, so two saves
+ * from the same base cannot both win and a failure leaves no half revision.
+ */
+export type RevisionStatus = "draft" | "in_review" | "approved" | "changes_requested";
+
+export const REVISION_STATUS_LABELS: Record<RevisionStatus, string> = {
+  draft: "Draft",
+  in_review: "In review",
+  approved: "Approved",
+  changes_requested: "Changes requested",
+};
+
+export interface Revision<I = unknown, R = unknown> {
+  id: string;
+  designId: string;
+  organisationId: string;
+  number: number;
+  input: I;
+  result: R;
+  engineVersion: string;
+  contentHash: string;
+  status: RevisionStatus;
+  note: string;
+  authorId: string | null;
+  authorName: string | null;
+  createdAt: Date;
+}
+
+export interface RevisionRow {
+  id: string;
+  number: number;
+  status: RevisionStatus;
+  note: string;
+  authorName: string | null;
+  createdAt: string;
+  engineVersion: string;
+  depthIn: number | null;
+  diameterIn: number | null;
+  pass: boolean | null;
+}
+
+/** Saving against a revision that is no longer the design's latest. */
+export class StaleRevisionError extends Error {
+  constructor(readonly latest: { id: string; number: number } | null) {
+    super(
+      latest
+        ? `This design was saved by someone else as revision ${latest.number} since you opened it. Reload to see it; your typed values stay in the form until you do.`
+        : "This design has no revisions to build on.",
+    );
+    this.name = "StaleRevisionError";
+  }
+}
+
+/** JSON with object keys sorted at every level, so equal content always hashes the same. */
+export function canonicalJson(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(",")}]`;
+  if (value && typeof value === "object") {
+    const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+    return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(",")}}`;
+  }
+  return JSON.stringify(value ?? null);
+}
+
+/** sha256 over the input, the result and the engine version: what a reviewer or a field spec can quote to prove "this exact design". */
+export function contentHash(input: unknown, result: unknown, engineVersion: string): string {
+  return crypto.createHash("sha256").update(canonicalJson({ engineVersion, input, result })).digest("hex");
+}
+
+const columns = [
+  "r.id", "r.design_id as designId", "r.organisation_id as organisationId", "r.number", "r.input", "r.result",
+  "r.engine_version as engineVersion", "r.content_hash as contentHash", "r.status", "r.note", "r.author_id as authorId",
+  "u.name as authorName", "r.created_at as createdAt",
+];
+
+export interface NewRevision {
+  designId: string;
+  organisationId: string;
+  /** The revision the author started from; null only for a design's first revision. */
+  baseRevisionId: string | null;
+  input: unknown;
+  result: unknown;
+  engineVersion: string;
+  note: string;
+  authorId: string;
+}
+
+/**
+ * The one way a revision is made. Locks the design, refuses a stale base (StaleRevisionError),
+ * and inserts revision number latest + 1, all in one transaction (`conn` may be an open one).
+ */
+export async function createRevision(a: NewRevision, conn: Knex | Knex.Transaction = db): Promise<{ id: string; number: number; contentHash: string; createdAt: Date }> {
+  return conn.transaction(async (trx) => {
+    const design = await trx("designs").where({ id: a.designId, organisation_id: a.organisationId }).forUpdate().first("id");
+    if (!design) throw new Error(`design ${a.designId} not found in organisation ${a.organisationId}`);
+    const latest: { id: string; number: number } | undefined = await trx("revisions").where({ design_id: a.designId }).orderBy("number", "desc").first("id", "number");
+    if ((latest?.id ?? null) !== a.baseRevisionId) throw new StaleRevisionError(latest ?? null);
+    const hash = contentHash(a.input, a.result, a.engineVersion);
+    const [row] = await trx("revisions")
+      .insert({
+        design_id: a.designId, organisation_id: a.organisationId, number: (latest?.number ?? 0) + 1,
+        input: JSON.stringify(a.input), result: JSON.stringify(a.result), engine_version: a.engineVersion,
+        content_hash: hash, note: a.note, author_id: a.authorId,
+      })
+      .returning(["id", "number", "created_at as createdAt"]);
+    return { id: row.id, number: row.number, contentHash: hash, createdAt: row.createdAt };
+  });
+}
+
+export async function getRevision<I = unknown, R = unknown>(id: string): Promise<Revision<I, R> | undefined> {
+  return db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.id", id).first(columns);
+}
+
+export async function latestRevision<I = unknown, R = unknown>(designId: string): Promise<Revision<I, R> | undefined> {
+  return db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.design_id", designId).orderBy("r.number", "desc").first(columns);
+}
+
+/** Every revision's id and number, newest first (for pickers such as the diff view). */
+export async function revisionNumbers(designId: string): Promise<{ id: string; number: number; createdAt: Date }[]> {
+  return db("revisions").where({ design_id: designId }).orderBy("number", "desc").select("id", "number", "created_at as createdAt");
+}
+
+export const REVISION_SORTS = { number: "r.number", status: "r.status", authorName: "u.name", createdAt: "r.created_at", depthIn: "(r.result->'footing'->>'depthIn')::float" } as const;
+
+/** One page of a design's revisions, without the heavy input and result (only the footing headline). */
+export async function listRevisions(designId: string, query: ListQuery = {}): Promise<ListPage<RevisionRow>> {
+  const base = db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.design_id", designId);
+  const page = await listPage<RevisionRow & { createdAt: Date }>(base, query, {
+    sortable: REVISION_SORTS,
+    defaultSort: "number",
+    defaultDir: "desc",
+    search: ["r.note", "u.name", "r.status", "r.number"],
+    select: (qb) =>
+      qb.select("r.id", "r.number", "r.status", "r.note", "u.name as authorName", "r.created_at as createdAt", "r.engine_version as engineVersion",
+        db.raw("(r.result->'footing'->>'depthIn')::float as \"depthIn\""),
+        db.raw("(r.result->'footing'->>'diameterIn')::float as \"diameterIn\""),
+        db.raw("(r.result->'footing'->>'pass')::boolean as pass")),
+  });
+  return { ...page, rows: page.rows.map((r) => ({ ...r, createdAt: new Date(r.createdAt).toISOString() })) };
+}
