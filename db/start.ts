@@ -67,6 +67,12 @@ async function main(): Promise<void> {
   process.on("SIGINT", () => void shutdown(0));
   process.on("SIGTERM", () => void shutdown(0));
 
+  // Refuse early, before touching the database, when a port we need is taken.
+  await assertPortFree(ports.app, "the web app", "PORT");
+  await assertPortFree(ports.smtp, "mail stand-in SMTP", "PIERWISE_SMTP_PORT");
+  await assertPortFree(ports.mailWeb, "mail viewer", "PIERWISE_MAIL_WEB_PORT");
+  await assertPortFree(ports.s3, "file store stand-in", "PIERWISE_S3_PORT");
+
   const { binDir, version } = findServerBinaries({ installIfMissing: true });
   cluster = { binDir, version, dataDir: path.join(dataDir, "pg"), port: ports.pg };
   const made = ensureCluster(cluster, { throwaway: false });
@@ -93,10 +99,6 @@ async function main(): Promise<void> {
     await migrator.destroy();
   }
 
-  await assertPortFree(ports.app, "the web app", "PORT");
-  await assertPortFree(ports.smtp, "mail stand-in SMTP", "PIERWISE_SMTP_PORT");
-  await assertPortFree(ports.mailWeb, "mail viewer", "PIERWISE_MAIL_WEB_PORT");
-  await assertPortFree(ports.s3, "file store stand-in", "PIERWISE_S3_PORT");
   standIns = await startStandIns({
     smtpPort: ports.smtp,
     mailWebPort: ports.mailWeb,
