@@ -28,6 +28,9 @@ vi.mock("next/headers", () => ({
   headers: async () => new Headers([...requestHeaders.entries()]),
 }));
 
+// next.config's experimental.authInterrupts, which `next build` passes to forbidden()/unauthorized().
+process.env.__NEXT_EXPERIMENTAL_AUTH_INTERRUPTS = "true";
+
 vi.mock("next/cache", () => ({
   revalidatePath: () => undefined,
   revalidateTag: () => undefined,

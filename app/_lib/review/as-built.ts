@@ -1,0 +1,118 @@
+import { randomUUID } from "node:crypto";
+import { z } from "zod";
+import { ConflictError } from "@/app/_lib/api";
+import { assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { env } from "@/app/_lib/env";
+import { sendMail } from "@/app/_lib/mail";
+import { deleteObject, putObject } from "@/app/_lib/storage";
+import type { DesignResult } from "@/engine";
+import { db } from "@/db/client";
+import { GROUND_FOUND, insertAsBuilt, type GroundFound } from "@/db/queries/as-built";
+import { recordAudit } from "@/db/queries/audit";
+import { insertHold } from "@/db/queries/holds";
+import { userEmailAndName } from "@/db/queries/review-people";
+import { reviewsOfRevision } from "@/db/queries/reviews";
+import { ownedRevision } from "./workflow";
+
+export const GROUND_FOUND_LABELS: Record<GroundFound, string> = {
+  as_expected: "As expected",
+  rock: "Rock",
+  water: "Water in the hole",
+  fill: "Fill or loose soil",
+  caving: "Caving sides",
+};
+
+const number = (label: string, min: number, max: number) =>
+  z.coerce.number({ error: `${label} must be a number between ${min} and ${max} in` })
+    .min(min, { error: `${label} must be between ${min} and ${max} in` })
+    .max(max, { error: `${label} must be between ${min} and ${max} in` });
+
+/** One hole as the crew measured it. */
+export const asBuiltSchema = z.object({
+  postId: z.string({ error: "Choose the post this hole is for" }).min(1, { error: "Choose the post this hole is for" }),
+  measuredDiameterIn: number("Measured diameter", 4, 120),
+  measuredDepthIn: number("Measured depth", 1, 720),
+  groundFound: z.enum(GROUND_FOUND, { error: "Ground found must be one of: as expected, rock, water, fill, caving" }),
+  notes: z.string().max(2000, { error: "Notes must be at most 2000 characters" }).default(""),
+});
+export type AsBuiltInput = z.output<typeof asBuiltSchema>;
+
+export const PHOTO_LIMITS = { count: 6, bytes: 10 * 1024 * 1024 };
+
+/**
+ * Why this hole stops the job, if it does: shallower or narrower than specified, or ground that
+ * contradicts the presumed soil (the design's soil values and frost depth assumed none of these).
+ */
+export function holdReasons(result: DesignResult, entry: AsBuiltInput): string[] {
+  const reasons: string[] = [];
+  const spec = result.field.posts.find((p) => p.id === entry.postId);
+  const depthIn = spec?.embedmentIn ?? result.footing.depthIn;
+  if (entry.measuredDepthIn < depthIn) reasons.push(`Hole ${entry.postId} is ${entry.measuredDepthIn} in deep, shallower than the ${depthIn} in specified.`);
+  if (entry.measuredDiameterIn < result.footing.diameterIn) reasons.push(`Hole ${entry.postId} is ${entry.measuredDiameterIn} in across, narrower than the ${result.footing.diameterIn} in specified.`);
+  if (entry.groundFound !== "as_expected") {
+    reasons.push(`Hole ${entry.postId}: ${GROUND_FOUND_LABELS[entry.groundFound].toLowerCase()} found, which contradicts the presumed soil and frost depth the design assumed.`);
+  }
+  return reasons;
+}
+
+/**
+ * Records a hole of an approved revision, with photos. When the hole contradicts the spec, the
+ * design goes on hold and the approving engineer and the designer are e-mailed.
+ */
+export async function recordAsBuilt(user: CurrentUser, revisionId: string, input: AsBuiltInput, photos: File[]): Promise<{ entryId: string; holdId: string | null; reasons: string[] }> {
+  const revision = await ownedRevision(user, revisionId);
+  assertRole(user, "installer", "engineer");
+  if (revision.status !== "approved") throw new ConflictError("As-built entries are recorded only against an approved revision.");
+  if (!revision.result.field.posts.some((p) => p.id === input.postId)) {
+    throw new z.ZodError([{ code: "custom", path: ["postId"], message: `Post must be one of ${revision.result.field.posts.map((p) => p.id).join(", ")}`, input: input.postId }]);
+  }
+  const real = photos.filter((p) => p.size > 0);
+  if (real.length > PHOTO_LIMITS.count) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `Attach at most ${PHOTO_LIMITS.count} photos per hole`, input: undefined }]);
+  for (const p of real) {
+    if (!p.type.startsWith("image/")) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `${p.name} is not a photo: attach JPEG, PNG or other image files`, input: undefined }]);
+    if (p.size > PHOTO_LIMITS.bytes) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `${p.name} is over 10 MB: attach photos up to 10 MB each`, input: undefined }]);
+  }
+  const keys: string[] = [];
+  try {
+    for (const p of real) {
+      const key = `orgs/${user.organisationId}/revisions/${revisionId}/as-built/${randomUUID()}`;
+      await putObject(key, new Uint8Array(await p.arrayBuffer()), p.type);
+      keys.push(key);
+    }
+    const reasons = holdReasons(revision.result, input);
+    const out = await db.transaction(async (trx) => {
+      const entryId = await insertAsBuilt(trx, { ...input, revisionId, organisationId: user.organisationId, photoKeys: keys, recordedBy: user.userId });
+      const holdId = reasons.length
+        ? await insertHold(trx, { designId: revision.designId, organisationId: user.organisationId, revisionId, asBuiltEntryId: entryId, reason: reasons.join(" "), raisedBy: user.userId })
+        : null;
+      return { entryId, holdId };
+    });
+    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: out.holdId ? "design-held" : "as-built-recorded", subject: revisionId, detail: { postId: input.postId } });
+    if (out.holdId) await mailHold(revisionId, revision.designName, revision.projectName, user.name, reasons);
+    return { ...out, reasons };
+  } catch (error) {
+    // A failed save leaves no orphaned photos behind.
+    await Promise.allSettled(keys.map((k) => deleteObject(k)));
+    throw error;
+  }
+}
+
+async function mailHold(revisionId: string, designName: string, projectName: string, raisedBy: string, reasons: string[]): Promise<void> {
+  const reviews = await reviewsOfRevision(revisionId);
+  const people = new Set<string>();
+  for (const r of reviews) {
+    if (r.decision === "approve" && r.decidedBy) people.add(r.decidedBy);
+    people.add(r.submittedBy);
+  }
+  const text = [
+    `${raisedBy} recorded a hole on "${designName}" (${projectName}) that does not match the approved spec:`,
+    ...reasons.map((r) => `- ${r}`),
+    "",
+    "The design is ON HOLD: no concrete is to be placed until an engineer reviews it and clears the hold.",
+    `Review: ${env.appUrl}/reviews/${revisionId}`,
+  ].join("\n");
+  for (const id of people) {
+    const person = await userEmailAndName(id);
+    if (person) await sendMail({ to: person.email, subject: `On hold: ${designName} (${projectName})`, text });
+  }
+}

@@ -1,0 +1,135 @@
+import { ZodError } from "zod";
+import { ConflictError } from "@/app/_lib/api";
+import { AccessError, assertOwned, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { env } from "@/app/_lib/env";
+import { sendMail } from "@/app/_lib/mail";
+import { db } from "@/db/client";
+import { recordAudit } from "@/db/queries/audit";
+import { activeMember, userEmailAndName } from "@/db/queries/review-people";
+import {
+  designAuthorIds, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
+  reviewsOfRevision, setRevisionStatus, type RevisionContext,
+} from "@/db/queries/reviews";
+import { engineerEligibility, licenceEligibility } from "./eligibility";
+import type { ReviewBody } from "./schemas";
+
+const STATUS_WORDS = { draft: "a draft", in_review: "in review", approved: "approved", changes_requested: "marked changes requested" } as const;
+
+function invalid(path: string, message: string): ZodError {
+  return new ZodError([{ code: "custom", path: path.split("."), message, input: undefined }]);
+}
+
+/** Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). */
+export async function ownedRevision(user: CurrentUser, revisionId: string): Promise<RevisionContext> {
+  return assertOwned(user, await getRevisionContext(revisionId), "That revision");
+}
+
+export function reviewUrl(revisionId: string): string {
+  return `${env.appUrl}/reviews/${revisionId}`;
+}
+
+/**
+ * A designer sends a draft (or a revision with changes requested) to one of the organisation's
+ * engineers. The revision must be the design's newest; the engineer must be able to decide it.
+ */
+export async function submitRevision(user: CurrentUser, revisionId: string, engineerId: string): Promise<{ reviewId: string }> {
+  const revision = await ownedRevision(user, revisionId);
+  assertRole(user, "designer");
+  const engineer = await activeMember(user.organisationId, engineerId);
+  if (!engineer || !engineer.roles.includes("engineer")) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation");
+  if (engineer.userId === user.userId) throw invalid("engineerId", "Choose another engineer: nobody can review their own design");
+  if ((await designAuthorIds(revision.designId)).includes(engineer.userId)) {
+    throw invalid("engineerId", `${engineer.name} authored a revision of this design and cannot review it; choose another engineer`);
+  }
+  const eligible = await engineerEligibility(engineer.userId, engineer.name, revision.projectState);
+  if (!eligible.ok) throw invalid("engineerId", eligible.message);
+
+  const reviewId = await db.transaction(async (trx) => {
+    const status = await lockRevisionStatus(trx, revisionId);
+    if (status !== "draft" && status !== "changes_requested") {
+      throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+    }
+    const latest = await latestRevisionNumber(revision.designId, trx);
+    if (latest !== revision.number) throw new ConflictError(`Revision ${revision.number} is not the newest (revision ${latest} is); submit the newest revision.`);
+    await setRevisionStatus(trx, revisionId, ["draft", "changes_requested"], "in_review");
+    return insertReview(trx, { revisionId, organisationId: user.organisationId, engineerId: engineer.userId, submittedBy: user.userId });
+  });
+  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "revision-submitted", subject: revisionId, detail: { engineerId } });
+  await sendMail({
+    to: engineer.email,
+    subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
+    text: [
+      `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
+      "",
+      `Open the review: ${reviewUrl(revisionId)}`,
+      "",
+      "You can approve it or request changes with comments pinned to the inputs.",
+    ].join("\n"),
+  });
+  return { reviewId };
+}
+
+/**
+ * The engineer's decision on a revision in review. Both decisions need an engineer licensed in
+ * the project's state who authored no revision of the design. Approval records name, licence
+ * number, state and time; from then on the database refuses any change to the revision.
+ */
+export async function decideRevision(
+  user: CurrentUser,
+  revisionId: string,
+  body: ReviewBody,
+  letterFileKey: string | null = null,
+): Promise<{ status: "approved" | "changes_requested" }> {
+  const revision = await ownedRevision(user, revisionId);
+  assertRole(user, "engineer");
+  if ((await designAuthorIds(revision.designId)).includes(user.userId)) {
+    throw new AccessError(403, body.decision === "approve" ? "You cannot approve a design you authored." : "You cannot review a design you authored.");
+  }
+  const eligible = await licenceEligibility(user.userId, revision.projectState);
+  if (!eligible.ok) throw new AccessError(403, eligible.message);
+  const inputKeys = new Set(flattenKeys(revision.input));
+  body.comments.forEach((c, i) => {
+    if (c.fieldPath && !inputKeys.has(c.fieldPath)) throw invalid(`comments.${i}.fieldPath`, `"${c.fieldPath}" is not an input of this revision; pin the comment to an input shown on the page or leave it unpinned`);
+  });
+
+  const to = body.decision === "approve" ? "approved" : "changes_requested";
+  const submittedBy = await db.transaction(async (trx) => {
+    const status = await lockRevisionStatus(trx, revisionId);
+    if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+    const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
+    if (!open) throw new ConflictError("This revision has no open review to decide.");
+    await recordDecision(trx, open.id, {
+      decision: body.decision === "approve" ? "approve" : "request_changes",
+      decidedBy: user.userId,
+      engineerName: user.name,
+      licence: { number: eligible.licence.licenceNumber, state: eligible.licence.state, expiresOn: eligible.licence.expiresOn },
+      letterFileKey,
+      comments: body.comments,
+    });
+    await setRevisionStatus(trx, revisionId, ["in_review"], to);
+    return open.submittedBy;
+  });
+  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId });
+  const designer = await userEmailAndName(submittedBy);
+  if (designer) {
+    const words = to === "approved" ? "approved" : "sent back with changes requested";
+    await sendMail({
+      to: designer.email,
+      subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
+      text: [
+        `${user.name} (licence ${eligible.licence.licenceNumber}, ${eligible.licence.state}) ${words} revision ${revision.number} of "${revision.designName}" (${revision.projectName}).`,
+        ...(body.comments.length ? ["", "Comments:", ...body.comments.map((c) => `- ${c.fieldPath ? `[${c.fieldPath}] ` : ""}${c.body}`)] : []),
+        "",
+        `Open the review: ${reviewUrl(revisionId)}`,
+        ...(to === "approved" ? [`Field spec for the crew: ${env.appUrl}/field/${revisionId}`] : []),
+      ].join("\n"),
+    });
+  }
+  return { status: to };
+}
+
+/** Every leaf path of an input object ("site.soil.soilClass"), for pinning comments. */
+export function flattenKeys(value: unknown, prefix = ""): string[] {
+  if (value === null || typeof value !== "object" || Array.isArray(value)) return prefix ? [prefix] : [];
+  return Object.entries(value as Record<string, unknown>).flatMap(([k, v]) => flattenKeys(v, prefix ? `${prefix}.${k}` : k));
+}
