@@ -1,0 +1,81 @@
+import type { DesignInput, DesignResult } from "@/engine";
+import { fieldLabel, FIELD_META } from "./fields";
+import type { UnitKind } from "./units";
+
+/**
+ * What changed between two revisions, in inputs and in results, as rows a person reads:
+ * "Footing depth 5.50 → 6.00 ft". Pure: the diff page and the tests share it.
+ */
+export type DiffValue = number | string | boolean | null;
+
+export interface DiffRow {
+  path: string;
+  label: string;
+  unit?: UnitKind;
+  from: DiffValue;
+  to: DiffValue;
+}
+
+/** Leaf values of an object by dotted path; lists become "12, 18, 24". */
+export function flatten(value: unknown, prefix = ""): Record<string, DiffValue> {
+  const out: Record<string, DiffValue> = {};
+  if (Array.isArray(value)) out[prefix] = value.join(", ");
+  else if (value && typeof value === "object") {
+    for (const [k, v] of Object.entries(value)) Object.assign(out, flatten(v, prefix ? `${prefix}.${k}` : k));
+  } else if (prefix) out[prefix] = (value ?? null) as DiffValue;
+  return out;
+}
+
+const same = (a: DiffValue, b: DiffValue) => (typeof a === "number" && typeof b === "number" ? Math.abs(a - b) < 1e-9 : a === b);
+
+export function inputChanges(from: DesignInput, to: DesignInput): DiffRow[] {
+  const a = flatten(from);
+  const b = flatten(to);
+  const order = Object.keys(FIELD_META);
+  const paths = [...new Set([...Object.keys(a), ...Object.keys(b)])].sort((x, y) => rank(order, x) - rank(order, y));
+  return paths
+    .filter((p) => !same(a[p] ?? null, b[p] ?? null))
+    .map((p) => ({ path: p, label: fieldLabel(p), unit: FIELD_META[p]?.unit, from: a[p] ?? null, to: b[p] ?? null }));
+}
+
+function rank(order: string[], path: string): number {
+  const i = order.indexOf(path);
+  return i === -1 ? order.length : i;
+}
+
+/** The result figures a designer, engineer or crew lead compares between revisions. */
+export function resultFigures(r: DesignResult): DiffRow[] {
+  const row = (path: string, label: string, value: DiffValue, unit?: UnitKind): DiffRow => ({ path, label, unit, from: value, to: value });
+  const rows: DiffRow[] = [
+    row("footing.depthFt", "Footing depth", r.footing.depthFt, "ft"),
+    row("footing.diameterIn", "Hole diameter", r.footing.diameterIn, "in"),
+    row("footing.controllingCheck", "Check that sets the depth", r.footing.controllingCheck),
+    row("footing.pass", "All footing checks pass", r.footing.pass),
+    ...r.footing.checks.map((c) => row(`footing.checks.${c.id}.ratio`, `Utilisation: ${c.title}`, round(c.ratio, 2))),
+    row("governingLoads.shear", "Governing shear at grade", r.governingLoads.shear.valueLb ?? null, "lb"),
+    row("governingLoads.moment", "Governing moment at grade", r.governingLoads.moment.valueLbFt ?? null, "lbFt"),
+    row("governingLoads.uplift", "Governing uplift", r.governingLoads.uplift?.valueLb ?? null, "lb"),
+    row("wind.velocity.qzWithKdPsf", "Velocity pressure qh", r.wind.velocity.qzWithKdPsf, "psf"),
+    row("geometry.postTopFt", "Post top above grade", r.geometry.postTopFt, "ft"),
+    row("geometry.highestEdgeFt", "Highest panel edge", r.geometry.highestEdgeFt, "ft"),
+    row("concrete.perHole.volumeFt3", "Concrete per hole", r.concrete.perHole.volumeFt3, "ft3"),
+    row("concrete.job.orderYd3", "Concrete to order", r.concrete.job.orderYd3, "yd3"),
+    row("concrete.job.bags80Lb", "80-lb bags for the job", r.concrete.job.bags80Lb),
+    row("footing.suggestedPipeSize", "Smallest pipe that carries the moment", r.footing.suggestedPipeSize),
+    row("warnings", "Warnings", r.warnings.map((w) => w.code).sort().join(", ") || "none"),
+    row("engineVersion", "Engine version", r.engineVersion),
+  ];
+  return rows;
+}
+
+function round(x: number, d: number): number {
+  return Number.isFinite(x) ? Math.round(x * 10 ** d) / 10 ** d : x;
+}
+
+export function resultChanges(from: DesignResult, to: DesignResult): { changed: DiffRow[]; unchanged: DiffRow[] } {
+  const a = resultFigures(from);
+  const b = new Map(resultFigures(to).map((r) => [r.path, r]));
+  const rows = a.map((r) => ({ ...r, to: b.get(r.path)?.to ?? null }));
+  for (const [path, r] of b) if (!a.some((x) => x.path === path)) rows.push({ ...r, from: null });
+  return { changed: rows.filter((r) => !same(r.from, r.to)), unchanged: rows.filter((r) => same(r.from, r.to)) };
+}
