@@ -1,0 +1,85 @@
+"use client";
+import { useMemo, useState } from "react";
+import type { DesignInput } from "@/engine/schema";
+import type { DesignResult } from "@/engine/types";
+import { sizeParsedDesign } from "@/engine/size-design";
+import { Caution } from "@/components/ui/caution";
+import type { ViewName } from "./camera-framing";
+import { ElevationFallback } from "./elevation-fallback";
+import { PreviewErrorBoundary } from "./preview-error-boundary";
+import { previewFigures, type UnitSystem } from "./preview-labels";
+import { Scene } from "./scene";
+import { PreviewToolbar } from "./preview-toolbar";
+import { webglAvailable } from "./webgl-support";
+
+export interface DesignPreviewProps {
+  input: DesignInput;
+  result: DesignResult;
+  unitSystem: UnitSystem;
+  /** For the review page and field spec: no wheel zoom (the page scrolls instead). */
+  readOnly?: boolean;
+  height?: number;
+  /** Hosts that already show the defer-to-code caution right beside the preview may leave it out. */
+  showCaution?: boolean;
+}
+
+/** The design's geometry at one tilt setting, from the engine (the scene computes nothing itself). */
+function geometryAtTilt(input: DesignInput, result: DesignResult, tiltDeg: number | null) {
+  if (tiltDeg === null || tiltDeg === result.geometryPreview.panelPlane.tiltDeg) return { geometry: result.geometryPreview, error: null };
+  try {
+    return { geometry: sizeParsedDesign({ ...input, array: { ...input.array, tiltDeg } }).geometryPreview, error: null };
+  } catch (error) {
+    return { geometry: result.geometryPreview, error: `The ${tiltDeg}° setting could not be drawn: ${error instanceof Error ? error.message : String(error)}` };
+  }
+}
+
+/** The 3D preview of the array, grade and footings, with a 2D elevation where WebGL is missing. */
+export default function DesignPreview({ input, result, unitSystem, readOnly = false, height = 440, showCaution = true }: DesignPreviewProps) {
+  const settings = useMemo(
+    () => (input.array.tiltSettingsDeg?.length ? [...new Set([input.array.tiltDeg, ...input.array.tiltSettingsDeg])].sort((a, b) => a - b) : null),
+    [input.array.tiltDeg, input.array.tiltSettingsDeg],
+  );
+  const [chosenTilt, setChosenTilt] = useState<number | null>(null);
+  // A setting that left the list (the input changed) falls back to the design's own tilt.
+  const tiltDeg = chosenTilt !== null && settings?.includes(chosenTilt) ? chosenTilt : null;
+  const { geometry, error } = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
+  const figures = useMemo(() => previewFigures(geometry, unitSystem), [geometry, unitSystem]);
+  const [webgl, setWebgl] = useState(webglAvailable);
+  const [view, setView] = useState<{ name: ViewName; seq: number }>({ name: "home", seq: 0 });
+
+  const fallback = (reason: string) => <ElevationFallback geometry={geometry} figures={figures} height={height} reason={reason} />;
+  const shownTilt = geometry.panelPlane.tiltDeg;
+  const label = `3D preview at ${shownTilt}° tilt: lowest-edge clearance ${figures.clearance}, embedment ${figures.embedment} at post ${figures.embedmentPostId}`;
+
+  return (
+    <figure className="overflow-hidden rounded-lg border border-slate-200 bg-white" aria-label="Design preview" data-testid="design-preview">
+      <PreviewToolbar
+        views={webgl}
+        onView={(name) => setView((v) => ({ name, seq: v.seq + 1 }))}
+        settings={settings}
+        designTiltDeg={input.array.tiltDeg}
+        shownTiltDeg={shownTilt}
+        onTilt={setChosenTilt}
+      />
+      <div className="relative" style={{ height }}>
+        {webgl ? (
+          <PreviewErrorBoundary fallback={fallback("The 3D preview could not start in this browser.")}>
+            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={() => setWebgl(false)} />
+          </PreviewErrorBoundary>
+        ) : (
+          fallback("This browser has WebGL turned off, so the 3D preview cannot be drawn.")
+        )}
+      </div>
+      <figcaption className="space-y-1 border-t border-slate-200 px-3 py-2 text-sm text-slate-700">
+        {error ? <p role="alert" className="text-red-700">{error}</p> : null}
+        <p>
+          <span className="font-medium">Tilt</span> {shownTilt}° · <span className="font-medium">Lowest-edge clearance</span> {figures.clearance} ·{" "}
+          <span className="font-medium">Embedment</span> {figures.embedment} (post {figures.embedmentPostId})
+        </p>
+        {figures.wind ? <p><span className="font-medium">Governing wind</span> {figures.wind}</p> : null}
+        <p className="text-xs text-slate-500">North marker: array assumed facing south (no azimuth is entered). Member sizes are drawn, not to scale; posts, footings and clearances are to scale.</p>
+        {showCaution ? <Caution compact /> : null}
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,66 @@
+/**
+ * Labels for the preview in the chosen unit system. Conversion goes through the engine's one unit
+ * table (engine/units.ts); nothing here is engineering arithmetic, only display rounding.
+ */
+import { toMetric } from "@/engine/units";
+import type { PreviewGeometry } from "@/engine/geometry/preview";
+
+export type UnitSystem = "imperial" | "metric";
+
+const grouped = (value: number, digits = 0) =>
+  value.toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** A length the engine gives in inches: "24 in" (or "72 in (6 ft 0 in)") / "610 mm". */
+export function formatLengthIn(valueIn: number, units: UnitSystem): string {
+  if (units === "metric") return `${grouped(toMetric(valueIn, "in"))} mm`;
+  const wholeIn = Math.round(valueIn * 10) / 10;
+  const text = `${grouped(wholeIn, Number.isInteger(wholeIn) ? 0 : 1)} in`;
+  if (wholeIn < 24) return text;
+  // Crews read long lengths in feet and inches.
+  const ft = Math.floor(wholeIn / 12);
+  const rest = Math.round((wholeIn - ft * 12) * 10) / 10;
+  return `${text} (${ft} ft ${rest} in)`;
+}
+
+/** A force the engine gives in pounds: "10,579 lb" / "47.06 kN". */
+export function formatForceLb(valueLb: number, units: UnitSystem): string {
+  if (units === "metric") return `${grouped(toMetric(valueLb, "lb") / 1000, 2)} kN`;
+  return `${grouped(valueLb)} lb`;
+}
+
+/** Plain words for the engine's wind direction (γ) so a crew lead need not know the symbol. */
+export function windWords(wind: NonNullable<PreviewGeometry["wind"]>): string {
+  return wind.windDirectionDeg === 180 ? "onto the face, from the low edge" : "from behind the high edge";
+}
+
+export interface PreviewFigures {
+  clearance: string;
+  embedment: string;
+  embedmentPostId: string;
+  wind: string | null;
+}
+
+/** The figures shown beside the scene and on the 2D fallback, so both say the same thing. */
+export function previewFigures(g: PreviewGeometry, units: UnitSystem): PreviewFigures {
+  const w = g.wind;
+  return {
+    clearance: formatLengthIn(g.dimensions.clearance.valueIn, units),
+    embedment: formatLengthIn(g.dimensions.embedment.valueIn, units),
+    embedmentPostId: g.dimensions.embedment.postId,
+    wind: w ? `${w.label}, ${windWords(w)}; normal force ${formatForceLb(w.normalForceLb, units)}` : null,
+  };
+}
+
+/** A short wind label for the scene: "Wind onto the face, case A". */
+export function windSceneLabel(wind: NonNullable<PreviewGeometry["wind"]>): string {
+  return `Wind ${wind.windDirectionDeg === 180 ? "onto the face" : "from behind"}, case ${wind.loadCase}`;
+}
+
+/**
+ * Scene text uses the shipped Latin font only. A character outside it would make the text library
+ * fetch a fallback font from the internet, which Pierwise never does, so such characters are
+ * spelled out (γ) or dropped.
+ */
+export function latinOnly(text: string): string {
+  return text.replace(/γ/g, "gamma ").replace(/[^\u0000-\u00ff]/g, "");
+}

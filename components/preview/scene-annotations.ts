@@ -1,0 +1,62 @@
+/**
+ * Dimension lines, the wind arrow and the north marker, mapped from the engine's geometry.
+ * Stand-offs and arrow lengths are drawing choices (so labels do not sit inside parts); the
+ * measured points and values are the engine's.
+ */
+import type { PreviewGeometry } from "@/engine/geometry/preview";
+import { toScene, type Vec3 } from "./scene-mapping";
+import { DRAW } from "./scene-style";
+
+export interface DimensionLine { from: Vec3; to: Vec3; ticks: [Vec3, Vec3][]; labelAt: Vec3 }
+
+const add = (a: Vec3, b: Vec3): Vec3 => [a[0] + b[0], a[1] + b[1], a[2] + b[2]];
+const scale = (a: Vec3, k: number): Vec3 => [a[0] * k, a[1] * k, a[2] * k];
+
+function verticalDimension(from: Vec3, to: Vec3, standOff: Vec3): DimensionLine {
+  const a = add(from, standOff), b = add(to, standOff);
+  const t = DRAW.tickFt / 2;
+  const ticks: [Vec3, Vec3][] = [a, b].map((p) => [add(p, [-t, 0, 0]), add(p, [t, 0, 0])] as [Vec3, Vec3]);
+  return { from: a, to: b, ticks, labelAt: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2, (a[2] + b[2]) / 2] };
+}
+
+/** Clearance: from the lowest edge straight down to grade, stood off toward the front (+z in three). */
+export function clearanceDimension(g: PreviewGeometry): DimensionLine {
+  const c = g.dimensions.clearance;
+  return verticalDimension(toScene(c.from), toScene(c.to), [0, 0, DRAW.dimensionStandOffFt]);
+}
+
+/**
+ * Embedment: from grade at the governing post down to the footing's bottom. The line runs just in
+ * front of that footing (its radius plus a stand-off) so the concrete does not hide it.
+ */
+export function embedmentDimension(g: PreviewGeometry): DimensionLine {
+  const e = g.dimensions.embedment;
+  const footing = g.footings.find((f) => f.postId === e.postId) ?? g.footings[0];
+  const out = (footing ? footing.diameterFt / 2 : 0) + DRAW.dimensionStandOffFt;
+  return verticalDimension(toScene(e.from), toScene(e.to), [0, 0, out]);
+}
+
+export interface WindArrow { tail: Vec3; head: Vec3; direction: Vec3; lengthFt: number }
+
+/**
+ * The governing wind as an arrow ending at the engine's centre of pressure (or the beam's middle
+ * when the engine gives none), pointing the way the wind blows. `lengthFt` is a drawing length.
+ */
+export function windArrow(g: PreviewGeometry, lengthFt: number): WindArrow | null {
+  if (!g.wind) return null;
+  const head = g.wind.centreOfPressure
+    ? toScene(g.wind.centreOfPressure)
+    : scale(add(toScene(g.beam.start), toScene(g.beam.end)), 0.5);
+  const direction = toScene(g.wind.direction);
+  return { tail: add(head, scale(direction, -lengthFt)), head, direction, lengthFt };
+}
+
+/**
+ * The north marker. The engine has no azimuth input, so the array is assumed to face south: its
+ * modules face the engine's −y, so north is +y (three's −z). The marker sits at the ground's
+ * front-left corner.
+ */
+export function northMarker(g: PreviewGeometry): { at: Vec3; north: Vec3; assumption: string } {
+  const corner = g.ground.corners[0];
+  return { at: toScene(corner), north: toScene({ xFt: 0, yFt: 1, zFt: 0 }), assumption: "array assumed facing south" };
+}

@@ -1,0 +1,17 @@
+/**
+ * Up-front WebGL check, so browsers with WebGL switched off get the 2D elevation straight away
+ * instead of waiting for the 3D canvas to fail. The probe context is released at once: browsers
+ * allow only a few live contexts per page.
+ */
+export function webglAvailable(): boolean {
+  if (typeof document === "undefined") return false;
+  try {
+    const canvas = document.createElement("canvas");
+    const gl = (canvas.getContext("webgl2") ?? canvas.getContext("webgl")) as WebGLRenderingContext | null;
+    if (!gl) return false;
+    gl.getExtension("WEBGL_lose_context")?.loseContext();
+    return true;
+  } catch {
+    return false;
+  }
+}
