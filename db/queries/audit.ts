@@ -31,3 +31,29 @@ export async function recordAudit(event: {
     ip: event.ip ?? null,
   });
 }
+
+export interface AuditRow {
+  id: string;
+  at: Date;
+  action: string;
+  actorName: string | null;
+  actorEmail: string | null;
+  subject: string | null;
+  detail: Record<string, unknown>;
+  ip: string | null;
+}
+
+/** One page of an organisation's audit log, newest first, with the total for paging. */
+export async function listAuditEvents(organisationId: string, page: { offset: number; limit: number }): Promise<{ rows: AuditRow[]; total: number }> {
+  const [rows, [count]] = await Promise.all([
+    db("audit_events as a")
+      .leftJoin("users as u", "u.id", "a.actor_user_id")
+      .where("a.organisation_id", organisationId)
+      .orderBy([{ column: "a.at", order: "desc" }, { column: "a.id", order: "desc" }])
+      .offset(page.offset)
+      .limit(page.limit)
+      .select("a.id", "a.at", "a.action", "u.name as actorName", "u.email as actorEmail", "a.subject", "a.detail", "a.ip"),
+    db("audit_events").where("organisation_id", organisationId).count({ n: "*" }),
+  ]);
+  return { rows, total: Number(count.n) };
+}

@@ -41,3 +41,8 @@ export async function findSignInCandidate(email: string) {
     .orderBy("m.created_at", "asc")
     .first("u.id as userId", "u.password_hash as passwordHash", "m.organisation_id as organisationId");
 }
+
+/** A person by e-mail (any organisation, active or not), for sign-up, invitations and resets. */
+export async function findUserByEmail(email: string): Promise<{ id: string; name: string; email: string; passwordHash: string } | undefined> {
+  return db("users").where("email", email.trim().toLowerCase()).first("id", "name", "email", "password_hash as passwordHash");
+}

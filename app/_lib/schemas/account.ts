@@ -17,3 +17,43 @@ export const signInSchema = z.object({
   password: z.string({ error: "Password is required." }).min(1, { error: "Password is required." }),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
+
+export const personNameField = z
+  .string({ error: "Your name is required." })
+  .trim()
+  .min(1, { error: "Your name is required." })
+  .max(120, { error: "Your name must be at most 120 characters." });
+
+/** The roles a sign-up may add to the admin role it always gets. */
+export const signUpSchema = z.object({
+  organisationName: z
+    .string({ error: "Company name is required." })
+    .trim()
+    .min(2, { error: "Company name must be 2 to 120 characters." })
+    .max(120, { error: "Company name must be 2 to 120 characters." }),
+  name: personNameField,
+  email: emailField,
+  password: newPasswordField,
+  extraRoles: z.array(z.enum(["designer", "engineer", "installer"], { error: "Extra roles may be designer, engineer or installer." })).default([]),
+});
+export type SignUpInput = z.infer<typeof signUpSchema>;
+
+export function signUpInput(form: FormData) {
+  return {
+    organisationName: form.get("organisationName") ?? undefined,
+    name: form.get("name") ?? undefined,
+    email: form.get("email") ?? undefined,
+    password: form.get("password") ?? undefined,
+    extraRoles: form.getAll("extraRoles"),
+  };
+}
+
+export const resetRequestSchema = z.object({ email: emailField });
+
+export const newPasswordSchema = z.object({ password: newPasswordField });
+
+/** Accepting an invitation: a new person gives a name and password; an existing one only the password. */
+export const acceptAsNewSchema = z.object({ name: personNameField, password: newPasswordField });
+export const acceptAsExistingSchema = z.object({
+  password: z.string({ error: "Password is required." }).min(1, { error: "Password is required." }),
+});

@@ -1,0 +1,32 @@
+"use client";
+
+import { useActionState } from "react";
+import { Field, FormStatus, SubmitButton, type ActionState } from "@/components/ui/form";
+import { RoleCheckboxes } from "@/components/ui/role-checkboxes";
+import { useClientValidation } from "@/components/ui/use-client-validation";
+import { signUpInput, signUpSchema } from "@/app/_lib/schemas/account";
+import { signUpAction } from "../actions";
+
+export function SignUpForm() {
+  const [state, action] = useActionState<ActionState, FormData>(signUpAction, {});
+  const { clientErrors, onSubmit } = useClientValidation(signUpSchema, signUpInput);
+  const errors = clientErrors ?? state.fieldErrors;
+  const v = state.values;
+  return (
+    <form action={action} onSubmit={onSubmit} className="space-y-4" noValidate>
+      <Field label="Company name" name="organisationName" autoComplete="organization" required defaultValue={v?.organisationName} error={errors?.organisationName} />
+      <Field label="Your name" name="name" autoComplete="name" required defaultValue={v?.name} error={errors?.name} />
+      <Field label="Work e-mail" name="email" type="email" autoComplete="email" required defaultValue={v?.email} error={errors?.email} />
+      <Field label="Password" name="password" type="password" autoComplete="new-password" required hint="At least 10 characters." error={errors?.password} />
+      <RoleCheckboxes
+        name="extraRoles"
+        legend="You will be the admin. Do you also…"
+        roles={["designer", "engineer", "installer"]}
+        checked={v ? v.extraRoles.split(",") : ["designer"]}
+        error={errors?.extraRoles}
+      />
+      <FormStatus state={state} />
+      <SubmitButton pendingText="Creating…">Create organisation</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,88 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requireRole } from "@/app/_lib/auth";
+import { forPage } from "@/app/_lib/page-access";
+import { listAuditEvents, type AuditRow } from "@/db/queries/audit";
+
+export const metadata: Metadata = { title: "Audit log" };
+
+const PER_PAGE = 25;
+
+const ACTION_LABELS: Record<string, string> = {
+  "sign-in": "Signed in",
+  "sign-out": "Signed out",
+  "sign-in-failed": "Failed sign-in",
+  "sign-up": "Created the organisation",
+  "invitation-sent": "Sent an invitation",
+  "invitation-revoked": "Cancelled an invitation",
+  "invitation-accepted": "Accepted an invitation",
+  "role-changed": "Changed roles",
+  "member-deactivated": "Deactivated a member",
+  "member-reactivated": "Reactivated a member",
+  "password-reset-requested": "Asked for a password reset link",
+  "password-reset": "Set a new password by reset link",
+  "licence-saved": "Saved an engineering licence",
+  "licence-removed": "Removed an engineering licence",
+};
+
+function describe(row: AuditRow): string {
+  const d = row.detail ?? {};
+  if (row.action === "role-changed" && Array.isArray(d.from) && Array.isArray(d.to)) return `${d.from.join(", ")} → ${d.to.join(", ")}`;
+  if (Array.isArray(d.roles)) return `roles: ${d.roles.join(", ")}`;
+  if (typeof d.state === "string") return `state ${d.state}`;
+  return "";
+}
+
+export default async function AuditPage({ searchParams }: { searchParams: Promise<{ page?: string }> }) {
+  const user = await forPage(() => requireRole("admin"), "/admin/audit");
+  const requested = Number.parseInt((await searchParams).page ?? "1", 10);
+  const page = Number.isFinite(requested) && requested > 0 ? requested : 1;
+  const { rows, total } = await listAuditEvents(user.organisationId, { offset: (page - 1) * PER_PAGE, limit: PER_PAGE });
+  const pages = Math.max(1, Math.ceil(total / PER_PAGE));
+  return (
+    <>
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h1 className="text-2xl font-semibold">Audit log</h1>
+        <Link href="/admin/members" className="text-sm text-accent-700 underline">Members</Link>
+      </div>
+      <p className="mt-1 text-sm text-slate-600">
+        Sign-ins, failed sign-ins, invitations, role changes and deactivations in {user.organisationName}, newest first. Times are UTC.
+      </p>
+      <div className="mt-4 overflow-x-auto rounded-lg border border-slate-200 bg-white">
+        <table className="w-full min-w-[44rem] text-left text-sm">
+          <thead className="bg-slate-50 text-slate-700">
+            <tr>
+              <th scope="col" className="px-3 py-2 font-medium">When (UTC)</th>
+              <th scope="col" className="px-3 py-2 font-medium">Who</th>
+              <th scope="col" className="px-3 py-2 font-medium">What</th>
+              <th scope="col" className="px-3 py-2 font-medium">About</th>
+              <th scope="col" className="px-3 py-2 font-medium">From</th>
+            </tr>
+          </thead>
+          <tbody className="divide-y divide-slate-200">
+            {rows.map((row) => (
+              <tr key={row.id} className="align-top">
+                <td className="whitespace-nowrap px-3 py-2"><time dateTime={row.at.toISOString()}>{row.at.toISOString().slice(0, 19).replace("T", " ")}</time></td>
+                <td className="px-3 py-2">{row.actorName ?? <span className="text-slate-500">not signed in</span>}</td>
+                <td className={`px-3 py-2 ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{ACTION_LABELS[row.action] ?? row.action}</td>
+                <td className="px-3 py-2">
+                  <span className="break-all">{row.subject ?? ""}</span>
+                  {describe(row) ? <span className="block text-slate-500">{describe(row)}</span> : null}
+                </td>
+                <td className="px-3 py-2 font-mono text-xs">{row.ip ?? ""}</td>
+              </tr>
+            ))}
+            {rows.length === 0 ? (
+              <tr><td colSpan={5} className="px-3 py-6 text-center text-slate-500">Nothing recorded on this page.</td></tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+      <nav aria-label="Audit log pages" className="mt-3 flex items-center gap-4 text-sm">
+        {page > 1 ? <Link href={`/admin/audit?page=${page - 1}`} className="text-accent-700 underline">← Newer</Link> : <span className="text-slate-400">← Newer</span>}
+        <span>Page {Math.min(page, pages)} of {pages} · {total} events</span>
+        {page < pages ? <Link href={`/admin/audit?page=${page + 1}`} className="text-accent-700 underline">Older →</Link> : <span className="text-slate-400">Older →</span>}
+      </nav>
+    </>
+  );
+}

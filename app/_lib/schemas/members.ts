@@ -1,0 +1,19 @@
+import { z } from "zod";
+import { ROLES } from "@/db/roles";
+import { emailField } from "./account";
+
+export const rolesField = z
+  .array(z.enum(ROLES, { error: `Roles must be among: ${ROLES.join(", ")}.` }), { error: "Choose at least one role." })
+  .min(1, { error: "Choose at least one role." });
+
+export const inviteSchema = z.object({ email: emailField, roles: rolesField });
+export function inviteInput(form: FormData) {
+  return { email: form.get("email") ?? undefined, roles: form.getAll("roles") };
+}
+
+export const idField = z.uuid({ error: "That member or invitation id is not valid." });
+
+export const changeRolesSchema = z.object({ membershipId: idField, roles: rolesField });
+export function changeRolesInput(form: FormData) {
+  return { membershipId: form.get("membershipId") ?? undefined, roles: form.getAll("roles") };
+}

@@ -1,0 +1,51 @@
+import { db } from "../client";
+
+export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date): Promise<void> {
+  await db("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
+}
+
+/** How many reset links were made for a person lately; more than a few an hour is someone else's mischief. */
+export async function countRecentResets(userId: string, minutes: number): Promise<number> {
+  const [row] = await db("password_resets")
+    .where("user_id", userId)
+    .where("created_at", ">", db.raw(`now() - make_interval(mins => ?)`, [minutes]))
+    .count({ n: "*" });
+  return Number(row.n);
+}
+
+export type ResetState = "valid" | "used" | "expired" | "unknown";
+
+export async function passwordResetState(tokenHash: string): Promise<ResetState> {
+  const row = await db("password_resets").where("token_hash", tokenHash).first("used_at", "expires_at");
+  if (!row) return "unknown";
+  if (row.used_at) return "used";
+  return new Date(row.expires_at).getTime() > Date.now() ? "valid" : "expired";
+}
+
+export type UseResetResult = { ok: true; userId: string; email: string; organisationId: string | null } | { ok: false; reason: Exclude<ResetState, "valid"> };
+
+/**
+ * Sets a new password through a reset link, in one transaction: the link is claimed with a
+ * conditional update (single use), every other open link for the person is closed too, and the
+ * person's failed sign-ins are forgiven.
+ */
+export async function consumePasswordReset(tokenHash: string, passwordHash: string): Promise<UseResetResult> {
+  return db.transaction(async (trx) => {
+    const [claimed] = await trx("password_resets")
+      .where("token_hash", tokenHash)
+      .whereNull("used_at")
+      .where("expires_at", ">", trx.fn.now())
+      .update({ used_at: trx.fn.now() })
+      .returning("user_id");
+    if (!claimed) {
+      const row = await trx("password_resets").where("token_hash", tokenHash).first("used_at");
+      return { ok: false, reason: !row ? "unknown" : row.used_at ? "used" : "expired" } as const;
+    }
+    const userId = claimed.user_id as string;
+    await trx("password_resets").where("user_id", userId).whereNull("used_at").update({ used_at: trx.fn.now() });
+    const [user] = await trx("users").where("id", userId).update({ password_hash: passwordHash }).returning("email");
+    await trx("sign_in_failures").where("email", user.email).delete();
+    const membership = await trx("memberships").where("user_id", userId).orderBy("created_at").first("organisation_id");
+    return { ok: true, userId, email: user.email, organisationId: membership?.organisation_id ?? null } as const;
+  });
+}
