@@ -14,6 +14,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 import { CALLERS, SIGN_IN, WHO, callAs, discoverEndpoints, everyone, formArgs, only, type MatrixRow } from "../support/access-matrix";
+import { freshInvitation, freshMember, freshReset, uniqueEmail, userId } from "../support/accounts";
 
 const MEMBERS = { admin: 200, designer: 200, engineer: 200, installer: 200, other: 200, nobody: 401 } as const;
 
@@ -33,6 +34,61 @@ const MATRIX: MatrixRow[] = [
     setup: async () => ({ args: formArgs({ email: CALLERS.installer, password: DEMO_PASSWORD, next: "" }) }),
   },
   { file: "app/(auth)/login/actions.ts", name: "signOutAction", expect: everyone(SIGN_IN), setup: async () => ({ args: [] }) },
+
+  // ── accounts (issue 4): public flows, the token or the form is the permission ────────────────
+  {
+    file: "app/(auth)/signup/actions.ts", name: "signUpAction", expect: everyone("→/admin/members"),
+    setup: async () => ({ args: formArgs({ organisationName: "Matrix Test Co.", name: "Mat Rix", email: uniqueEmail("signup"), password: "matrix-password-1" }) }),
+  },
+  {
+    file: "app/(auth)/invite/[token]/actions.ts", name: "acceptInvitationAction", expect: everyone("→/projects"),
+    setup: async () => ({ args: formArgs({ token: (await freshInvitation()).token, name: "New Person", password: "invitee-password-1" }) }),
+  },
+  {
+    file: "app/(auth)/reset/actions.ts", name: "requestPasswordResetAction", expect: everyone(200),
+    setup: async () => ({ args: formArgs({ email: (await freshMember()).email }) }),
+  },
+  {
+    file: "app/(auth)/reset/[token]/actions.ts", name: "setNewPasswordAction", expect: everyone("→/projects"),
+    setup: async () => ({ args: formArgs({ token: await freshReset((await freshMember()).userId), password: "brand-new-password" }) }),
+  },
+
+  // ── members admin (issue 4): the demo organisation's members; the other organisation's admin gets 404 ──
+  {
+    // Invites go to the caller's own organisation, so the other organisation's admin may invite too.
+    file: "app/(workspace)/admin/members/actions.ts", name: "inviteMemberAction", expect: only({ admin: 200, other: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ email: uniqueEmail("invite"), roles: ["installer"] }) }),
+  },
+  {
+    file: "app/(workspace)/admin/members/actions.ts", name: "changeRolesAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ membershipId: (await freshMember()).membershipId, roles: ["designer", "installer"] }) }),
+  },
+  {
+    file: "app/(workspace)/admin/members/actions.ts", name: "deactivateMemberAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ membershipId: (await freshMember()).membershipId }) }),
+  },
+  {
+    file: "app/(workspace)/admin/members/actions.ts", name: "reactivateMemberAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ membershipId: (await freshMember({ deactivated: true })).membershipId }) }),
+  },
+  {
+    file: "app/(workspace)/admin/members/actions.ts", name: "revokeInvitationAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ invitationId: (await freshInvitation()).id }) }),
+  },
+
+  // ── engineer licences (issue 4): each engineer's own; nobody else's to touch ─────────────────
+  {
+    file: "app/(workspace)/account/actions.ts", name: "saveLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ state: "WY", licenceNumber: "PE-MATRIX-1", expiresOn: "2031-06-30" }) }),
+  },
+  {
+    file: "app/(workspace)/account/actions.ts", name: "removeLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN }),
+    setup: async () => {
+      const engineer = await userId(CALLERS.engineer);
+      await db("engineer_licences").insert({ user_id: engineer, state: "NM", licence_number: "PE-MATRIX-2", expires_on: "2031-06-30" }).onConflict(["user_id", "state"]).ignore();
+      return { args: formArgs({ state: "NM" }) };
+    },
+  },
 ];
 
 afterAll(async () => {
