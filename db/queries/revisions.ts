@@ -9,14 +9,8 @@ import { listPage, type ListPage, type ListQuery } from "./list-page";
  * stale-base check and the insert share one transaction with the design row locked, so two saves
  * from the same base cannot both win and a failure leaves no half revision.
  */
-export type RevisionStatus = "draft" | "in_review" | "approved" | "changes_requested";
-
-export const REVISION_STATUS_LABELS: Record<RevisionStatus, string> = {
-  draft: "Draft",
-  in_review: "In review",
-  approved: "Approved",
-  changes_requested: "Changes requested",
-};
+export { REVISION_STATUS_LABELS, type RevisionStatus } from "../revision-status";
+import type { RevisionStatus } from "../revision-status";
 
 export interface Revision<I = unknown, R = unknown> {
   id: string;

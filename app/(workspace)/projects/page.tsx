@@ -1,17 +1,32 @@
 import type { Metadata } from "next";
-import { requireUser } from "@/app/_lib/auth";
+import Link from "next/link";
+import { hasRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
+import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { Caution } from "@/components/ui/caution";
+import { listProjects } from "@/db/queries/projects";
+import { ProjectsTable } from "./_components/projects-table";
 
 export const metadata: Metadata = { title: "Projects" };
 
-export default async function ProjectsPage() {
+export default async function ProjectsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/projects");
+  const page = await listProjects(user.organisationId, listQueryLenient(await searchParams));
   return (
     <>
-      <h1 className="text-2xl font-semibold">Projects</h1>
-      <p className="mt-1 text-sm text-slate-600">Signed in to {user.organisationName}.</p>
-      <Caution className="mt-4" />
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="text-2xl font-semibold">Projects</h1>
+          <p className="mt-1 text-sm text-slate-600">Customer sites of {user.organisationName}: each holds its criteria card, designs and uploads.</p>
+        </div>
+        {hasRole(user, "designer", "admin") ? (
+          <Link href="/projects/new" className="rounded-md bg-accent-700 px-4 py-2 text-sm font-medium text-white hover:bg-accent-800">New project</Link>
+        ) : null}
+      </div>
+      <div className="mt-4">
+        <ProjectsTable page={page} />
+      </div>
+      <Caution compact className="mt-6" />
     </>
   );
 }
