@@ -1,6 +1,8 @@
 "use client";
 import { Billboard, Line, Text } from "@react-three/drei";
-import { useMemo } from "react";
+import { useFrame } from "@react-three/fiber";
+import { useMemo, useRef, useState } from "react";
+import { Vector3, type Group, type PerspectiveCamera } from "three";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { clearanceDimension, embedmentDimension, northMarker, windArrow, type DimensionLine } from "./scene-annotations";
 import type { Bounds } from "./camera-framing";
@@ -9,28 +11,44 @@ import { latinOnly, windSceneLabel, type PreviewFigures } from "./preview-labels
 import { COLOURS, FONT_URL } from "./scene-style";
 import { MATERIALS, UNIT_CONE, UNIT_CYLINDER } from "./shared-resources";
 
+type Side = "left" | "center" | "right";
+
 /**
- * Text that always faces the camera and is drawn over the parts, in the shipped font. `side`
- * puts it left or right of its point on screen (the offset is inside the billboard, so in screen
- * space), or centred on it.
+ * Text that always faces the camera, drawn over the parts in the shipped font at a fixed size on
+ * screen (`px`), whatever the array's size or the zoom: the billboard is rescaled each frame from
+ * its distance to the camera. `side` puts the text left or right of its point, centred on it, or
+ * ("auto") on whichever side faces the middle of the view, so labels at the edge of a narrow phone
+ * view do not run off the canvas.
  */
-function Label({ at, text, color, sizeFt, side = "right" }: { at: Vec3; text: string; color: string; sizeFt: number; side?: "left" | "center" | "right" }) {
-  const gap = side === "center" ? 0 : side === "left" ? -sizeFt * 0.6 : sizeFt * 0.6;
+function Label({ at, text, color, px = 13, side = "auto" }: { at: Vec3; text: string; color: string; px?: number; side?: Side | "auto" }) {
+  const [autoSide, setAutoSide] = useState<Side>("right");
+  const group = useRef<Group>(null);
+  const probe = useMemo(() => new Vector3(), []);
+  useFrame(({ camera, size }) => {
+    const g = group.current;
+    if (!g) return;
+    const fovRad = ((camera as PerspectiveCamera).fov * Math.PI) / 180;
+    const worldPerPx = (2 * camera.position.distanceTo(probe.set(...at)) * Math.tan(fovRad / 2)) / Math.max(size.height, 1);
+    g.scale.setScalar(worldPerPx * px);
+    if (side !== "auto") return;
+    const want = probe.project(camera).x < 0 ? "right" : "left";
+    if (want !== autoSide) setAutoSide(want);
+  });
+  const shown = side === "auto" ? autoSide : side;
+  const gap = shown === "center" ? 0 : shown === "left" ? -0.6 : 0.6;
   return (
-    <Billboard position={at}>
+    <Billboard position={at} ref={group}>
       <Text
         font={FONT_URL}
         position={[gap, 0, 0]}
-        fontSize={sizeFt}
+        fontSize={1}
         color={color}
-        anchorX={side === "left" ? "right" : side === "right" ? "left" : "center"}
+        anchorX={shown === "left" ? "right" : shown === "right" ? "left" : "center"}
         anchorY="middle"
-        outlineWidth={sizeFt * 0.12}
+        outlineWidth={0.12}
         outlineColor="#ffffff"
         renderOrder={20}
-        material-depthTest={false}
-        material-depthWrite={false}
-        material-transparent
+        material={MATERIALS.label}
       >
         {latinOnly(text)}
       </Text>
@@ -38,12 +56,12 @@ function Label({ at, text, color, sizeFt, side = "right" }: { at: Vec3; text: st
   );
 }
 
-function Dimension({ d, color, text, sizeFt }: { d: DimensionLine; color: string; text: string; sizeFt: number }) {
+function Dimension({ d, color, text }: { d: DimensionLine; color: string; text: string }) {
   return (
     <group>
       <Line points={[d.from, d.to]} color={color} lineWidth={2} depthTest={false} depthWrite={false} transparent renderOrder={15} />
       {d.ticks.map((t, i) => <Line key={i} points={t} color={color} lineWidth={2} depthTest={false} depthWrite={false} transparent renderOrder={15} />)}
-      <Label at={d.labelAt} text={text} color={color} sizeFt={sizeFt} side="left" />
+      <Label at={d.labelAt} text={text} color={color} />
     </group>
   );
 }
@@ -64,8 +82,8 @@ export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figure
 
   return (
     <group>
-      <Dimension d={clearance} color={COLOURS.clearance} text={`Clearance ${figures.clearance}`} sizeFt={size} />
-      <Dimension d={embedment} color={COLOURS.embedment} text={`Embedment ${figures.embedment}`} sizeFt={size} />
+      <Dimension d={clearance} color={COLOURS.clearance} text={`Clearance ${figures.clearance}`} />
+      <Dimension d={embedment} color={COLOURS.embedment} text={`Embedment ${figures.embedment}`} />
       {wind && shaft ? (
         <group>
           <mesh geometry={UNIT_CYLINDER} material={MATERIALS.wind} position={shaft.position} quaternion={shaft.quaternion} scale={[shaftRadius * 2, shaft.lengthFt * 0.8, shaftRadius * 2]} />
@@ -76,7 +94,7 @@ export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figure
             quaternion={shaft.quaternion}
             scale={[shaftRadius * 5, shaft.lengthFt * 0.2, shaftRadius * 5]}
           />
-          <Label at={[wind.tail[0], wind.tail[1] + size * 1.2, wind.tail[2]]} text={g.wind ? windSceneLabel(g.wind) : ""} color={COLOURS.wind} sizeFt={size} side="center" />
+          <Label at={[wind.tail[0], wind.tail[1] + size * 1.2, wind.tail[2]]} text={g.wind ? windSceneLabel(g.wind) : ""} color={COLOURS.wind} side="center" />
         </group>
       ) : null}
       <group>
@@ -88,8 +106,8 @@ export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figure
           quaternion={northShaft.quaternion}
           scale={[size * 0.8, northShaft.lengthFt * 0.3, size * 0.8]}
         />
-        <Label at={[northTip[0], northTip[1] + size, northTip[2] - size * 0.6]} text="N" color={COLOURS.north} sizeFt={size * 1.3} side="center" />
-        <Label at={[north.at[0], north.at[1] + size * 0.2, north.at[2] + size * 1.5]} text={north.assumption} color={COLOURS.north} sizeFt={size * 0.7} side="center" />
+        <Label at={[northTip[0], northTip[1] + size, northTip[2] - size * 0.6]} text="N" color={COLOURS.north} px={16} side="center" />
+        <Label at={[north.at[0], north.at[1] + size * 0.2, north.at[2] + size * 1.5]} text={north.assumption} color={COLOURS.north} px={11} />
       </group>
     </group>
   );
