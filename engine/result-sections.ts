@@ -4,7 +4,7 @@
  */
 import type { ArrayLoadState } from "./loads/array-loads";
 import type { FactoredPostLoad } from "./loads/factored";
-import type { CombinationRow, GoverningLoad, WindCaseResult } from "./types";
+import type { CombinationRow, WindCaseResult } from "./types";
 
 export function windCaseRows(st: ArrayLoadState): WindCaseResult[] {
   return st.windCases.map((c) => ({
@@ -16,31 +16,38 @@ export function windCaseRows(st: ArrayLoadState): WindCaseResult[] {
 }
 
 export function postLoadTable(rows: FactoredPostLoad[], tiltDeg: number): { postId: string; tiltDeg: number; combinations: CombinationRow[] }[] {
-  const byPost = new Map<string, CombinationRow[]>();
-  for (const r of rows) {
+  // Grouped by post in order of first appearance (a linear search over ≤ 20 posts is cheaper than
+  // a Map and its spread for the few posts a design has).
+  const out: { postId: string; tiltDeg: number; combinations: CombinationRow[] }[] = [];
+  let last: { postId: string; tiltDeg: number; combinations: CombinationRow[] } | undefined;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i];
     if (r.tiltDeg !== tiltDeg) continue;
-    const list = byPost.get(r.postId) ?? [];
-    list.push({ combination: r.combination, shearLb: r.shearLb, momentAtGradeLbFt: r.momentAtGradeLbFt, downwardLb: r.downwardLb, windUpliftLb: r.windUpliftLb });
-    byPost.set(r.postId, list);
+    if (!last || last.postId !== r.postId) {
+      last = undefined;
+      for (let j = 0; j < out.length; j++) if (out[j].postId === r.postId) { last = out[j]; break; }
+      if (!last) { last = { postId: r.postId, tiltDeg, combinations: [] }; out.push(last); }
+    }
+    last.combinations.push({ combination: r.combination, shearLb: r.shearLb, momentAtGradeLbFt: r.momentAtGradeLbFt, downwardLb: r.downwardLb, windUpliftLb: r.windUpliftLb });
   }
-  return [...byPost].map(([postId, combinations]) => ({ postId, tiltDeg, combinations }));
+  return out;
 }
-
-const named = (r: FactoredPostLoad): GoverningLoad => ({ postId: r.postId, tiltDeg: r.tiltDeg, combination: r.combination, windCase: r.windCase });
 
 /** The largest shear, moment, uplift and downward load on any post, each with its combination named. */
 export function governingLoads(rows: FactoredPostLoad[]) {
   let shear = rows[0], moment = rows[0], up = rows[0], down = rows[0];
-  for (const r of rows) {
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i];
     if (Math.abs(r.shearLb) > Math.abs(shear.shearLb)) shear = r;
     if (Math.abs(r.momentAtGradeLbFt) > Math.abs(moment.momentAtGradeLbFt)) moment = r;
     if (r.downwardLb < up.downwardLb) up = r;
     if (r.downwardLb > down.downwardLb) down = r;
   }
+  // Built directly in the order { postId, tiltDeg, combination, windCase, value } (no spreads).
   return {
-    shear: { ...named(shear), valueLb: Math.abs(shear.shearLb) },
-    moment: { ...named(moment), valueLbFt: Math.abs(moment.momentAtGradeLbFt) },
-    uplift: up.downwardLb < 0 ? { ...named(up), valueLb: -up.downwardLb } : null,
-    downward: { ...named(down), valueLb: down.downwardLb },
+    shear: { postId: shear.postId, tiltDeg: shear.tiltDeg, combination: shear.combination, windCase: shear.windCase, valueLb: Math.abs(shear.shearLb) },
+    moment: { postId: moment.postId, tiltDeg: moment.tiltDeg, combination: moment.combination, windCase: moment.windCase, valueLbFt: Math.abs(moment.momentAtGradeLbFt) },
+    uplift: up.downwardLb < 0 ? ({ postId: up.postId, tiltDeg: up.tiltDeg, combination: up.combination, windCase: up.windCase, valueLb: -up.downwardLb }) : null,
+    downward: { postId: down.postId, tiltDeg: down.tiltDeg, combination: down.combination, windCase: down.windCase, valueLb: down.downwardLb },
   };
 }

@@ -12,34 +12,38 @@ export interface DesignWarning {
   message: string;
 }
 
+/** Add a warning unless the same code and message is already listed. */
+function add(out: DesignWarning[], code: string, message: string, severity: DesignWarning["severity"] = "warning"): void {
+  for (let i = 0; i < out.length; i++) if (out[i].code === code && out[i].message === message) return;
+  out.push({ code, severity, message });
+}
+
 export function collectWarnings(input: DesignInput, states: ArrayLoadState[], ev: FootingEvaluation, extra: DesignWarning[]): DesignWarning[] {
+  // `add` is module-level (not a closure made on every design) because this runs for every sizing.
   const out: DesignWarning[] = [];
-  const w = (code: string, message: string, severity: DesignWarning["severity"] = "warning") => {
-    if (!out.some((x) => x.code === code && x.message === message)) out.push({ code, severity, message });
-  };
   for (const s of states) {
     if (s.hOverL < 0.25 || s.hOverL > 1.0)
-      w("H_OVER_L_OUT_OF_RANGE", `At ${s.tiltDeg}° tilt h/L = ${s.hOverL.toFixed(2)}, outside 0.25–1.0 where ASCE 7 Fig. 27.3-4 applies; have the engineer confirm the wind coefficients.`);
-    if (s.tiltDeg > 45) w("TILT_ABOVE_45", `Tilt ${s.tiltDeg}° is above the 45° the free-roof figure covers; the 45° coefficients were used.`);
-    if (s.tiltDeg < 7.5) w("TILT_BELOW_7_5", `Tilt ${s.tiltDeg}° is below 7.5°: the figure's 0° row was used.`, "info");
+      add(out, "H_OVER_L_OUT_OF_RANGE", `At ${s.tiltDeg}° tilt h/L = ${s.hOverL.toFixed(2)}, outside 0.25–1.0 where ASCE 7 Fig. 27.3-4 applies; have the engineer confirm the wind coefficients.`);
+    if (s.tiltDeg > 45) add(out, "TILT_ABOVE_45", `Tilt ${s.tiltDeg}° is above the 45° the free-roof figure covers; the 45° coefficients were used.`);
+    if (s.tiltDeg < 7.5) add(out, "TILT_BELOW_7_5", `Tilt ${s.tiltDeg}° is below 7.5°: the figure's 0° row was used.`, "info");
     if (s.heights.minClearanceIn < input.array.lowestEdgeClearanceIn - 1e-6)
-      w("CLEARANCE_BELOW_TARGET", `At ${s.tiltDeg}° the lowest edge clears grade by ${s.heights.minClearanceIn.toFixed(1)} in, less than the ${input.array.lowestEdgeClearanceIn} in asked for.`);
+      add(out, "CLEARANCE_BELOW_TARGET", `At ${s.tiltDeg}° the lowest edge clears grade by ${s.heights.minClearanceIn.toFixed(1)} in, less than the ${input.array.lowestEdgeClearanceIn} in asked for.`);
   }
   if (input.array.lowestEdgeClearanceIn < 18)
-    w("LOW_CLEARANCE", `Lowest edge clearance ${input.array.lowestEdgeClearanceIn} in is under the usual 18–24 in; allow for snow, vegetation and splash.`);
-  if (input.site.edition === "7-22") w("FREE_ROOF_FOR_7_22", "ASCE 7-22 has provisions specific to ground-mounted solar; this engine uses the free-roof method for 7-22 as for 7-16.", "info");
-  if (input.posts.isolatedPoleIncrease) w("LATERAL_DOUBLED", "IBC §1806.3.4 doubling of lateral bearing is applied: valid only for isolated poles not adversely affected by ½ in motion at grade.");
-  if (input.posts.sideFrictionPsf) w("SIDE_FRICTION_USED", `Side friction of ${input.posts.sideFrictionPsf} psf is counted against uplift: an engineer's value, not a presumptive one.`);
+    add(out, "LOW_CLEARANCE", `Lowest edge clearance ${input.array.lowestEdgeClearanceIn} in is under the usual 18–24 in; allow for snow, vegetation and splash.`);
+  if (input.site.edition === "7-22") add(out, "FREE_ROOF_FOR_7_22", "ASCE 7-22 has provisions specific to ground-mounted solar; this engine uses the free-roof method for 7-22 as for 7-16.", "info");
+  if (input.posts.isolatedPoleIncrease) add(out, "LATERAL_DOUBLED", "IBC §1806.3.4 doubling of lateral bearing is applied: valid only for isolated poles not adversely affected by ½ in motion at grade.");
+  if (input.posts.sideFrictionPsf) add(out, "SIDE_FRICTION_USED", `Side friction of ${input.posts.sideFrictionPsf} psf is counted against uplift: an engineer's value, not a presumptive one.`);
   if (input.site.waterTableDepthFt !== undefined && input.site.waterTableDepthFt * 12 < ev.depthIn)
-    w("WATER_TABLE", "The footing reaches the water table: buoyant concrete weight was used for uplift; the hole may need casing or tremie concrete.");
-  if (ev.depthIn > 144) w("DEPTH_OVER_12_FT", "Footing deeper than 12 ft: S1 is capped at its 12 ft value and the post-in-hole method is being stretched.");
-  if (ev.requiredDepthIn.uplift >= 720 - 1e-6) w("UPLIFT_NOT_CONVERGED", "Uplift needs more than 60 ft of pier: enlarge the hole, add posts, or have the engineer add side friction or an anchor.");
-  if (!ev.lateralConverged) w("LATERAL_NOT_CONVERGED", "The lateral check needs more than 60 ft of embedment: enlarge the hole, add posts or revisit the soil values.");
+    add(out, "WATER_TABLE", "The footing reaches the water table: buoyant concrete weight was used for uplift; the hole may need casing or tremie concrete.");
+  if (ev.depthIn > 144) add(out, "DEPTH_OVER_12_FT", "Footing deeper than 12 ft: S1 is capped at its 12 ft value and the post-in-hole method is being stretched.");
+  if (ev.requiredDepthIn.uplift >= 720 - 1e-6) add(out, "UPLIFT_NOT_CONVERGED", "Uplift needs more than 60 ft of pier: enlarge the hole, add posts, or have the engineer add side friction or an anchor.");
+  if (!ev.lateralConverged) add(out, "LATERAL_NOT_CONVERGED", "The lateral check needs more than 60 ft of embedment: enlarge the hole, add posts or revisit the soil values.");
   const frost = ev.checks.find((c) => c.id === "frost")!;
-  if (!frost.pass) w("FROST_DEPTH_NOT_MET", `Footing depth ${ev.depthIn} in is above the required ${frost.demand} in (frost depth or 12 in minimum).`);
+  if (!frost.pass) add(out, "FROST_DEPTH_NOT_MET", `Footing depth ${ev.depthIn} in is above the required ${frost.demand} in (frost depth or 12 in minimum).`);
   for (const c of ev.checks) {
     if (c.id !== "frost" && !c.pass)
-      w(`CHECK_OVER_CAPACITY_${c.id.toUpperCase()}`, `${c.title}: utilisation ${c.ratio.toFixed(2)} exceeds 1.0 (${c.demand.toFixed(2)} vs ${c.capacity.toFixed(2)} ${c.unit})${c.governing ? `, post ${c.governing.postId}, ${c.governing.combination}` : ""}.`);
+      add(out, `CHECK_OVER_CAPACITY_${c.id.toUpperCase()}`, `${c.title}: utilisation ${c.ratio.toFixed(2)} exceeds 1.0 (${c.demand.toFixed(2)} vs ${c.capacity.toFixed(2)} ${c.unit})${c.governing ? `, post ${c.governing.postId}, ${c.governing.combination}` : ""}.`);
   }
   return [...out, ...extra];
 }

@@ -13,6 +13,11 @@ import { requireRange } from "../errors";
 export const FT3_PER_YD3 = 27;
 export const BAG_YIELD_FT3 = { 40: 0.3, 60: 0.45, 80: 0.6 } as const;
 
+/** Whole bags of premix for a volume (a module-level helper: it runs per hole and per sweep row). */
+export function bagsFor(volumeFt3: number, lb: 40 | 60 | 80): number {
+  return Math.ceil(volumeFt3 / BAG_YIELD_FT3[lb] - 1e-9);
+}
+
 export interface HoleConcrete {
   volumeFt3: number;
   volumeYd3: number;
@@ -42,14 +47,13 @@ export function concreteForHole(a: {
   }
   const displacementFt3 = a.subtractPostDisplacement ? (Math.PI * (od / 12) ** 2 * d) / 4 : 0;
   const volumeFt3 = gross - displacementFt3;
-  const bags = (lb: 40 | 60 | 80) => Math.ceil(volumeFt3 / BAG_YIELD_FT3[lb] - 1e-9);
   return {
     volumeFt3,
     volumeYd3: volumeFt3 / FT3_PER_YD3,
     weightLb: volumeFt3 * pcf,
-    bags40Lb: bags(40),
-    bags60Lb: bags(60),
-    bags80Lb: bags(80),
+    bags40Lb: bagsFor(volumeFt3, 40),
+    bags60Lb: bagsFor(volumeFt3, 60),
+    bags80Lb: bagsFor(volumeFt3, 80),
     displacementFt3,
   };
 }

@@ -7,7 +7,7 @@
  *   // { totalYd3: 1.164, orderYd3: 1.5, bags80Lb: 58, … }
  */
 import { requireRange } from "../errors";
-import { BAG_YIELD_FT3, FT3_PER_YD3, type HoleConcrete } from "./concrete-for-hole";
+import { bagsFor, FT3_PER_YD3, type HoleConcrete } from "./concrete-for-hole";
 
 export interface ConcreteOrder {
   holes: number;
@@ -29,7 +29,6 @@ export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllow
   requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
   const totalFt3 = a.hole.volumeFt3 * a.holes;
   const withWasteFt3 = totalFt3 * (1 + a.wasteAllowancePct / 100);
-  const bags = (lb: 40 | 60 | 80) => Math.ceil(withWasteFt3 / BAG_YIELD_FT3[lb] - 1e-9);
   return {
     holes: a.holes,
     totalFt3,
@@ -39,8 +38,8 @@ export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllow
     withWasteFt3,
     withWasteYd3: withWasteFt3 / FT3_PER_YD3,
     orderYd3: Math.ceil((withWasteFt3 / FT3_PER_YD3) * 4 - 1e-9) / 4,
-    bags40Lb: bags(40),
-    bags60Lb: bags(60),
-    bags80Lb: bags(80),
+    bags40Lb: bagsFor(withWasteFt3, 40),
+    bags60Lb: bagsFor(withWasteFt3, 60),
+    bags80Lb: bagsFor(withWasteFt3, 80),
   };
 }

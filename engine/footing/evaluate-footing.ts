@@ -62,34 +62,50 @@ function lateralCheck(row: FactoredPostLoad | null, ratio: number, source: strin
 const gov = (r: FactoredPostLoad): Governing => ({ postId: r.postId, tiltDeg: r.tiltDeg, combination: r.combination, windCase: r.windCase });
 const LATERAL_SOURCE = (c: boolean) => (c ? "IBC §1807.3.2.2 Eq. 18-2" : "IBC §1807.3.2.1 Eq. 18-1");
 
+// The loops below sit in the sizing hot path (once per diameter, per tilt, per candidate), so they
+// use plain locals instead of per-call helper closures and running-best objects: the closures were
+// re-created (and, under tsx/esbuild keepNames, re-named with Object.defineProperty) on every call.
+// The arithmetic and the order of every operation are unchanged.
+
+/** Unfactored tributary dead load of a row (its factored dead over its factor), 0 when D is absent. */
+function deadOf(r: FactoredPostLoad): number {
+  return r.deadFactor ? r.deadResistLb / r.deadFactor : 0;
+}
+
 /** The depth each check needs at this hole and the design depth (the cheap part, for sweeps). */
 export function footingDepth(ctx: FootingContext, diameterIn: number, useFixed = true): FootingDepth {
   const b = diameterIn / 12;
   const S = ctx.soil.lateralPsfPerFt;
   const wp = ctx.pipe.weightLbPerFt;
-  const isUplift = (r: FactoredPostLoad) => r.windUpliftLb > 0 && !r.hasSnow;
-  const deadOf = (r: FactoredPostLoad) => (r.deadFactor ? r.deadResistLb / r.deadFactor : 0);
 
-  let latNeed = { ft: 0, row: null as FactoredPostLoad | null, converged: true };
-  for (const r of ctx.lateralRows) {
+  const lateralRows = ctx.lateralRows;
+  let latFt = 0, latRow: FactoredPostLoad | null = null, latConverged = true;
+  for (let i = 0; i < lateralRows.length; i++) {
+    const r = lateralRows[i];
     const s = requiredLateralDepthFt({ shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt, diameterFt: b, sPsfPerFt: S, constrained: ctx.constrained });
-    if (s.depthFt > latNeed.ft || !latNeed.row) latNeed = { ft: s.depthFt, row: r, converged: latNeed.converged && s.converged };
+    // `converged` is carried only when the deepest row changes (as before).
+    if (s.depthFt > latFt || !latRow) { latFt = s.depthFt; latRow = r; latConverged = latConverged && s.converged; }
   }
-  let upNeed = { ft: 0, row: null as FactoredPostLoad | null };
-  for (const r of ctx.rows) {
-    if (!isUplift(r)) continue;
+  const rows = ctx.rows;
+  let upFt = 0;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i];
+    if (!(r.windUpliftLb > 0 && !r.hasSnow)) continue;
     const ft = requiredUpliftDepthFt({
       upliftLb: r.windUpliftLb, deadFactor: r.deadFactor, diameterFt: b, concretePcf: ctx.concretePcf, postLbPerFt: wp,
       postAboveGradeFt: r.postHeightAboveGradeFt, deadLb: deadOf(r), waterTableDepthFt: ctx.waterTableDepthFt, sideFrictionPsf: ctx.sideFrictionPsf,
     });
-    if (ft > upNeed.ft) upNeed = { ft, row: r };
+    if (ft > upFt) upFt = ft;
   }
   const frostIn = Math.max(ctx.frostDepthIn, 12);
-  const need = { lateral: latNeed.ft * 12, uplift: upNeed.ft * 12, frost: frostIn };
-  const controllingCheck = (Object.keys(need) as (keyof typeof need)[]).reduce((a, k) => (need[k] > need[a] ? k : a), "frost" as keyof typeof need);
+  const need = { lateral: latFt * 12, uplift: upFt * 12, frost: frostIn };
+  // The largest need, ties to the later key: reduce over lateral, uplift, frost starting at frost.
+  let controllingCheck: DepthCheckId = "frost";
+  if (need.lateral > need[controllingCheck]) controllingCheck = "lateral";
+  if (need.uplift > need[controllingCheck]) controllingCheck = "uplift";
   const fixed = useFixed ? ctx.fixedDepthIn : undefined;
   const depthIn = fixed ?? roundUpIn(need[controllingCheck], ctx.depthIncrementIn);
-  return { depthIn, need, controllingCheck, lateralConverged: latNeed.converged };
+  return { depthIn, need, controllingCheck, lateralConverged: latConverged };
 }
 
 
@@ -99,40 +115,44 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   const S = ctx.soil.lateralPsfPerFt;
   const wp = ctx.pipe.weightLbPerFt;
   const friction = (ctx.sideFrictionPsf ?? 0) * Math.PI * b;
-  const isUplift = (r: FactoredPostLoad) => r.windUpliftLb > 0 && !r.hasSnow;
-  const deadOf = (r: FactoredPostLoad) => (r.deadFactor ? r.deadResistLb / r.deadFactor : 0);
   const frostIn = need.frost;
   const d = depthIn / 12;
   const concreteLb = pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d);
   // Checks at the design depth: the worst row of each.
-  let latWorst = { ratio: -1, row: null as FactoredPostLoad | null };
-  for (const r of ctx.lateralRows) {
+  const lateralRows = ctx.lateralRows;
+  let latRatio = -1, latRow: FactoredPostLoad | null = null;
+  for (let i = 0; i < lateralRows.length; i++) {
+    const r = lateralRows[i];
     const q = lateralRatio({ shearLb: r.shearLb, momentLbFt: r.momentAtGradeLbFt, diameterFt: b, sPsfPerFt: S, constrained: ctx.constrained }, d);
-    if (q > latWorst.ratio) latWorst = { ratio: q, row: r };
+    if (q > latRatio) { latRatio = q; latRow = r; }
   }
-  let up = { demand: 0, cap: 0, ratio: -1, row: null as FactoredPostLoad | null };
-  let brg = { psf: 0, row: null as FactoredPostLoad | null };
-  let bend = { m: 0, row: null as FactoredPostLoad | null };
-  for (const r of ctx.rows) {
+  let upDemand = 0, upCapRow = 0, upRatio = -1, upRow: FactoredPostLoad | null = null;
+  let brgPsf = 0, brgRow: FactoredPostLoad | null = null;
+  let bendM = 0, bendRow: FactoredPostLoad | null = null;
+  const rows = ctx.rows;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i];
     const pier = concreteLb + wp * (r.postHeightAboveGradeFt + d);
-    if (isUplift(r)) {
+    if (r.windUpliftLb > 0 && !r.hasSnow) {
       const cap = r.deadFactor * (pier + deadOf(r)) + friction * d;
-      if (r.windUpliftLb / cap > up.ratio) up = { demand: r.windUpliftLb, cap, ratio: r.windUpliftLb / cap, row: r };
+      if (r.windUpliftLb / cap > upRatio) { upDemand = r.windUpliftLb; upCapRow = cap; upRatio = r.windUpliftLb / cap; upRow = r; }
     }
     const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * pier, diameterFt: b });
-    if (psf > brg.psf) brg = { psf, row: r };
-    if (Math.abs(r.momentAtGradeLbFt) > bend.m || !bend.row) bend = { m: Math.abs(r.momentAtGradeLbFt), row: r };
+    if (psf > brgPsf) { brgPsf = psf; brgRow = r; }
+    if (Math.abs(r.momentAtGradeLbFt) > bendM || !bendRow) { bendM = Math.abs(r.momentAtGradeLbFt); bendRow = r; }
   }
-  const upCap = up.row ? up.cap : 0.6 * (concreteLb + wp * d) + friction * d;
+  const upCap = upRow ? upCapRow : 0.6 * (concreteLb + wp * d) + friction * d;
   const checks: FootingCheck[] = [
-    lateralCheck(latWorst.row, Math.max(0, latWorst.ratio), LATERAL_SOURCE(ctx.constrained), need.lateral),
-    makeCheck("uplift", up.demand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", up.row && gov(up.row), need.uplift),
+    lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
+    makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
     makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (frost), §1809.5 (12 in minimum)", null, need.frost),
-    makeCheck("bearing", brg.psf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brg.row && gov(brg.row)),
+    makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brgRow && gov(brgRow)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 [memory]", null),
-    makeCheck("postBending", bend.m / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bend.row && gov(bend.row)),
+    makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),
   ];
-  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass: checks.every((c) => c.pass), lateralConverged };
+  let pass = true;
+  for (let i = 0; i < checks.length; i++) if (!checks[i].pass) { pass = false; break; }
+  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass, lateralConverged };
 }
 
 /** Worst bearing ratio at a hole and depth (for sweeps and automatic sizing). */

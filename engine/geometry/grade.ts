@@ -31,17 +31,25 @@ export interface GradeHeights {
 
 const gradeAt = (x: number, y: number, along: number, across: number) => (along / 100) * x + (across / 100) * y;
 
+/** Tilt in radians (module-level: gradeHeights runs for every tilt of every design). */
+function rad(d: number): number {
+  return (d * Math.PI) / 180;
+}
+
 function tightestCorner(widthFt: number, slopeLengthFt: number, tiltRad: number, along: number, across: number) {
   const halfDepth = (slopeLengthFt / 2) * Math.cos(tiltRad);
-  let best = { gapFt: Infinity, xFt: 0, yFt: 0 };
-  for (const x of [-widthFt / 2, widthFt / 2]) {
-    for (const y of [-halfDepth, halfDepth]) {
-      // Panel height above the beam-plane height at y, minus the ground there.
-      const gapFt = y * Math.tan(tiltRad) - gradeAt(x, y, along, across);
-      if (gapFt < best.gapFt) best = { gapFt, xFt: x, yFt: y };
-    }
+  const tan = Math.tan(tiltRad);
+  // The four plan corners in the order x = −W/2, +W/2, each with y = −D/2, +D/2; the first
+  // strictly smallest gap wins (loops over literal arrays, unrolled to avoid allocating them).
+  let gapBest = Infinity, xBest = 0, yBest = 0;
+  for (let i = 0; i < 4; i++) {
+    const x = i < 2 ? -widthFt / 2 : widthFt / 2;
+    const y = i % 2 === 0 ? -halfDepth : halfDepth;
+    // Panel height above the beam-plane height at y, minus the ground there.
+    const gapFt = y * tan - gradeAt(x, y, along, across);
+    if (gapFt < gapBest) { gapBest = gapFt; xBest = x; yBest = y; }
   }
-  return best;
+  return { gapFt: gapBest, xFt: xBest, yFt: yBest };
 }
 
 export function gradeHeights(a: {
@@ -58,7 +66,6 @@ export function gradeHeights(a: {
   requireRange("array.lowestEdgeClearanceIn", a.clearanceIn, 0, 240, "Lowest edge clearance", "in");
   requireRange("site.slopeAlongPct", a.slopeAlongPct, -50, 50, "Ground slope along the array", "%");
   requireRange("site.slopeAcrossPct", a.slopeAcrossPct, -50, 50, "Ground slope across the array", "%");
-  const rad = (d: number) => (d * Math.PI) / 180;
   const design = tightestCorner(a.widthFt, a.slopeLengthFt, rad(a.clearanceTiltDeg), a.slopeAlongPct, a.slopeAcrossPct);
   const meanHeightFt = a.clearanceIn / 12 - design.gapFt;
   const t = rad(a.tiltDeg);

@@ -29,6 +29,13 @@ export interface PreviewGeometry {
 
 const P = (xFt: number, yFt: number, zFt: number): Point3Ft => ({ xFt, yFt, zFt });
 
+/** Where the panel plane puts slope coordinate s (ft from the low edge), u across, lifted normal to it. */
+interface Plane { L: number; cos: number; sin: number; meanHeightFt: number }
+// Module-level rather than a closure per call: the preview places ~80 points per design.
+function onPlane(pl: Plane, u: number, s: number, lift = 0): Point3Ft {
+  return P(u, (s - pl.L / 2) * pl.cos - lift * pl.sin, pl.meanHeightFt + (s - pl.L / 2) * pl.sin + lift * pl.cos);
+}
+
 export function previewGeometry(
   st: ArrayLoadState,
   a: { gapIn: number; rackDepthIn: number; postOutsideDiameterIn: number; diameterIn: number; depthIn: number; governingPostId: string | null; windCase: number },
@@ -37,11 +44,11 @@ export function previewGeometry(
   const t = (st.tiltDeg * Math.PI) / 180;
   const cos = Math.cos(t), sin = Math.sin(t);
   const W = dims.widthFt, L = dims.slopeLengthFt;
-  const onPlane = (u: number, s: number, lift = 0) => P(u, (s - L / 2) * cos - lift * sin, heights.meanHeightFt + (s - L / 2) * sin + lift * cos);
+  const pl: Plane = { L, cos, sin, meanHeightFt: heights.meanHeightFt };
   const slope = { along: st.slopeAlongPct, across: st.slopeAcrossPct };
-  const g = (x: number, y: number) => gradeAt(x, y, slope.along, slope.across);
+  const along = slope.along, across = slope.across;
   const m = 3, hx = W / 2 + m, hy = (L / 2) * cos + m;
-  const corners = [P(-hx, -hy, g(-hx, -hy)), P(hx, -hy, g(hx, -hy)), P(hx, hy, g(hx, hy)), P(-hx, hy, g(-hx, hy))];
+  const corners = [P(-hx, -hy, gradeAt(-hx, -hy, along, across)), P(hx, -hy, gradeAt(hx, -hy, along, across)), P(hx, hy, gradeAt(hx, hy, along, across)), P(-hx, hy, gradeAt(-hx, hy, along, across))];
   const depthFt = a.depthIn / 12;
   const posts = st.posts.map((p) => ({
     id: p.id, xFt: p.xFt, yFt: 0, gradeZFt: p.gradeFt, topZFt: heights.postTopFt, bottomZFt: p.gradeFt - depthFt, outsideDiameterFt: a.postOutsideDiameterIn / 12,
@@ -52,7 +59,7 @@ export function previewGeometry(
   const railCount = Math.max(2, Math.ceil((W - 1) / 4) + 1);
   const rails = Array.from({ length: railCount }, (_, i) => {
     const u = -W / 2 + 0.5 + ((W - 1) * i) / (railCount - 1);
-    return { start: onPlane(u, 0, -rack / 4), end: onPlane(u, L, -rack / 4) };
+    return { start: onPlane(pl, u, 0, -rack / 4), end: onPlane(pl, u, L, -rack / 4) };
   });
   const gapFt = a.gapIn / 12, ms = dims.moduleAlongSlopeIn / 12, mw = dims.moduleAlongWidthIn / 12;
   const rows = Math.round((L + gapFt) / (ms + gapFt)), cols = Math.round((W + gapFt) / (mw + gapFt));
@@ -60,15 +67,15 @@ export function previewGeometry(
   for (let r = 0; r < rows; r++) for (let c = 0; c < cols; c++) {
     const u0 = -W / 2 + c * (mw + gapFt), s0 = r * (ms + gapFt);
     modules.push({
-      row: r, column: c, centre: onPlane(u0 + mw / 2, s0 + ms / 2), alongSlopeFt: ms, alongWidthFt: mw,
-      corners: [onPlane(u0, s0), onPlane(u0 + mw, s0), onPlane(u0 + mw, s0 + ms), onPlane(u0, s0 + ms)],
+      row: r, column: c, centre: onPlane(pl, u0 + mw / 2, s0 + ms / 2), alongSlopeFt: ms, alongWidthFt: mw,
+      corners: [onPlane(pl, u0, s0), onPlane(pl, u0 + mw, s0), onPlane(pl, u0 + mw, s0 + ms), onPlane(pl, u0, s0 + ms)],
     });
   }
   const cx = heights.minClearanceAt.xFt, cy = heights.minClearanceAt.yFt;
   const gp = posts.find((p) => p.id === a.governingPostId) ?? posts[0];
   const wc = a.windCase >= 0 ? st.windCases[a.windCase] : null;
   const cop = wc && wc.force.centreOfPressureFromWindwardEdgeFt !== null
-    ? onPlane(0, wc.windDirectionDeg === 180 ? wc.force.centreOfPressureFromWindwardEdgeFt : L - wc.force.centreOfPressureFromWindwardEdgeFt)
+    ? onPlane(pl, 0, wc.windDirectionDeg === 180 ? wc.force.centreOfPressureFromWindwardEdgeFt : L - wc.force.centreOfPressureFromWindwardEdgeFt)
     : null;
   return {
     units: "ft",
@@ -79,7 +86,7 @@ export function previewGeometry(
     beam: { start: P(-W / 2, 0, beamZ), end: P(W / 2, 0, beamZ) },
     rails, modules,
     dimensions: {
-      clearance: { from: P(cx, cy, g(cx, cy) + heights.minClearanceIn / 12), to: P(cx, cy, g(cx, cy)), valueIn: heights.minClearanceIn },
+      clearance: { from: P(cx, cy, gradeAt(cx, cy, along, across) + heights.minClearanceIn / 12), to: P(cx, cy, gradeAt(cx, cy, along, across)), valueIn: heights.minClearanceIn },
       embedment: { from: P(gp.xFt, 0, gp.gradeZFt), to: P(gp.xFt, 0, gp.bottomZFt), valueIn: a.depthIn, postId: gp.id },
     },
     wind: wc && {

@@ -59,6 +59,10 @@ export interface ArrayLoadState {
 }
 
 const CASES: [WindDirectionDeg, "A" | "B"][] = [[0, "A"], [0, "B"], [180, "A"], [180, "B"]];
+/** The case labels, built once (they are the same strings for every tilt and design). */
+const CASE_LABELS = CASES.map(([dir, lc]) => `γ=${dir}° ${lc}`);
+/** Post ids "P1"…"P20", built once for the same reason. */
+const POST_IDS = Array.from({ length: 20 }, (_, i) => `P${i + 1}`);
 
 export function arrayLoads(input: DesignInput, tiltDeg: number, clearanceTiltDeg: number): ArrayLoadState {
   const { site, array, posts } = input;
@@ -74,14 +78,19 @@ export function arrayLoads(input: DesignInput, tiltDeg: number, clearanceTiltDeg
     edition: site.edition, windSpeedMph: site.windSpeedMph, exposure: site.exposure,
     heightFt: Math.max(0, heights.meanHeightFt), topography: site.topography, groundElevationFt: site.groundElevationFt,
   });
-  const windCases: WindCase[] = CASES.map(([dir, lc]) => {
-    const cn = netPressureCoefficients({ tiltDeg, windDirectionDeg: dir, flow: array.flow })[lc];
+  // CN for each direction once (each call gives both load cases; the cases share it).
+  const cn0 = netPressureCoefficients({ tiltDeg, windDirectionDeg: 0, flow: array.flow });
+  const cn180 = netPressureCoefficients({ tiltDeg, windDirectionDeg: 180, flow: array.flow });
+  const windCases: WindCase[] = [];
+  for (let k = 0; k < CASES.length; k++) {
+    const [dir, lc] = CASES[k];
+    const cn = (dir === 0 ? cn0 : cn180)[lc];
     const force = arrayWindForce({
       qGustlessPsf: velocity.qzWithKdPsf, gustFactor: GUST_FACTOR_RIGID, cn, windDirectionDeg: dir,
       slopeLengthFt: dims.slopeLengthFt, widthFt: dims.widthFt, tiltDeg, rackDepthFt: array.rackDepthIn / 12,
     });
-    return { label: `γ=${dir}° ${lc}`, windDirectionDeg: dir, loadCase: lc, cn, force };
-  });
+    windCases.push({ label: CASE_LABELS[k], windDirectionDeg: dir, loadCase: lc, cn, force });
+  }
   const deadArrayLb = dims.moduleCount * array.moduleWeightLb + array.rackingDeadPsf * dims.surfaceAreaFt2;
   const snow = snowLoad({
     edition: site.edition, groundSnowPsf: site.groundSnowPsf, ce: site.snowExposureCe, ct: site.snowThermalCt,
@@ -92,7 +101,7 @@ export function arrayLoads(input: DesignInput, tiltDeg: number, clearanceTiltDeg
     const share = layout.tributaryWidthFt[i] / dims.widthFt;
     const hp = heights.postHeightAboveGradeFt[i];
     return {
-      id: `P${i + 1}`, xFt, tributaryWidthFt: layout.tributaryWidthFt[i], share, heightAboveGradeFt: hp,
+      id: POST_IDS[i] ?? `P${i + 1}`, xFt, tributaryWidthFt: layout.tributaryWidthFt[i], share, heightAboveGradeFt: hp,
       gradeFt: heights.postGradeFt[i], deadLb: share * deadArrayLb, snowLb: share * snowTotalLb,
       wind: windCases.map(({ force: f }) => ({
         shearLb: share * f.horizontalLb,

@@ -25,12 +25,15 @@ export interface FactoredPostLoad {
   windCase: number;
 }
 
+const NO_WIND = { shearLb: 0, downwardLb: 0, momentAtGradeLbFt: 0 };
+
 export function factoredPostLoads(states: ArrayLoadState[], combos: Combination[]): FactoredPostLoad[] {
   const out: FactoredPostLoad[] = [];
   for (const st of states) {
     for (const p of st.posts) {
       for (const c of combos) {
-        const w = c.windCase >= 0 ? p.wind[c.windCase] : { shearLb: 0, downwardLb: 0, momentAtGradeLbFt: 0 };
+        // NO_WIND is shared and only read (one fewer allocation per wind-free row).
+        const w = c.windCase >= 0 ? p.wind[c.windCase] : NO_WIND;
         out.push({
           postId: p.id,
           tiltDeg: st.tiltDeg,
@@ -53,12 +56,22 @@ export function factoredPostLoads(states: ArrayLoadState[], combos: Combination[
 
 /** Keep only the rows whose (|shear|, |moment|) no other row exceeds in both: the lateral candidates. */
 export function lateralFrontier(rows: FactoredPostLoad[]): FactoredPostLoad[] {
-  const withLoad = rows.filter((r) => r.shearLb !== 0 || r.momentAtGradeLbFt !== 0);
-  return withLoad.filter((r, i) =>
-    !withLoad.some((o, j) => {
-      const P = Math.abs(o.shearLb), M = Math.abs(o.momentAtGradeLbFt);
-      const p = Math.abs(r.shearLb), m = Math.abs(r.momentAtGradeLbFt);
-      return j !== i && P >= p && M >= m && (P > p || M > m || j < i);
-    }),
-  );
+  // Plain loops over precomputed magnitudes: the same test as before (row i goes when some other
+  // row j has P ≥ p and M ≥ m, and is larger in one of them or is an identical earlier row), without
+  // a closure per row; the sweep runs this over every tilt's rows.
+  const withLoad: FactoredPostLoad[] = [];
+  for (let i = 0; i < rows.length; i++) if (rows[i].shearLb !== 0 || rows[i].momentAtGradeLbFt !== 0) withLoad.push(rows[i]);
+  const n = withLoad.length;
+  const P = new Float64Array(n), M = new Float64Array(n);
+  for (let i = 0; i < n; i++) { P[i] = Math.abs(withLoad[i].shearLb); M[i] = Math.abs(withLoad[i].momentAtGradeLbFt); }
+  const out: FactoredPostLoad[] = [];
+  for (let i = 0; i < n; i++) {
+    const p = P[i], m = M[i];
+    let dominated = false;
+    for (let j = 0; j < n; j++) {
+      if (j !== i && P[j] >= p && M[j] >= m && (P[j] > p || M[j] > m || j < i)) { dominated = true; break; }
+    }
+    if (!dominated) out.push(withLoad[i]);
+  }
+  return out;
 }

@@ -51,17 +51,25 @@ export function arrayWindForce(a: {
   // Slope coordinate of each half's centroid measured from the low edge.
   const sWind = a.windDirectionDeg === 180 ? L / 4 : (3 * L) / 4;
   const sLee = L - sWind;
+  // The two halves, written out (no per-call array of pairs to iterate); same operations in the
+  // same order as a loop over [windward, leeward], starting from 0.
   let horizontalLb = 0;
   let downwardLb = 0;
   let momentAtPostTopLbFt = 0;
-  for (const [p, s] of [
-    [pw, sWind],
-    [pl, sLee],
-  ] as const) {
-    const fy = p * halfAreaFt2 * sin;
-    const fz = -p * halfAreaFt2 * cos;
-    const y = (s - L / 2) * cos;
-    const z = (s - L / 2) * sin + a.rackDepthFt;
+  {
+    const fy = pw * halfAreaFt2 * sin;
+    const fz = -pw * halfAreaFt2 * cos;
+    const y = (sWind - L / 2) * cos;
+    const z = (sWind - L / 2) * sin + a.rackDepthFt;
+    horizontalLb += fy;
+    downwardLb -= fz;
+    momentAtPostTopLbFt += fy * z - fz * y;
+  }
+  {
+    const fy = pl * halfAreaFt2 * sin;
+    const fz = -pl * halfAreaFt2 * cos;
+    const y = (sLee - L / 2) * cos;
+    const z = (sLee - L / 2) * sin + a.rackDepthFt;
     horizontalLb += fy;
     downwardLb -= fz;
     momentAtPostTopLbFt += fy * z - fz * y;

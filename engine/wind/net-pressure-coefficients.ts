@@ -30,26 +30,29 @@ function pair(row: FlowRow, flow: Flow, c: "A" | "B"): readonly [number, number]
   return row[flow][c];
 }
 
+// A module-level function rather than a closure inside netPressureCoefficients: this runs for every
+// tilt of every design, and the closure was re-created on each call.
+function pick(rows: readonly FlowRow[], tiltDeg: number, flow: Flow, c: "A" | "B"): CnPair {
+  if (tiltDeg < FREE_ROOF_TILTS_DEG[0]) {
+    const [w, l] = pair(FREE_ROOF_ZERO_ROW, flow, c);
+    return { windward: w, leeward: l };
+  }
+  const t = Math.min(tiltDeg, 45);
+  let i = 0;
+  while (i < FREE_ROOF_TILTS_DEG.length - 2 && t > FREE_ROOF_TILTS_DEG[i + 1]) i++;
+  const t0 = FREE_ROOF_TILTS_DEG[i];
+  const t1 = FREE_ROOF_TILTS_DEG[i + 1];
+  const f = (t - t0) / (t1 - t0);
+  const a = pair(rows[i], flow, c);
+  const b = pair(rows[i + 1], flow, c);
+  return { windward: a[0] + f * (b[0] - a[0]), leeward: a[1] + f * (b[1] - a[1]) };
+}
+
 export function netPressureCoefficients(args: { tiltDeg: number; windDirectionDeg: WindDirectionDeg; flow: Flow }): NetPressureCoefficients {
   requireRange("array.tiltDeg", args.tiltDeg, 0, 60, "Tilt", "degrees");
   requireOneOf("windDirectionDeg", args.windDirectionDeg, [0, 180] as const, "Wind direction");
   requireOneOf("array.flow", args.flow, ["clear", "obstructed"] as const, "Wind flow beneath the array");
   const { tiltDeg, flow } = args;
   const rows = args.windDirectionDeg === 0 ? FREE_ROOF_GAMMA_0 : FREE_ROOF_GAMMA_180;
-  const pick = (c: "A" | "B"): CnPair => {
-    if (tiltDeg < FREE_ROOF_TILTS_DEG[0]) {
-      const [w, l] = pair(FREE_ROOF_ZERO_ROW, flow, c);
-      return { windward: w, leeward: l };
-    }
-    const t = Math.min(tiltDeg, 45);
-    let i = 0;
-    while (i < FREE_ROOF_TILTS_DEG.length - 2 && t > FREE_ROOF_TILTS_DEG[i + 1]) i++;
-    const t0 = FREE_ROOF_TILTS_DEG[i];
-    const t1 = FREE_ROOF_TILTS_DEG[i + 1];
-    const f = (t - t0) / (t1 - t0);
-    const a = pair(rows[i], flow, c);
-    const b = pair(rows[i + 1], flow, c);
-    return { windward: a[0] + f * (b[0] - a[0]), leeward: a[1] + f * (b[1] - a[1]) };
-  };
-  return { A: pick("A"), B: pick("B") };
+  return { A: pick(rows, tiltDeg, flow, "A"), B: pick(rows, tiltDeg, flow, "B") };
 }
