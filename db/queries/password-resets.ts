@@ -1,16 +1,17 @@
 import { db } from "../client";
 
-export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date): Promise<void> {
-  await db("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
-}
-
-/** How many reset links were made for a person lately; more than a few an hour is someone else's mischief. */
-export async function countRecentResets(userId: string, minutes: number): Promise<number> {
-  const [row] = await db("password_resets")
-    .where("user_id", userId)
-    .where("created_at", ">", db.raw(`now() - make_interval(mins => ?)`, [minutes]))
-    .count({ n: "*" });
-  return Number(row.n);
+/**
+ * Records a reset link unless the person already had `maxPerHour` in the last hour (someone may be
+ * flooding their inbox). The person's row is locked so simultaneous requests count correctly.
+ */
+export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date, maxPerHour: number): Promise<boolean> {
+  return db.transaction(async (trx) => {
+    await trx("users").where("id", userId).forUpdate().first("id");
+    const [row] = await trx("password_resets").where("user_id", userId).where("created_at", ">", trx.raw("now() - interval '1 hour'")).count({ n: "*" });
+    if (Number(row.n) >= maxPerHour) return false;
+    await trx("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
+    return true;
+  });
 }
 
 export type ResetState = "valid" | "used" | "expired" | "unknown";

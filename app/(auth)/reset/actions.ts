@@ -8,7 +8,7 @@ import { requestIp } from "@/app/_lib/request-ip";
 import { resetRequestSchema } from "@/app/_lib/schemas/account";
 import { PASSWORD_RESET_TTL_MS, newToken } from "@/app/_lib/tokens";
 import { recordAudit } from "@/db/queries/audit";
-import { countRecentResets, createPasswordReset } from "@/db/queries/password-resets";
+import { createPasswordReset } from "@/db/queries/password-resets";
 import { findSignInCandidate, findUserByEmail } from "@/db/queries/users";
 
 /** More links than this per hour for one person are not sent (someone may be flooding their inbox). */
@@ -16,9 +16,9 @@ const MAX_LINKS_PER_HOUR = 3;
 
 async function issueResetLink(email: string, ip: string): Promise<void> {
   const user = await findUserByEmail(email);
-  if (!user || (await countRecentResets(user.id, 60)) >= MAX_LINKS_PER_HOUR) return;
+  if (!user) return;
   const { token, tokenHash } = newToken();
-  await createPasswordReset(user.id, tokenHash, new Date(Date.now() + PASSWORD_RESET_TTL_MS));
+  if (!(await createPasswordReset(user.id, tokenHash, new Date(Date.now() + PASSWORD_RESET_TTL_MS), MAX_LINKS_PER_HOUR))) return;
   await sendMail({
     to: user.email,
     subject: "Set a new Pierwise password",
