@@ -39,9 +39,10 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
     () => (input.array.tiltSettingsDeg?.length ? [...new Set([input.array.tiltDeg, ...input.array.tiltSettingsDeg])].sort((a, b) => a - b) : null),
     [input.array.tiltDeg, input.array.tiltSettingsDeg],
   );
-  const [chosenTilt, setChosenTilt] = useState<number | null>(null);
-  // A setting that left the list (the input changed) falls back to the design's own tilt.
-  const tiltDeg = chosenTilt !== null && settings?.includes(chosenTilt) ? chosenTilt : null;
+  const [chosen, setChosen] = useState<{ designTiltDeg: number; tiltDeg: number } | null>(null);
+  // A choice lapses when the design's own tilt is edited or the setting leaves the list, so an edit
+  // in the editor always shows at once.
+  const tiltDeg = chosen && chosen.designTiltDeg === input.array.tiltDeg && settings?.includes(chosen.tiltDeg) ? chosen.tiltDeg : null;
   const { geometry, error } = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
   const figures = useMemo(() => previewFigures(geometry, unitSystem), [geometry, unitSystem]);
   const [webgl, setWebgl] = useState(webglAvailable);
@@ -59,7 +60,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
         settings={settings}
         designTiltDeg={input.array.tiltDeg}
         shownTiltDeg={shownTilt}
-        onTilt={setChosenTilt}
+        onTilt={(t) => setChosen({ designTiltDeg: input.array.tiltDeg, tiltDeg: t })}
       />
       <div className="relative" style={{ height }}>
         {webgl ? (

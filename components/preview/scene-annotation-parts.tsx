@@ -4,9 +4,9 @@ import { useFrame } from "@react-three/fiber";
 import { useMemo, useRef, useState } from "react";
 import { Vector3, type Group, type PerspectiveCamera } from "three";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
-import { clearanceDimension, embedmentDimension, northMarker, windArrow, type DimensionLine } from "./scene-annotations";
+import { arrowParts, clearanceDimension, embedmentDimension, northMarker, windArrow, type DimensionLine } from "./scene-annotations";
 import type { Bounds } from "./camera-framing";
-import { segment, type Vec3 } from "./scene-mapping";
+import type { Vec3 } from "./scene-mapping";
 import { latinOnly, windSceneLabel, type PreviewFigures } from "./preview-labels";
 import { COLOURS, FONT_URL } from "./scene-style";
 import { MATERIALS, UNIT_CONE, UNIT_CYLINDER } from "./shared-resources";
@@ -66,49 +66,40 @@ function Dimension({ d, color, text }: { d: DimensionLine; color: string; text: 
   );
 }
 
-/** Label size follows the scene's size so labels stay readable on a 3-module or a 200-module array. */
-export const labelSizeFor = (bounds: Bounds) => Math.max(0.4, bounds.radiusFt * 0.045);
+/** Arrow and marker sizes follow the scene's size, so they read on a 3-module or a 300-module array. */
+const markerSizeFor = (bounds: Bounds) => Math.max(0.4, bounds.radiusFt * 0.045);
+
+function Arrow({ tail, head, radiusFt, material }: { tail: Vec3; head: Vec3; radiusFt: number; material: typeof MATERIALS.wind }) {
+  const { shaft, cone } = useMemo(() => arrowParts(tail, head), [tail, head]);
+  return (
+    <group>
+      <mesh geometry={UNIT_CYLINDER} material={material} position={shaft.position} quaternion={shaft.quaternion} scale={[radiusFt * 2, shaft.lengthFt, radiusFt * 2]} />
+      <mesh geometry={UNIT_CONE} material={material} position={cone.position} quaternion={cone.quaternion} scale={[radiusFt * 5, cone.lengthFt, radiusFt * 5]} />
+    </group>
+  );
+}
 
 export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figures: PreviewFigures; bounds: Bounds }) {
-  const size = labelSizeFor(bounds);
+  const size = markerSizeFor(bounds);
   const clearance = useMemo(() => clearanceDimension(g), [g]);
   const embedment = useMemo(() => embedmentDimension(g), [g]);
   const wind = useMemo(() => windArrow(g, bounds.radiusFt * 0.45), [g, bounds.radiusFt]);
   const north = useMemo(() => northMarker(g), [g]);
-  const shaft = wind ? segment(wind.tail, wind.head) : null;
-  const shaftRadius = size * 0.18;
-  const northTip: Vec3 = [north.at[0] + north.north[0] * size * 3, north.at[1] + north.north[1] * size * 3, north.at[2] + north.north[2] * size * 3];
-  const northShaft = segment(north.at, northTip);
+  const northTip = useMemo<Vec3>(() => [north.at[0] + north.north[0] * size * 3, north.at[1], north.at[2] + north.north[2] * size * 3], [north, size]);
 
   return (
     <group>
       <Dimension d={clearance} color={COLOURS.clearance} text={`Clearance ${figures.clearance}`} />
       <Dimension d={embedment} color={COLOURS.embedment} text={`Embedment ${figures.embedment}`} />
-      {wind && shaft ? (
+      {wind ? (
         <group>
-          <mesh geometry={UNIT_CYLINDER} material={MATERIALS.wind} position={shaft.position} quaternion={shaft.quaternion} scale={[shaftRadius * 2, shaft.lengthFt * 0.8, shaftRadius * 2]} />
-          <mesh
-            geometry={UNIT_CONE}
-            material={MATERIALS.wind}
-            position={[wind.head[0] - wind.direction[0] * shaft.lengthFt * 0.1, wind.head[1] - wind.direction[1] * shaft.lengthFt * 0.1, wind.head[2] - wind.direction[2] * shaft.lengthFt * 0.1]}
-            quaternion={shaft.quaternion}
-            scale={[shaftRadius * 5, shaft.lengthFt * 0.2, shaftRadius * 5]}
-          />
+          <Arrow tail={wind.tail} head={wind.head} radiusFt={size * 0.18} material={MATERIALS.wind} />
           <Label at={[wind.tail[0], wind.tail[1] + size * 1.2, wind.tail[2]]} text={g.wind ? windSceneLabel(g.wind) : ""} color={COLOURS.wind} side="center" />
         </group>
       ) : null}
-      <group>
-        <mesh geometry={UNIT_CYLINDER} material={MATERIALS.north} position={northShaft.position} quaternion={northShaft.quaternion} scale={[size * 0.15, northShaft.lengthFt * 0.7, size * 0.15]} />
-        <mesh
-          geometry={UNIT_CONE}
-          material={MATERIALS.north}
-          position={[northTip[0] - north.north[0] * northShaft.lengthFt * 0.15, northTip[1], northTip[2] - north.north[2] * northShaft.lengthFt * 0.15]}
-          quaternion={northShaft.quaternion}
-          scale={[size * 0.8, northShaft.lengthFt * 0.3, size * 0.8]}
-        />
-        <Label at={[northTip[0], northTip[1] + size, northTip[2] - size * 0.6]} text="N" color={COLOURS.north} px={16} side="center" />
-        <Label at={[north.at[0], north.at[1] + size * 0.2, north.at[2] + size * 1.5]} text={north.assumption} color={COLOURS.north} px={11} />
-      </group>
+      <Arrow tail={north.at} head={northTip} radiusFt={size * 0.08} material={MATERIALS.north} />
+      <Label at={[northTip[0], northTip[1] + size, northTip[2]]} text="N" color={COLOURS.north} px={16} side="center" />
+      <Label at={[north.at[0], north.at[1] + size * 0.2, north.at[2] + size * 1.5]} text={north.assumption} color={COLOURS.north} px={11} />
     </group>
   );
 }

@@ -4,7 +4,7 @@
  * measured points and values are the engine's.
  */
 import type { PreviewGeometry } from "@/engine/geometry/preview";
-import { toScene, type Vec3 } from "./scene-mapping";
+import { segment, toScene, type Segment, type Vec3 } from "./scene-mapping";
 import { DRAW } from "./scene-style";
 
 export interface DimensionLine { from: Vec3; to: Vec3; ticks: [Vec3, Vec3][]; labelAt: Vec3 }
@@ -59,4 +59,17 @@ export function windArrow(g: PreviewGeometry, lengthFt: number): WindArrow | nul
 export function northMarker(g: PreviewGeometry): { at: Vec3; north: Vec3; assumption: string } {
   const corner = g.ground.corners[0];
   return { at: toScene(corner), north: toScene({ xFt: 0, yFt: 1, zFt: 0 }), assumption: "array assumed facing south" };
+}
+
+/**
+ * An arrow drawn as a shaft and a cone: the cone takes the last `headFraction` of the length and
+ * ends at `head`. Drawing only.
+ */
+export function arrowParts(tail: Vec3, head: Vec3, headFraction = 0.25): { shaft: Segment; cone: Segment } {
+  const neck: Vec3 = [
+    head[0] + (tail[0] - head[0]) * headFraction,
+    head[1] + (tail[1] - head[1]) * headFraction,
+    head[2] + (tail[2] - head[2]) * headFraction,
+  ];
+  return { shaft: segment(tail, neck), cone: segment(neck, head) };
 }

@@ -10,7 +10,7 @@ import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { cameraForView, sceneBounds, type ViewName } from "@/components/preview/camera-framing";
 import { sideElevation } from "@/components/preview/elevation-mapping";
 import { formatForceLb, formatLengthIn, latinOnly, previewFigures } from "@/components/preview/preview-labels";
-import { clearanceDimension, embedmentDimension, northMarker, windArrow } from "@/components/preview/scene-annotations";
+import { arrowParts, clearanceDimension, embedmentDimension, northMarker, windArrow } from "@/components/preview/scene-annotations";
 import { toScene } from "@/components/preview/scene-mapping";
 
 const demo = sizeParsedDesign(designInputSchema.parse(defaultDesignInput)).geometryPreview;
@@ -49,6 +49,15 @@ describe.each(CASES)("annotations (%s)", (_name, g) => {
     const along = new Vector3(...a.head).sub(new Vector3(...a.tail));
     expect(along.length()).toBeCloseTo(5, 9);
     expect(along.normalize().dot(new Vector3(...toScene(g.wind!.direction)))).toBeCloseTo(1, 9);
+  });
+
+  it("the drawn wind arrow (shaft then cone) runs unbroken from the tail to the centre of pressure", () => {
+    const a = windArrow(g, 5)!;
+    const { shaft, cone } = arrowParts(a.tail, a.head);
+    shaft.start.forEach((v, i) => expect(v).toBeCloseTo(a.tail[i], 9));
+    shaft.end.forEach((v, i) => expect(v).toBeCloseTo(cone.start[i], 9));
+    cone.end.forEach((v, i) => expect(v).toBeCloseTo(a.head[i], 9));
+    expect(shaft.lengthFt + cone.lengthFt).toBeCloseTo(5, 9);
   });
 
   it("the north marker points to the engine's +y (array assumed facing south, its modules facing −y)", () => {
