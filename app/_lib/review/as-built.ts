@@ -7,20 +7,14 @@ import { sendMail } from "@/app/_lib/mail";
 import { deleteObject, putObject } from "@/app/_lib/storage";
 import type { DesignResult } from "@/engine";
 import { db } from "@/db/client";
-import { GROUND_FOUND, insertAsBuilt, type GroundFound } from "@/db/queries/as-built";
+import { GROUND_FOUND, insertAsBuilt } from "@/db/queries/as-built";
 import { recordAudit } from "@/db/queries/audit";
 import { insertHold } from "@/db/queries/holds";
 import { userEmailAndName } from "@/db/queries/review-people";
 import { reviewsOfRevision } from "@/db/queries/reviews";
+import { GROUND_FOUND_LABELS } from "./ground-labels";
 import { ownedRevision } from "./workflow";
 
-export const GROUND_FOUND_LABELS: Record<GroundFound, string> = {
-  as_expected: "As expected",
-  rock: "Rock",
-  water: "Water in the hole",
-  fill: "Fill or loose soil",
-  caving: "Caving sides",
-};
 
 const number = (label: string, min: number, max: number) =>
   z.coerce.number({ error: `${label} must be a number between ${min} and ${max} in` })

@@ -1,16 +1,8 @@
+import { STATUS_LABELS, type DisplayStatus } from "./status-labels";
 import { openHolds, type HoldRecord } from "@/db/queries/holds";
 import { newerApprovedRevision, reviewsOfRevision, type ReviewRecord, type RevisionContext, type RevisionStatus } from "@/db/queries/reviews";
 
-export type DisplayStatus = RevisionStatus | "superseded";
-
-/** Status words, never colour alone. */
-export const STATUS_LABELS: Record<DisplayStatus, string> = {
-  draft: "Draft",
-  in_review: "In review",
-  approved: "Approved",
-  changes_requested: "Changes requested",
-  superseded: "Superseded",
-};
+export { STATUS_LABELS, type DisplayStatus };
 
 export function displayStatus(status: RevisionStatus, supersededBy: { number: number } | undefined): DisplayStatus {
   return status === "approved" && supersededBy ? "superseded" : status;

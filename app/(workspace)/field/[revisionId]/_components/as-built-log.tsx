@@ -1,0 +1,36 @@
+import { GROUND_FOUND_LABELS } from "@/app/_lib/review/ground-labels";
+import type { AsBuiltEntry } from "@/db/queries/as-built";
+
+/** What the crew recorded, hole by hole, with what differs from the spec said in words. */
+export function AsBuiltLog({ entries, depthIn, diameterIn }: { entries: AsBuiltEntry[]; depthIn: number; diameterIn: number }) {
+  if (entries.length === 0) return <p className="mt-3 text-sm text-slate-600">No hole recorded yet.</p>;
+  return (
+    <ul className="mt-4 space-y-3">
+      {entries.map((e) => {
+        const problems = [
+          e.measuredDepthIn < depthIn ? `shallower than ${depthIn} in` : null,
+          e.measuredDiameterIn < diameterIn ? `narrower than ${diameterIn} in` : null,
+          e.groundFound !== "as_expected" ? GROUND_FOUND_LABELS[e.groundFound].toLowerCase() : null,
+        ].filter(Boolean);
+        return (
+          <li key={e.id} className={`rounded-md border p-3 text-sm ${problems.length ? "border-red-400 bg-red-50" : "border-slate-200"}`}>
+            <p className="font-semibold">Post {e.postId}: {e.measuredDiameterIn} in × {e.measuredDepthIn} in deep, ground {GROUND_FOUND_LABELS[e.groundFound].toLowerCase()}</p>
+            <p>{problems.length ? <strong className="text-red-800">Does not match the spec: {problems.join(", ")}</strong> : "Matches the spec"}</p>
+            {e.notes ? <p className="text-slate-700">{e.notes}</p> : null}
+            <p className="text-xs text-slate-500">{e.recordedByName}, {e.recordedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
+            {e.photoKeys.length ? (
+              <div className="mt-2 flex flex-wrap gap-2">
+                {e.photoKeys.map((_, i) => (
+                  <a key={i} href={`/api/as-built/${e.id}/photos/${i}`}>
+                    {/* eslint-disable-next-line @next/next/no-img-element */}
+                    <img src={`/api/as-built/${e.id}/photos/${i}`} alt={`Hole ${e.postId}, photo ${i + 1}`} className="h-20 w-20 rounded object-cover" />
+                  </a>
+                ))}
+              </div>
+            ) : null}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}

@@ -1,0 +1,153 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import QRCode from "qrcode";
+import { hasRole, requireUser } from "@/app/_lib/auth";
+import { env } from "@/app/_lib/env";
+import { forPage } from "@/app/_lib/page-access";
+import { ftIn, quarterIn } from "@/app/_lib/review/field-format";
+import { fmt } from "@/app/_lib/review/report-model";
+import { revisionStanding } from "@/app/_lib/review/standing";
+import { ownedRevision } from "@/app/_lib/review/workflow";
+import { HoldBanner } from "@/components/review/hold-banner";
+import { StatusBadge } from "@/components/review/status-badge";
+import { Caution, FIELD_CAUTIONS } from "@/components/ui/caution";
+import { asBuiltEntries } from "@/db/queries/as-built";
+import { AsBuiltForm } from "./_components/as-built-form";
+import { AsBuiltLog } from "./_components/as-built-log";
+import { Checklist } from "./_components/checklist";
+import { LaserCuts } from "./_components/laser-cuts";
+import { PrintButton } from "./_components/print-button";
+
+export const metadata: Metadata = { title: "Field spec" };
+
+const CHECKLIST = [
+  "Utility locate called and marks on site before digging",
+  "Every hole inspected (diameter, depth, ground) before the pour",
+  "Posts level and plumb, set to the laser cut list",
+  "Concrete cured before the rack and modules load the posts (follow the mix's cure time)",
+  "All fasteners tightened to the racking maker's torque",
+];
+
+export default async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
+  const { revisionId } = await params;
+  const { user, ctx } = await forPage(async () => {
+    const user = await requireUser();
+    return { user, ctx: await ownedRevision(user, revisionId) };
+  }, `/field/${revisionId}`);
+  const standing = await revisionStanding(ctx);
+
+  if (ctx.status !== "approved") {
+    return (
+      <div className="mx-auto max-w-2xl space-y-4">
+        <section role="alert" className="rounded-lg border-2 border-red-600 bg-red-50 p-5 text-red-950">
+          <h1 className="text-2xl font-bold">Not approved for construction</h1>
+          <p className="mt-2 text-base">
+            Revision {ctx.number} of {ctx.designName} ({ctx.projectName}) is <strong>{standing.label.toLowerCase()}</strong>. Do not dig, pour or set posts from it.
+            Only a revision an engineer has approved has a field spec.
+          </p>
+          <p className="mt-3"><Link href="/field" className="font-medium underline">See the approved field specs</Link></p>
+        </section>
+        <Caution />
+      </div>
+    );
+  }
+
+  const r = ctx.result;
+  const url = `${env.appUrl}/field/${ctx.id}`;
+  const qr = await QRCode.toString(url, { type: "svg", margin: 0, errorCorrectionLevel: "M" });
+  const entries = await asBuiltEntries(ctx.id);
+  const x0 = r.geometry.posts[0]?.xFt ?? 0;
+  const positions = new Map(r.geometry.posts.map((p) => [p.id, (p.xFt - x0) * 12]));
+  const a = standing.approval;
+  const tilts = ctx.result.input.array.tiltSettingsDeg;
+  const big = "text-2xl font-bold tabular-nums";
+
+  return (
+    <div className="field-spec mx-auto max-w-3xl space-y-4">
+      <style>{`@page { size: letter; margin: 10mm; } @media print { .field-spec { font-size: 11px; } .field-spec section { break-inside: avoid; padding: 6px !important; } }`}</style>
+      {standing.supersededBy ? (
+        <section role="alert" className="rounded-lg border-2 border-slate-800 bg-slate-900 p-4 text-white">
+          <p className="text-lg font-bold">SUPERSEDED: build from revision {standing.supersededBy.number} instead.</p>
+          <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
+        </section>
+      ) : null}
+      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} />
+
+      <header className="flex items-start justify-between gap-4">
+        <div>
+          <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
+          <h1 className="text-2xl font-semibold">{ctx.designName}</h1>
+          <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">Revision {ctx.number} <StatusBadge status={standing.status} onHold={standing.holds.length > 0} /></p>
+          {a ? <p className="text-sm text-slate-700">Approved for construction by {a.engineerName}, licence {a.licenceNumber} ({a.licenceState}), {a.decidedAt?.toISOString().slice(0, 10)}</p> : null}
+        </div>
+        <figure className="hidden w-24 shrink-0 text-center print:block">
+          <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: qr }} />
+          <figcaption className="mt-1 text-[9px] leading-tight">Scan to open this spec online</figcaption>
+        </figure>
+      </header>
+      <div className="no-print flex flex-wrap gap-2">
+        <PrintButton />
+        <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md border border-slate-300 bg-white px-4 py-3 text-base">Calculation report (PDF)</a>
+      </div>
+
+      <section aria-labelledby="holes-h" className="rounded-lg border-2 border-accent-700 bg-white p-4">
+        <h2 id="holes-h" className="text-lg font-semibold">Every hole</h2>
+        <div className="mt-2 grid grid-cols-2 gap-3">
+          <div><p className="text-sm text-slate-600">Diameter</p><p className={big}>{quarterIn(r.footing.diameterIn)}</p></div>
+          <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p><p className="text-sm">{ftIn(r.footing.depthIn)}</p></div>
+          <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{r.footing.post.size} in std. pipe, {r.field.posts.length} posts</p></div>
+          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}</div>
+          <div className="col-span-2"><p className="text-sm text-slate-600">Lowest panel edge above grade (hold at least)</p><p className={big}>{quarterIn(r.geometry.minClearanceIn)}</p></div>
+        </div>
+      </section>
+
+      <section aria-labelledby="posts-h" className="rounded-lg border border-slate-200 bg-white p-4">
+        <h2 id="posts-h" className="text-lg font-semibold">Posts</h2>
+        <p className="text-sm text-slate-600">Positions measured along the row from post {r.field.posts[0]?.id}. Post length = above grade + below grade.</p>
+        <ul className="mt-2 grid gap-3 sm:grid-cols-2">
+          {r.field.posts.map((p) => (
+            <li key={p.id} className="rounded-md border border-slate-300 p-3">
+              <p className="text-lg font-bold">Post {p.id}</p>
+              <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-base">
+                <dt className="text-slate-600">Position</dt><dd className="font-semibold">{ftIn(positions.get(p.id) ?? 0)} from {r.field.posts[0]?.id}</dd>
+                <dt className="text-slate-600">Hole</dt><dd className="font-semibold">{quarterIn(r.footing.diameterIn)} × {quarterIn(p.embedmentIn)} deep</dd>
+                <dt className="text-slate-600">Above grade</dt><dd className="font-semibold">{ftIn(p.heightAboveGradeIn)}</dd>
+                <dt className="text-slate-600">Below grade</dt><dd className="font-semibold">{ftIn(p.embedmentIn)}</dd>
+                <dt className="text-slate-600">Cut post to</dt><dd className="font-semibold">{ftIn(p.postLengthIn)}</dd>
+              </dl>
+            </li>
+          ))}
+        </ul>
+        <p className="mt-2 text-sm text-slate-600">{r.field.note}</p>
+      </section>
+
+      <section aria-labelledby="concrete-h" className="rounded-lg border border-slate-200 bg-white p-4">
+        <h2 id="concrete-h" className="text-lg font-semibold">Concrete to order</h2>
+        <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (includes {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste; {fmt(r.concrete.job.withWasteYd3, 2)} yd³ needed)</p>
+        <p className="text-base">or <strong>{r.concrete.job.bags80Lb} bags of 80 lb</strong> premix ({r.concrete.job.bags60Lb} × 60 lb)</p>
+        <p className="text-sm text-slate-600">About {fmt(r.concrete.perHole.volumeFt3, 1)} ft³ and {r.concrete.perHole.bags80Lb} × 80 lb bags per hole.</p>
+      </section>
+
+      <section aria-labelledby="check-h" className="rounded-lg border border-slate-200 bg-white p-4">
+        <h2 id="check-h" className="text-lg font-semibold">Checklist</h2>
+        <div className="mt-2"><Checklist items={CHECKLIST} /></div>
+      </section>
+
+      <section aria-labelledby="safety-h" className="rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
+        <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{FIELD_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+      </section>
+      <Caution />
+
+      <LaserCuts postIds={r.field.posts.map((p) => p.id)} />
+
+      <section aria-labelledby="asbuilt-h" className="no-print rounded-lg border border-slate-200 bg-white p-4">
+        <h2 id="asbuilt-h" className="text-lg font-semibold">As-built log</h2>
+        {hasRole(user, "installer", "engineer") ? (
+          <div className="mt-2"><AsBuiltForm revisionId={ctx.id} postIds={r.field.posts.map((p) => p.id)} diameterIn={r.footing.diameterIn} depthIn={r.footing.depthIn} /></div>
+        ) : <p className="mt-1 text-sm text-slate-600">The crew (installer role) records each hole here.</p>}
+        <AsBuiltLog entries={entries} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
+      </section>
+    </div>
+  );
+}

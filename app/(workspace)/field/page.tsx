@@ -1,0 +1,40 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requireUser } from "@/app/_lib/auth";
+import { forPage } from "@/app/_lib/page-access";
+import { quarterIn } from "@/app/_lib/review/field-format";
+import { StatusBadge } from "@/components/review/status-badge";
+import { Caution } from "@/components/ui/caution";
+import { approvedSpecs } from "@/db/queries/review-queue";
+
+export const metadata: Metadata = { title: "Field specs" };
+
+/** The crew's list: only approved revisions have a field spec; superseded ones say so. */
+export default async function FieldSpecsPage() {
+  const user = await forPage(() => requireUser(), "/field");
+  const specs = await approvedSpecs(user.organisationId);
+  return (
+    <div className="mx-auto max-w-3xl space-y-4">
+      <h1 className="text-2xl font-semibold">Field specs</h1>
+      <p className="text-sm text-slate-600">Only designs an engineer has approved appear here. Build from a current spec, never a superseded one.</p>
+      {specs.length === 0 ? <p className="rounded-lg border border-slate-200 bg-white p-4 text-base">No design is approved for construction yet.</p> : (
+        <ul className="space-y-3">
+          {specs.map((s) => (
+            <li key={s.revisionId}>
+              <Link href={`/field/${s.revisionId}`} className={`block rounded-lg border bg-white p-4 hover:border-accent-600 ${s.superseded ? "border-slate-200 opacity-70" : "border-slate-300"}`}>
+                <p className="text-lg font-semibold">{s.projectName}: {s.designName}</p>
+                {s.projectAddress ? <p className="text-sm text-slate-600">{s.projectAddress}</p> : null}
+                <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">
+                  Revision {s.number} <StatusBadge status={s.superseded ? "superseded" : "approved"} onHold={s.onHold} />
+                  {s.approvedAt ? <span className="text-slate-600">approved {s.approvedAt.toISOString().slice(0, 10)}</span> : null}
+                </p>
+                <p className="mt-1 text-base">{s.posts} holes, {quarterIn(s.diameterIn)} across × {quarterIn(s.depthIn)} deep</p>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+      <Caution />
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+"use client";
+
+import { useActionState, useState } from "react";
+import { FormStatus, SubmitButton } from "@/components/ui/form";
+import type { ActionState } from "@/components/ui/action-state";
+import { decideReviewAction } from "../actions";
+
+/**
+ * Approve or request changes. Each comment may be pinned to an input; requesting changes needs
+ * at least one comment. A signed letter may go with an approval.
+ */
+export function DecisionForm({ revisionId, inputs, licenceNote }: { revisionId: string; inputs: { path: string; label: string }[]; licenceNote: string }) {
+  const [state, action] = useActionState<ActionState, FormData>(decideReviewAction, {});
+  const [count, setCount] = useState(1);
+  const rows = Math.max(count, ...Object.keys(state.values ?? {}).map((k) => Number(k.match(/^comment\.(\d+)\./)?.[1] ?? -1) + 1));
+  const err = (name: string) => state.fieldErrors?.[name];
+  return (
+    <form action={action} className="space-y-4" encType="multipart/form-data">
+      <input type="hidden" name="revisionId" value={revisionId} />
+      <fieldset className="space-y-2">
+        <legend className="text-sm font-medium">Decision</legend>
+        <label className="flex items-center gap-2 text-sm">
+          <input type="radio" name="decision" value="request-changes" defaultChecked={state.values?.decision !== "approve"} /> Request changes
+        </label>
+        <label className="flex items-center gap-2 text-sm">
+          <input type="radio" name="decision" value="approve" defaultChecked={state.values?.decision === "approve"} /> Approve for construction
+        </label>
+        {err("decision") ? <p className="text-sm text-red-700">{err("decision")!.join(" ")}</p> : null}
+      </fieldset>
+      <fieldset className="space-y-3">
+        <legend className="text-sm font-medium">Comments (pin each to an input, or leave it general)</legend>
+        {Array.from({ length: rows }, (_, i) => (
+          <div key={i} className="space-y-1 rounded-md border border-slate-200 p-2">
+            <label htmlFor={`comment-${i}-field`} className="block text-xs text-slate-600">Comment {i + 1} is about</label>
+            <select id={`comment-${i}-field`} name={`comment.${i}.fieldPath`} defaultValue={state.values?.[`comment.${i}.fieldPath`] ?? ""}
+              className="block w-full rounded-md border border-slate-300 bg-white px-2 py-1 text-sm">
+              <option value="">The design in general</option>
+              {inputs.map((f) => <option key={f.path} value={f.path}>{f.label} ({f.path})</option>)}
+            </select>
+            <label htmlFor={`comment-${i}-body`} className="sr-only">Comment {i + 1}</label>
+            <textarea id={`comment-${i}-body`} name={`comment.${i}.body`} rows={2} defaultValue={state.values?.[`comment.${i}.body`] ?? ""}
+              placeholder="What should change, and why"
+              aria-invalid={err(`comments.${i}.fieldPath`) || err(`comments.${i}.body`) ? true : undefined}
+              className="block w-full rounded-md border border-slate-300 px-2 py-1 text-sm aria-[invalid]:border-red-600" />
+            {err(`comments.${i}.fieldPath`) || err(`comments.${i}.body`) ? <p className="text-sm text-red-700">{[...(err(`comments.${i}.fieldPath`) ?? []), ...(err(`comments.${i}.body`) ?? [])].join(" ")}</p> : null}
+          </div>
+        ))}
+        {err("comments") ? <p className="text-sm text-red-700">{err("comments")!.join(" ")}</p> : null}
+        <button type="button" onClick={() => setCount(rows + 1)} className="rounded-md border border-slate-300 px-3 py-1 text-sm hover:bg-slate-50">Add another comment</button>
+      </fieldset>
+      <div className="space-y-1">
+        <label htmlFor="letter" className="block text-sm font-medium">Signed letter (optional, with an approval; PDF or image up to 10 MB)</label>
+        <input id="letter" name="letter" type="file" accept="application/pdf,image/*" className="block text-sm" aria-describedby={err("letter") ? "letter-error" : undefined} />
+        {err("letter") ? <p id="letter-error" className="text-sm text-red-700">{err("letter")!.join(" ")}</p> : null}
+      </div>
+      <p className="text-xs text-slate-600">{licenceNote}</p>
+      <div className="flex flex-wrap items-center gap-3">
+        <SubmitButton pendingText="Recording…">Record decision</SubmitButton>
+        <FormStatus state={state} />
+      </div>
+    </form>
+  );
+}

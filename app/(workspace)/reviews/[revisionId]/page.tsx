@@ -1,0 +1,170 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { hasRole, requireUser } from "@/app/_lib/auth";
+import { forPage } from "@/app/_lib/page-access";
+import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
+import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputRows, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
+import { revisionStanding } from "@/app/_lib/review/standing";
+import { ownedRevision } from "@/app/_lib/review/workflow";
+import { fieldLabel } from "@/components/design/fields";
+import { inputChanges } from "@/components/design/revision-diff";
+import { HoldBanner } from "@/components/review/hold-banner";
+import { PlainTable } from "@/components/review/plain-table";
+import { ReviewPreview } from "@/components/review/review-preview";
+import { StatusBadge } from "@/components/review/status-badge";
+import { Caution } from "@/components/ui/caution";
+import type { DesignInput } from "@/engine";
+import { listProjectFiles } from "@/db/queries/project-files";
+import { organisationEngineers } from "@/db/queries/review-people";
+import { lastReviewed, lastReviewedBy } from "@/db/queries/review-queue";
+import { DecisionForm } from "./_components/decision-form";
+import { ReviewHistory } from "./_components/review-history";
+import { SubmitForm, type EngineerChoice } from "./_components/submit-form";
+
+export const metadata: Metadata = { title: "Review" };
+
+export default async function ReviewPage({ params }: { params: Promise<{ revisionId: string }> }) {
+  const { revisionId } = await params;
+  const { user, ctx } = await forPage(async () => {
+    const user = await requireUser();
+    return { user, ctx: await ownedRevision(user, revisionId) };
+  }, `/reviews/${revisionId}`);
+  const standing = await revisionStanding(ctx);
+  const r = ctx.result;
+  const isEngineer = hasRole(user, "engineer");
+  const canSubmit = hasRole(user, "designer") && (ctx.status === "draft" || ctx.status === "changes_requested");
+  const canDecide = isEngineer && ctx.status === "in_review";
+  const [files, previous, engineers, eligibility] = await Promise.all([
+    listProjectFiles(ctx.projectId, { pageSize: 50 }),
+    isEngineer ? lastReviewedBy(ctx.designId, ctx.number, user.userId) : lastReviewed(ctx.designId, ctx.number),
+    canSubmit ? organisationEngineers(user.organisationId) : Promise.resolve([]),
+    canDecide ? licenceEligibility(user.userId, ctx.projectState) : Promise.resolve(null),
+  ]);
+  const choices: EngineerChoice[] = await Promise.all(
+    engineers.filter((e) => e.userId !== user.userId).map(async (e) => {
+      const ok = await engineerEligibility(e.userId, e.name, ctx.projectState);
+      return { userId: e.userId, name: e.name, eligible: ok.ok, note: ok.ok ? `${ok.licence.state} licence ${ok.licence.licenceNumber}, valid to ${ok.licence.expiresOn}` : ok.message };
+    }),
+  );
+  const changes = previous ? inputChanges(previous.input as DesignInput, ctx.input as DesignInput) : [];
+  const pinned = new Map<string, { body: string; when: Date }[]>();
+  for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
+  const inputs = inputRows(ctx.input);
+
+  return (
+    <div className="space-y-6">
+      <header className="space-y-2">
+        <p className="text-sm text-slate-600"><Link href="/reviews" className="underline">Reviews</Link> · {ctx.projectName} ({ctx.projectState})</p>
+        <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
+        <div className="flex flex-wrap items-center gap-3 text-sm">
+          <span>Status:</span> <StatusBadge status={standing.status} onHold={standing.holds.length > 0} />
+          <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {ctx.createdAt.toISOString().slice(0, 10)}</span>
+        </div>
+        <div className="no-print flex flex-wrap gap-2 text-sm">
+          <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800">Download calculation report (PDF)</a>
+          <Link href={`/projects/${ctx.projectId}/designs/${ctx.designId}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Open the design</Link>
+          {ctx.status === "approved" ? <Link href={`/field/${ctx.id}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Field spec for the crew</Link> : null}
+        </div>
+        {standing.supersededBy ? (
+          <p role="status" className="rounded-md border border-slate-400 bg-slate-100 p-3 text-sm font-medium">
+            Superseded: revision {standing.supersededBy.number} was approved after this one. <Link className="underline" href={`/reviews/${standing.supersededBy.id}`}>Open revision {standing.supersededBy.number}</Link>.
+          </p>
+        ) : null}
+      </header>
+      <HoldBanner holds={standing.holds} canClear={isEngineer} />
+      <Caution />
+
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="order-2 space-y-6 lg:order-1">
+          <section aria-labelledby="diff-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
+            {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
+              <ul className="mt-2 space-y-1 text-sm">
+                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span> <span className="text-slate-500">({c.path})</span>: {String(c.from)} → <strong>{String(c.to)}</strong></li>)}
+              </ul>
+            )}
+          </section>
+
+          <PlainTable id="criteria-h" table={criteriaTable(ctx)} numericFrom={99} />
+
+          <section aria-labelledby="inputs-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="inputs-h" className="text-base font-semibold">Every input</h2>
+            <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
+              {inputs.map(([path, value]) => (
+                <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
+                  <dt className="text-slate-700">{fieldLabel(path)} <span className="text-xs text-slate-400">{path}</span></dt>
+                  <dd className="font-medium tabular-nums">{value}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
+                  {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
+                </div>
+              ))}
+            </dl>
+          </section>
+
+          <section aria-labelledby="method-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="method-h" className="text-base font-semibold">Method, editions and sections</h2>
+            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r).map((m) => <li key={m}>{m}</li>)}</ul>
+          </section>
+          <PlainTable id="wind-h" table={windTable(r)} />
+          <section aria-labelledby="gov-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="gov-h" className="text-base font-semibold">Governing loads</h2>
+            <ul className="mt-2 space-y-1 text-sm">{governingLines(r).map((g) => <li key={g}>{g}</li>)}</ul>
+          </section>
+          <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} />
+          <PlainTable id="checks-h" table={checksTable(r)} />
+          <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="conc-h" className="text-base font-semibold">Concrete and field dimensions</h2>
+            <ul className="mt-2 space-y-1 text-sm">
+              {concreteLines(r).map((c) => <li key={c}>{c}</li>)}
+              {r.field.posts.map((p) => <li key={p.id}>Post {p.id}: {fmt(p.heightAboveGradeIn)} in above grade + {fmt(p.embedmentIn)} in embedded = {fmt(p.postLengthIn)} in</li>)}
+              <li>Lowest-edge clearance {fmt(r.geometry.minClearanceIn)} in at {fmt(r.geometry.tiltDeg)}° tilt</li>
+            </ul>
+          </section>
+          <section aria-labelledby="warn-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="warn-h" className="text-base font-semibold">Warnings ({r.warnings.length})</h2>
+            {r.warnings.length === 0 ? <p className="mt-1 text-sm text-slate-600">None: no method limit is crossed.</p> : (
+              <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {w.message}</li>)}</ul>
+            )}
+          </section>
+          <section aria-labelledby="files-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="files-h" className="text-base font-semibold">Uploads: soil report, photos ({files.total})</h2>
+            {files.rows.length === 0 ? <p className="mt-1 text-sm text-slate-600">No files uploaded to this project.</p> : (
+              <ul className="mt-2 grid gap-3 sm:grid-cols-2">
+                {files.rows.map((f) => (
+                  <li key={f.id} className="flex items-center gap-3 text-sm">
+                    {f.thumbnailKey ? (
+                      // eslint-disable-next-line @next/next/no-img-element
+                      <img src={`/api/projects/${ctx.projectId}/files/${f.id}?variant=thumbnail`} alt={f.description || f.originalName} className="h-14 w-14 rounded object-cover" />
+                    ) : <span className="flex h-14 w-14 items-center justify-center rounded bg-slate-100 text-xs">{f.kind === "document" ? "DOC" : "FILE"}</span>}
+                    <span><a className="underline" href={`/api/projects/${ctx.projectId}/files/${f.id}`}>{f.originalName}</a><br /><span className="text-xs text-slate-600">{f.description}</span></span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+          <ReviewPreview input={ctx.input as DesignInput} result={r} />
+        </div>
+
+        <aside className="order-1 space-y-4 lg:order-2">
+          {canDecide ? (
+            <section aria-labelledby="decide-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
+              <h2 id="decide-h" className="text-base font-semibold">Your decision</h2>
+              {eligibility && !eligibility.ok ? <p role="alert" className="mt-2 rounded bg-red-50 p-2 text-sm text-red-800">{eligibility.message}</p> : null}
+              <div className="mt-3">
+                <DecisionForm revisionId={ctx.id} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
+                  licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} and the time. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
+              </div>
+            </section>
+          ) : null}
+          {canSubmit ? (
+            <section aria-labelledby="submit-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
+              <h2 id="submit-h" className="text-base font-semibold">{ctx.status === "changes_requested" ? "Resubmit for review" : "Submit for review"}</h2>
+              {ctx.status === "changes_requested" ? <p className="mt-1 text-sm text-slate-600">Changes were requested on this revision: save a new revision with the changes and submit that one, or resubmit this one as it is.</p> : null}
+              <div className="mt-3"><SubmitForm revisionId={ctx.id} engineers={choices} /></div>
+            </section>
+          ) : null}
+          <ReviewHistory standing={standing} revisionId={ctx.id} />
+        </aside>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,55 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { hasRole, requireUser } from "@/app/_lib/auth";
+import { forPage } from "@/app/_lib/page-access";
+import { displayStatus } from "@/app/_lib/review/standing";
+import { StatusBadge } from "@/components/review/status-badge";
+import { Caution } from "@/components/ui/caution";
+import { recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
+
+export const metadata: Metadata = { title: "Reviews" };
+
+export default async function ReviewsPage() {
+  const user = await forPage(() => requireUser(), "/reviews");
+  const [waiting, mine, decided] = await Promise.all([
+    hasRole(user, "engineer") ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
+    hasRole(user, "designer") ? submittedBy(user.organisationId, user.userId) : Promise.resolve(null),
+    recentlyDecided(user.organisationId),
+  ]);
+  return (
+    <div className="space-y-6">
+      <h1 className="text-2xl font-semibold">Reviews</h1>
+      {waiting ? <QueueTable title="Waiting for your review" rows={waiting} empty="Nothing is waiting for your review." show="submitted" /> : null}
+      {mine ? <QueueTable title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
+      <QueueTable title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />
+      <Caution />
+    </div>
+  );
+}
+
+const when = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
+
+function QueueTable({ title, rows, empty, show }: { title: string; rows: QueueRow[]; empty: string; show: "submitted" | "engineer" | "decided" }) {
+  const id = title.toLowerCase().replace(/\W+/g, "-");
+  return (
+    <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4">
+      <h2 id={id} className="text-base font-semibold">{title} ({rows.length})</h2>
+      {rows.length === 0 ? <p className="mt-1 text-sm text-slate-600">{empty}</p> : (
+        <ul className="mt-2 divide-y divide-slate-100">
+          {rows.map((r, i) => (
+            <li key={`${r.revisionId}-${i}`} className="flex flex-wrap items-center justify-between gap-2 py-2 text-sm">
+              <div>
+                <Link href={`/reviews/${r.revisionId}`} className="font-medium text-accent-800 underline">{r.designName}, revision {r.number}</Link>
+                <p className="text-xs text-slate-600">
+                  {r.projectName} ({r.projectState}) ·{" "}
+                  {show === "submitted" ? `submitted by ${r.submittedByName} on ${when(r.submittedAt)}` : show === "engineer" ? `to ${r.engineerName} on ${when(r.submittedAt)}` : `${r.engineerName}, ${when(r.decidedAt)}`}
+                </p>
+              </div>
+              <StatusBadge status={displayStatus(r.status, r.superseded ? { number: 0 } : undefined)} onHold={r.onHold} />
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}

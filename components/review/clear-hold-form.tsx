@@ -1,0 +1,24 @@
+"use client";
+
+import { useActionState } from "react";
+import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
+import { FormStatus, SubmitButton } from "@/components/ui/form";
+import type { ActionState } from "@/components/ui/action-state";
+
+export function ClearHoldForm({ holdId }: { holdId: string }) {
+  const [state, action] = useActionState<ActionState, FormData>(clearHoldAction, {});
+  const error = state.fieldErrors?.note;
+  return (
+    <form action={action} className="no-print mt-2 space-y-2 rounded-md border border-red-200 bg-white p-3 text-slate-900">
+      <input type="hidden" name="holdId" value={holdId} />
+      <label htmlFor={`note-${holdId}`} className="block text-sm font-medium">How was it resolved? (engineers only)</label>
+      <textarea id={`note-${holdId}`} name="note" rows={2} defaultValue={state.values?.note ?? ""} aria-invalid={error ? true : undefined} aria-describedby={error ? `note-${holdId}-error` : undefined}
+        className="block w-full rounded-md border border-slate-300 px-2 py-1 text-sm aria-[invalid]:border-red-600" />
+      {error ? <p id={`note-${holdId}-error`} className="text-sm text-red-700">{error.join(" ")}</p> : null}
+      <div className="flex items-center gap-3">
+        <SubmitButton pendingText="Clearing…">Clear hold</SubmitButton>
+        <FormStatus state={state} />
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,25 @@
+import type { HoldRecord } from "@/db/queries/holds";
+import { ClearHoldForm } from "./clear-hold-form";
+
+/**
+ * A design on hold, shown at the top of every screen of that design until an engineer clears it.
+ * Engineers get the clear form beside each hold.
+ */
+export function HoldBanner({ holds, canClear = false }: { holds: HoldRecord[]; canClear?: boolean }) {
+  if (holds.length === 0) return null;
+  return (
+    <section role="alert" aria-label="Design on hold" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
+      <h2 className="text-lg font-bold">ON HOLD: do not pour concrete or set posts</h2>
+      <p className="text-sm">An as-built hole does not match the approved spec. An engineer must review and clear the hold before work goes on.</p>
+      <ul className="mt-2 space-y-3">
+        {holds.map((h) => (
+          <li key={h.id} className="text-sm">
+            <p className="font-semibold">{h.reason}</p>
+            <p className="text-xs">Raised by {h.raisedByName} on {h.raisedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
+            {canClear ? <ClearHoldForm holdId={h.id} /> : null}
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
