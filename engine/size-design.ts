@@ -8,6 +8,7 @@
 import { concreteForHole } from "./concrete/concrete-for-hole";
 import { concreteOrder } from "./concrete/concrete-order";
 import { designContext } from "./design-context";
+import type { CheckId, FootingCheck } from "./footing/checks";
 import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
 import { smallestPipeFor } from "./footing/pipe";
 import { previewGeometry } from "./geometry/preview";
@@ -21,6 +22,12 @@ import type { DesignInput } from "./schema";
 import type { DesignResult } from "./types";
 import { collectWarnings, type DesignWarning } from "./warnings";
 import { ENGINE_VERSION } from "./version";
+
+/** The check with this id (a loop, not `find` with a fresh closure, on this per-design path). */
+function checkById(checks: FootingCheck[], id: CheckId): FootingCheck {
+  for (let i = 0; i < checks.length; i++) if (checks[i].id === id) return checks[i];
+  throw new Error(`No ${id} check`);
+}
 
 export function sizeDesign(raw: unknown): DesignResult {
   return sizeParsedDesign(parseDesignInput(raw));
@@ -47,8 +54,8 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
   const job = concreteOrder({ hole, holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct });
   const sweep = diameterSweep(fctx, posts.sweepDiametersIn, { holes: posts.count, wasteAllowancePct: posts.wasteAllowancePct, postOutsideDiameterIn: pipe.outsideDiameterIn, subtractPostDisplacement: posts.subtractPostDisplacement, postBendingPass: ev.checks[5].pass });
   const envelope = ctx.tilts.length > 1 ? tiltEnvelope(fctx, ctx.tilts, diameterIn) : null;
-  const lateral = ev.checks.find((c) => c.id === "lateral")!;
-  const controlling = ev.checks.find((c) => c.id === ev.controllingCheck)!;
+  const lateral = checkById(ev.checks, "lateral");
+  const controlling = checkById(ev.checks, ev.controllingCheck);
   const governingPostId = (controlling.governing ?? lateral.governing)?.postId ?? null;
   const windCase = (lateral.governing ?? controlling.governing)?.windCase ?? -1;
   const drawState = main;
@@ -70,7 +77,12 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt })),
     },
     wind: { edition: input.site.edition, heightFt: heights.meanHeightFt, gustFactor: main.gustFactor, velocity: main.velocity, cases: windCaseRows(main), method: WIND_METHOD_NOTE },
-    snow: { ...main.snow, totalLb: main.snowTotalLb },
+    // Written out rather than spread (a spread is slow on this hot path); TypeScript insists every
+    // SnowLoad field is listed, so a new one cannot be dropped silently.
+    snow: {
+      pfPsf: main.snow.pfPsf, cs: main.snow.cs, psPsf: main.snow.psPsf, minimumPmPsf: main.snow.minimumPmPsf,
+      designPsf: main.snow.designPsf, combinationFactor: main.snow.combinationFactor, totalLb: main.snowTotalLb,
+    },
     dead: { modulesLb: dims.moduleCount * array.moduleWeightLb, rackingLb: array.rackingDeadPsf * dims.surfaceAreaFt2, arrayLb: main.deadArrayLb, postLbPerFt: pipe.weightLbPerFt },
     postLoads: postLoadTable(ctx.rows, array.tiltDeg),
     governingLoads: governingLoads(ctx.rows),
@@ -78,7 +90,7 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       diameterIn, diameterMode: auto ? "auto" : "given", depthIn: ev.depthIn, depthFt: ev.depthIn / 12,
       depthMode: posts.fixedDepthIn !== undefined ? "given" : "sized", controllingCheck: ev.controllingCheck,
       requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
-      suggestedPipeSize: smallestPipeFor(ev.checks.find((c) => c.id === "postBending")!.demand, posts.yieldKsi),
+      suggestedPipeSize: smallestPipeFor(checkById(ev.checks, "postBending").demand, posts.yieldKsi),
     },
     concrete: { perHole: hole, job },
     options: { diameterSweep: sweep, tiltEnvelope: envelope },

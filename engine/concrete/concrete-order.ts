@@ -24,6 +24,21 @@ export interface ConcreteOrder {
   bags80Lb: number;
 }
 
+/** Ready-mix to order (yd³, up to the next ¼) for a volume that already includes waste. */
+function orderYd3For(withWasteFt3: number): number {
+  return Math.ceil((withWasteFt3 / FT3_PER_YD3) * 4 - 1e-9) / 4;
+}
+
+/**
+ * Only the ready-mix order of `concreteOrder` (same checks, same arithmetic), for the diameter
+ * sweep, which shows that one figure and need not build the whole order per diameter.
+ */
+export function concreteOrderYd3(a: { holeVolumeFt3: number; holes: number; wasteAllowancePct: number }): number {
+  requireRange("posts.count", a.holes, 1, 1000, "Number of holes", "");
+  requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
+  return orderYd3For(a.holeVolumeFt3 * a.holes * (1 + a.wasteAllowancePct / 100));
+}
+
 export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllowancePct: number }): ConcreteOrder {
   requireRange("posts.count", a.holes, 1, 1000, "Number of holes", "");
   requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
@@ -37,7 +52,7 @@ export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllow
     wasteAllowancePct: a.wasteAllowancePct,
     withWasteFt3,
     withWasteYd3: withWasteFt3 / FT3_PER_YD3,
-    orderYd3: Math.ceil((withWasteFt3 / FT3_PER_YD3) * 4 - 1e-9) / 4,
+    orderYd3: orderYd3For(withWasteFt3),
     bags40Lb: bagsFor(withWasteFt3, 40),
     bags60Lb: bagsFor(withWasteFt3, 60),
     bags80Lb: bagsFor(withWasteFt3, 80),

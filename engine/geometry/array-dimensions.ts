@@ -9,6 +9,9 @@
  */
 import { requireOneOf, requireRange } from "../errors";
 
+// The allowed values, built once (these checks run for every tilt of every design).
+const ORIENTATIONS = ["portrait", "landscape"] as const;
+
 export type Orientation = "portrait" | "landscape";
 
 export interface ArrayDimensions {
@@ -31,7 +34,7 @@ export function arrayDimensions(a: {
 }): ArrayDimensions {
   requireRange("array.moduleLengthIn", a.moduleLengthIn, 30, 110, "Module length", "in");
   requireRange("array.moduleWidthIn", a.moduleWidthIn, 15, 60, "Module width", "in");
-  requireOneOf("array.orientation", a.orientation, ["portrait", "landscape"] as const, "Orientation");
+  requireOneOf("array.orientation", a.orientation, ORIENTATIONS, "Orientation");
   requireRange("array.rows", a.rows, 1, 8, "Rows", "");
   requireRange("array.columns", a.columns, 1, 40, "Columns", "");
   requireRange("array.gapIn", a.gapIn, 0, 12, "Gap between modules", "in");

@@ -56,20 +56,20 @@ export function factoredPostLoads(states: ArrayLoadState[], combos: Combination[
 
 /** Keep only the rows whose (|shear|, |moment|) no other row exceeds in both: the lateral candidates. */
 export function lateralFrontier(rows: FactoredPostLoad[]): FactoredPostLoad[] {
-  // Plain loops over precomputed magnitudes: the same test as before (row i goes when some other
+  // Plain loops: the same test as before (row i goes when some other
   // row j has P ≥ p and M ≥ m, and is larger in one of them or is an identical earlier row), without
   // a closure per row; the sweep runs this over every tilt's rows.
   const withLoad: FactoredPostLoad[] = [];
   for (let i = 0; i < rows.length; i++) if (rows[i].shearLb !== 0 || rows[i].momentAtGradeLbFt !== 0) withLoad.push(rows[i]);
   const n = withLoad.length;
-  const P = new Float64Array(n), M = new Float64Array(n);
-  for (let i = 0; i < n; i++) { P[i] = Math.abs(withLoad[i].shearLb); M[i] = Math.abs(withLoad[i].momentAtGradeLbFt); }
   const out: FactoredPostLoad[] = [];
   for (let i = 0; i < n; i++) {
-    const p = P[i], m = M[i];
+    const p = Math.abs(withLoad[i].shearLb), m = Math.abs(withLoad[i].momentAtGradeLbFt);
     let dominated = false;
     for (let j = 0; j < n; j++) {
-      if (j !== i && P[j] >= p && M[j] >= m && (P[j] > p || M[j] > m || j < i)) { dominated = true; break; }
+      if (j === i) continue;
+      const P = Math.abs(withLoad[j].shearLb), M = Math.abs(withLoad[j].momentAtGradeLbFt);
+      if (P >= p && M >= m && (P > p || M > m || j < i)) { dominated = true; break; }
     }
     if (!dominated) out.push(withLoad[i]);
   }

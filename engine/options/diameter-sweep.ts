@@ -4,7 +4,7 @@
  * can trade a wider hole for a shallower one.
  */
 import { concreteForHole } from "../concrete/concrete-for-hole";
-import { concreteOrder } from "../concrete/concrete-order";
+import { concreteOrderYd3 } from "../concrete/concrete-order";
 import { bearingRatio, footingDepth, type FootingContext } from "../footing/evaluate-footing";
 import type { DepthCheckId } from "../footing/checks";
 
@@ -37,12 +37,12 @@ export function diameterSweep(
       diameterIn, depthIn: ev.depthIn, unitWeightPcf: ctx.concretePcf,
       postOutsideDiameterIn: job.postOutsideDiameterIn, subtractPostDisplacement: job.subtractPostDisplacement && diameterIn > job.postOutsideDiameterIn,
     });
-    const order = concreteOrder({ hole, holes: job.holes, wasteAllowancePct: job.wasteAllowancePct });
+    const jobOrderYd3 = concreteOrderYd3({ holeVolumeFt3: hole.volumeFt3, holes: job.holes, wasteAllowancePct: job.wasteAllowancePct });
     return {
       diameterIn, depthIn: ev.depthIn, controllingCheck: ev.controllingCheck,
       fitsPost, bearingPass, allChecksPass: fitsPost && bearingPass && ev.lateralConverged && job.postBendingPass,
       volumeFt3PerHole: hole.volumeFt3, volumeYd3PerHole: hole.volumeYd3, weightLbPerHole: hole.weightLb,
-      bags80LbPerHole: hole.bags80Lb, jobOrderYd3: order.orderYd3,
+      bags80LbPerHole: hole.bags80Lb, jobOrderYd3,
     };
   });
 }

@@ -11,6 +11,10 @@
  */
 import { requireOneOf, requireRange } from "../errors";
 
+// The allowed values, built once (these checks run for every tilt of every design).
+const EDITIONS = ["7-16", "7-22"] as const;
+const EXPOSURES = ["B", "C", "D"] as const;
+
 export type Edition = "7-16" | "7-22";
 export type Exposure = "B" | "C" | "D";
 
@@ -32,8 +36,8 @@ export function exposureCoefficientKz(args: { edition: Edition; exposure: Exposu
   kz: number;
   method: "table" | "formula";
 } {
-  requireOneOf("edition", args.edition, ["7-16", "7-22"] as const, "ASCE 7 edition");
-  requireOneOf("exposure", args.exposure, ["B", "C", "D"] as const, "Exposure category");
+  requireOneOf("edition", args.edition, EDITIONS, "ASCE 7 edition");
+  requireOneOf("exposure", args.exposure, EXPOSURES, "Exposure category");
   requireRange("heightFt", args.heightFt, 0, 500, "Height above grade", "ft");
   if (args.heightFt <= 15) return { kz: KZ_AT_15FT_TABLE[args.exposure], method: "table" };
   const c = EXPOSURE_CONSTANTS[args.edition];

@@ -15,6 +15,10 @@
 import { requireOneOf, requireRange } from "../errors";
 import { FREE_ROOF_GAMMA_0, FREE_ROOF_GAMMA_180, FREE_ROOF_TILTS_DEG, FREE_ROOF_ZERO_ROW, type FlowRow } from "./free-roof-table";
 
+// The allowed values, built once (these checks run for every tilt of every design).
+const WIND_DIRECTIONS = [0, 180] as const;
+const FLOWS = ["clear", "obstructed"] as const;
+
 export type WindDirectionDeg = 0 | 180;
 export type Flow = "clear" | "obstructed";
 export interface CnPair {
@@ -50,8 +54,8 @@ function pick(rows: readonly FlowRow[], tiltDeg: number, flow: Flow, c: "A" | "B
 
 export function netPressureCoefficients(args: { tiltDeg: number; windDirectionDeg: WindDirectionDeg; flow: Flow }): NetPressureCoefficients {
   requireRange("array.tiltDeg", args.tiltDeg, 0, 60, "Tilt", "degrees");
-  requireOneOf("windDirectionDeg", args.windDirectionDeg, [0, 180] as const, "Wind direction");
-  requireOneOf("array.flow", args.flow, ["clear", "obstructed"] as const, "Wind flow beneath the array");
+  requireOneOf("windDirectionDeg", args.windDirectionDeg, WIND_DIRECTIONS, "Wind direction");
+  requireOneOf("array.flow", args.flow, FLOWS, "Wind flow beneath the array");
   const { tiltDeg, flow } = args;
   const rows = args.windDirectionDeg === 0 ? FREE_ROOF_GAMMA_0 : FREE_ROOF_GAMMA_180;
   return { A: pick(rows, tiltDeg, flow, "A"), B: pick(rows, tiltDeg, flow, "B") };
