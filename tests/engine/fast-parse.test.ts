@@ -81,7 +81,7 @@ describe("validation fast path", () => {
   });
 
   let accepted = 0;
-  fcTest.prop([fc.nat({ max: bases.length - 1 }), fc.array(mutation, { minLength: 0, maxLength: 4 })], { numRuns: 4000 })(
+  fcTest.prop([fc.nat({ max: bases.length - 1 }), fc.array(mutation, { minLength: 0, maxLength: 4 })], { numRuns: 2500 })(
     "never differs from zod on random drafts",
     (bi, muts) => {
       const d = structuredClone(bases[bi]) as Obj;
@@ -99,8 +99,10 @@ describe("validation fast path", () => {
       if (z.success) expect(s.ok && pinnedJson(s.input)).toBe(pinnedJson(z.data));
       else expect(s).toEqual({ ok: false, issues: zodIssuesToFieldErrors(z.error) });
     },
+    // Thousands of zod parses: generous on the shared, busy test machine.
+    60_000,
   );
   it("took the fast path on a good share of those drafts", () => {
-    expect(accepted).toBeGreaterThan(400);
+    expect(accepted).toBeGreaterThan(250);
   });
 });
