@@ -17,6 +17,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
           <Brand href="/projects" />
           <nav aria-label="Main" className="flex flex-wrap gap-4 text-sm">
             <Link href="/projects" className="hover:text-accent-700">Projects</Link>
+            <Link href="/criteria" className="hover:text-accent-700">Criteria</Link>
             <Link href="/reviews" className="hover:text-accent-700">Reviews</Link>
             <Link href="/field" className="hover:text-accent-700">Field specs</Link>
             {user?.roles.includes("admin") ? <Link href="/admin/members" className="hover:text-accent-700">Members</Link> : null}

@@ -13,8 +13,17 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
+import crypto from "node:crypto";
+import { putObject } from "@/app/_lib/storage";
+import { freshApproved, freshAsBuilt, freshInReview, makeDesign, userId as reviewUserId } from "../support/review-fixtures";
 import { CALLERS, SIGN_IN, WHO, callAs, discoverEndpoints, everyone, formArgs, only, type MatrixRow } from "../support/access-matrix";
 import { freshInvitation, freshMember, freshReset, uniqueEmail, userId } from "../support/accounts";
+import { DEMO_CARD_ID, DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
+import { defaultDesignInput } from "@/engine";
+import { demoInput, freshDesign, freshFile, freshProject } from "../support/project-fixtures";
+
+/** Members of the owning organisation who may read projects, designs, revisions and uploads. */
+const READERS = (status: 200) => ({ admin: status, designer: status, engineer: status, installer: status } as const);
 
 const MEMBERS = { admin: 200, designer: 200, engineer: 200, installer: 200, other: 200, nobody: 401 } as const;
 
@@ -88,6 +97,69 @@ const MATRIX: MatrixRow[] = [
       await db("engineer_licences").insert({ user_id: engineer, state: "NM", licence_number: "PE-MATRIX-2", expires_on: "2031-06-30" }).onConflict(["user_id", "state"]).ignore();
       return { args: formArgs({ state: "NM" }) };
     },
+  },
+
+  // ── projects, criteria cards, designs, revisions, uploads (issue 5) ─────────────────────────────
+  { file: "app/api/calc/route.ts", name: "POST", expect: MEMBERS, setup: async () => ({ body: defaultDesignInput }) },
+  { file: "app/api/projects/route.ts", name: "GET", expect: MEMBERS },
+  { file: "app/api/projects/route.ts", name: "POST", expect: only({ admin: 201, designer: 201, other: 201 }), setup: async () => ({ body: { name: "Matrix project", state: "CO" } }) },
+  { file: "app/api/projects/[projectId]/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: { projectId: DEMO_PROJECT_ID } }) },
+  { file: "app/api/projects/[projectId]/route.ts", name: "PATCH", expect: only({ admin: 200, designer: 200 }), setup: async () => ({ params: { projectId: await freshProject() }, body: { notes: "patched by the matrix" } }) },
+  { file: "app/api/projects/[projectId]/designs/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: { projectId: DEMO_PROJECT_ID } }) },
+  { file: "app/api/projects/[projectId]/designs/route.ts", name: "POST", expect: only({ admin: 201, designer: 201 }), setup: async () => ({ params: { projectId: await freshProject() }, body: { name: "Matrix design" } }) },
+  { file: "app/api/designs/[designId]/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: { designId: (await freshDesign()).designId } }) },
+  {
+    file: "app/api/designs/[designId]/revisions/route.ts", name: "POST", expect: only({ admin: 201, designer: 201 }),
+    setup: async () => {
+      const d = await freshDesign();
+      return { params: { designId: d.designId }, body: { baseRevisionId: d.revisionId, input: demoInput(), note: "matrix" } };
+    },
+  },
+  { file: "app/api/revisions/[revisionId]/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: { revisionId: (await freshDesign()).revisionId } }) },
+  { file: "app/api/projects/[projectId]/files/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: { projectId: DEMO_PROJECT_ID } }) },
+  // A JSON body is not an upload: designers get past the access checks to the 422; nothing is stored.
+  { file: "app/api/projects/[projectId]/files/route.ts", name: "POST", expect: only({ admin: 422, designer: 422 }), setup: async () => ({ params: { projectId: await freshProject() }, body: { file: "not multipart" } }) },
+  { file: "app/api/projects/[projectId]/files/[fileId]/route.ts", name: "GET", expect: only(READERS(200)), setup: async () => ({ params: await freshFile() }) },
+  // Actions are called with an empty name so the outcome is the access decision (422 = allowed, refused by validation), with no side effects.
+  { file: "app/(workspace)/projects/actions.ts", name: "createProjectAction", expect: only({ admin: 422, designer: 422, other: 422 }, { nobody: SIGN_IN }), setup: async () => ({ args: formArgs({ name: "", state: "CO" }) }) },
+  { file: "app/(workspace)/projects/actions.ts", name: "updateProjectAction", expect: only({ admin: 422, designer: 422 }, { nobody: SIGN_IN }), setup: async () => ({ args: formArgs({ projectId: await freshProject(), name: "", state: "CO" }) }) },
+  { file: "app/(workspace)/projects/[projectId]/actions.ts", name: "createDesignAction", expect: only({ admin: 422, designer: 422 }, { nobody: SIGN_IN }), setup: async () => ({ args: formArgs({ projectId: await freshProject(), name: "" }) }) },
+  { file: "app/(workspace)/criteria/actions.ts", name: "saveCriteriaCardAction", expect: only({ admin: 422, designer: 422 }, { nobody: SIGN_IN }), setup: async () => ({ args: formArgs({ cardId: DEMO_CARD_ID, jurisdiction: "", state: "CO" }) }) },
+  // ── review, field spec, as-built, report (issue 6) ─────────────────────────────────────────────
+  { file: "app/api/revisions/[revisionId]/submit/route.ts", name: "POST", expect: only({ designer: 200 }), setup: async () => ({ params: { revisionId: (await makeDesign()).revisionId }, body: { engineerId: await reviewUserId(CALLERS.engineer) } }) },
+  { file: "app/api/revisions/[revisionId]/review/route.ts", name: "POST", expect: only({ engineer: 200 }), setup: async () => ({ params: { revisionId: (await freshInReview()).revisionId }, body: { decision: "approve" } }) },
+  { file: "app/api/revisions/[revisionId]/report.pdf/route.ts", name: "GET", expect: only({ admin: 200, designer: 200, engineer: 200, installer: 200 }), setup: async () => ({ params: { revisionId: (await makeDesign()).revisionId } }) },
+  {
+    file: "app/api/revisions/[revisionId]/letter/route.ts", name: "GET", expect: only({ admin: 200, designer: 200, engineer: 200, installer: 200 }),
+    setup: async () => {
+      const letterKey = `matrix/letter-${crypto.randomUUID()}`;
+      await putObject(letterKey, new TextEncoder().encode("%PDF-1.4 matrix letter"), "application/pdf");
+      return { params: { revisionId: (await freshApproved({ letterKey })).revisionId } };
+    },
+  },
+  {
+    file: "app/api/as-built/[entryId]/photos/[index]/route.ts", name: "GET", expect: only({ admin: 200, designer: 200, engineer: 200, installer: 200 }),
+    setup: async () => {
+      const key = `matrix/photo-${crypto.randomUUID()}`;
+      await putObject(key, new Uint8Array([0x89, 0x50, 0x4e, 0x47]), "image/png");
+      return { params: { entryId: (await freshAsBuilt({ photoKeys: [key] })).entryId, index: "0" } };
+    },
+  },
+  {
+    file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "submitForReviewAction", expect: only({ designer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ revisionId: (await makeDesign()).revisionId, engineerId: await reviewUserId(CALLERS.engineer) }) }),
+  },
+  {
+    file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "decideReviewAction", expect: only({ engineer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ revisionId: (await freshInReview()).revisionId, decision: "approve" }) }),
+  },
+  {
+    file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "clearHoldAction", expect: only({ engineer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ holdId: (await freshAsBuilt({ hold: true })).holdId!, note: "Cleared by the access matrix." }) }),
+  },
+  {
+    file: "app/(workspace)/field/[revisionId]/actions.ts", name: "recordAsBuiltAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, postId: "P1", measuredDiameterIn: "30", measuredDepthIn: "100", groundFound: "as_expected" }) }),
   },
 ];
 

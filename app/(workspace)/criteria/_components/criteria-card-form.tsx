@@ -1,0 +1,83 @@
+"use client";
+
+import { useActionState } from "react";
+import { FormStatus, SubmitButton } from "@/components/ui/form";
+import type { CriteriaCard } from "@/db/queries/criteria-cards";
+import { saveCriteriaCardAction } from "../actions";
+
+const ROWS = [
+  { key: "buildingCode", label: "Building code in force", unit: "", kind: "text", hint: "e.g. IBC 2021" },
+  { key: "asceEdition", label: "ASCE 7 edition", unit: "", kind: "select", options: [["7-16", "ASCE 7-16"], ["7-22", "ASCE 7-22"]] },
+  { key: "riskCategory", label: "Risk category", unit: "", kind: "select", options: [["I", "I"], ["II", "II"], ["III", "III"], ["IV", "IV"]] },
+  { key: "windSpeedMph", label: "Design wind speed", unit: "mph", kind: "number", hint: "85–200" },
+  { key: "exposure", label: "Exposure category", unit: "", kind: "select", options: [["B", "B"], ["C", "C"], ["D", "D"]] },
+  { key: "groundSnowPsf", label: "Ground snow load", unit: "psf", kind: "number", hint: "0–300" },
+  { key: "frostDepthIn", label: "Frost depth", unit: "in", kind: "number", hint: "0–120" },
+  { key: "soilClass", label: "Presumed soil class", unit: "", kind: "select", options: [["1", "1"], ["2", "2"], ["3", "3"], ["4", "4"], ["5", "5"]] },
+] as const;
+
+const box = "block w-full rounded-md border border-slate-300 bg-white px-2 py-1.5 text-sm aria-[invalid]:border-red-600";
+
+/** A jurisdiction's criteria: each value with where it comes from and when it was checked. */
+export function CriteriaCardForm({ card, states }: { card?: CriteriaCard; states: readonly string[] }) {
+  const [state, action] = useActionState(saveCriteriaCardAction, {});
+  const today = new Date().toISOString().slice(0, 10);
+  const v = (name: string, fallback: string) => state.values?.[name] ?? fallback;
+  const err = (name: string) => state.fieldErrors?.[name]?.join(" ");
+  const E = ({ name }: { name: string }) => (err(name) ? <p className="text-xs font-medium text-red-700">{err(name)}</p> : null);
+  return (
+    <form action={action} className="space-y-4 rounded-lg border border-slate-200 bg-white p-4">
+      {card ? <input type="hidden" name="cardId" value={card.id} /> : null}
+      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
+        <div className="space-y-1">
+          <label htmlFor="cc-jurisdiction" className="block text-sm font-medium">Jurisdiction</label>
+          <input id="cc-jurisdiction" name="jurisdiction" defaultValue={v("jurisdiction", card?.jurisdiction ?? "")} placeholder="e.g. the county or city" aria-invalid={err("jurisdiction") ? true : undefined} className={box} />
+          <E name="jurisdiction" />
+        </div>
+        <div className="space-y-1">
+          <label htmlFor="cc-state" className="block text-sm font-medium">State</label>
+          <select id="cc-state" name="state" defaultValue={v("state", card?.state ?? "CO")} className={box}>{states.map((s) => <option key={s}>{s}</option>)}</select>
+          <E name="state" />
+        </div>
+      </div>
+      <div className="overflow-x-auto">
+        <table className="min-w-full text-sm">
+          <thead><tr className="text-left text-xs text-slate-600"><th className="py-1 pr-2">Criterion</th><th className="py-1 pr-2">Value</th><th className="py-1 pr-2">Source</th><th className="py-1">Date checked</th></tr></thead>
+          <tbody className="align-top">
+            {ROWS.map((r) => {
+              const current = card ? String(card.values[r.key]) : "";
+              const src = card?.sources[r.key];
+              return (
+                <tr key={r.key} className="border-t border-slate-100">
+                  <th scope="row" className="py-2 pr-2 text-left font-medium whitespace-nowrap"><label htmlFor={`cc-${r.key}`}>{r.label}</label>{r.unit ? <span className="ml-1 font-normal text-slate-500">({r.unit})</span> : null}</th>
+                  <td className="py-2 pr-2 min-w-28">
+                    {r.kind === "select" ? (
+                      <select id={`cc-${r.key}`} name={`values.${r.key}`} defaultValue={v(`values.${r.key}`, current || (r.key === "riskCategory" ? "II" : r.key === "soilClass" ? "4" : r.key === "exposure" ? "C" : "7-16"))} className={box}>
+                        {r.options.map(([val, label]) => <option key={val} value={val}>{label}</option>)}
+                      </select>
+                    ) : (
+                      <input id={`cc-${r.key}`} name={`values.${r.key}`} inputMode={r.kind === "number" ? "decimal" : undefined} defaultValue={v(`values.${r.key}`, current)} placeholder={r.hint} aria-invalid={err(`values.${r.key}`) ? true : undefined} className={box} />
+                    )}
+                    <E name={`values.${r.key}`} />
+                  </td>
+                  <td className="py-2 pr-2 min-w-56">
+                    <input aria-label={`${r.label}: source`} name={`sources.${r.key}.source`} defaultValue={v(`sources.${r.key}.source`, src?.source ?? "")} placeholder="e.g. county design criteria sheet" aria-invalid={err(`sources.${r.key}.source`) ? true : undefined} className={box} />
+                    <E name={`sources.${r.key}.source`} />
+                  </td>
+                  <td className="py-2 min-w-36">
+                    <input aria-label={`${r.label}: date checked`} type="date" name={`sources.${r.key}.checkedOn`} defaultValue={v(`sources.${r.key}.checkedOn`, src?.checkedOn ?? today)} aria-invalid={err(`sources.${r.key}.checkedOn`) ? true : undefined} className={box} />
+                    <E name={`sources.${r.key}.checkedOn`} />
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+      <div className="flex items-center gap-3">
+        <SubmitButton pendingText="Saving…">{card ? "Save card" : "Add card"}</SubmitButton>
+        <FormStatus state={state} />
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,191 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useEffect, useState } from "react";
+import { FormProvider, useForm, useWatch, type FieldValues } from "react-hook-form";
+import { applyCriteriaCard } from "@/app/_lib/design-defaults";
+import { formatQuantity, type UnitSystem } from "@/components/design/units";
+import { DesignPreviewLazy } from "@/components/preview";
+import { Caution } from "@/components/ui/caution";
+import type { CriteriaCardValues } from "@/db/queries/criteria-cards";
+import { designInputSchema, type DesignInput, type DesignInputDraft, type DesignResult } from "@/engine";
+import { ArrayGroup, PostsGroup, SiteGroup } from "./input-groups";
+import { FootingHeadline, ResultsPanel } from "./results-panel";
+import { useLiveResult, type LiveStatus } from "./use-live-result";
+
+/**
+ * The designer's editor: inputs on the left, live results on the right (stacked on a phone), the
+ * defer-to-code caution always in view. Saving posts a new revision from `baseRevisionId`; if
+ * someone saved since, the server answers 409 and the form keeps what was typed.
+ */
+export interface EditorProps {
+  designId: string;
+  initialInput: DesignInput;
+  initialResult: DesignResult;
+  baseRevisionId: string;
+  baseNumber: number;
+  readOnly: boolean;
+  card: { label: string; values: CriteriaCardValues } | null;
+}
+
+type Conflict = { message: string; latestRevisionId: string | null; latestNumber: number | null };
+const UNITS_KEY = "pierwise-units";
+
+const STATUS_TEXT: Record<LiveStatus, string> = {
+  saved: "Showing the saved revision.",
+  waiting: "Updating…",
+  loading: "Updating…",
+  fresh: "Up to date with your inputs (not saved yet).",
+  invalid: "",
+  error: "",
+};
+
+export function DesignEditor(props: EditorProps) {
+  const router = useRouter();
+  const [units, setUnits] = useState<UnitSystem>("imperial");
+  useEffect(() => {
+    const stored = window.localStorage.getItem(UNITS_KEY);
+    if (stored === "metric" || stored === "imperial") setUnits(stored);
+  }, []);
+  const chooseUnits = (u: UnitSystem) => {
+    setUnits(u);
+    window.localStorage.setItem(UNITS_KEY, u);
+  };
+
+  const form = useForm<DesignInputDraft, unknown, DesignInput>({ resolver: zodResolver(designInputSchema), defaultValues: props.initialInput, mode: "onChange" });
+  const values = useWatch({ control: form.control });
+  const [initialKey] = useState(() => JSON.stringify(props.initialInput));
+  const setFieldErrors = (errors: { path: string; message: string }[]) => {
+    for (const e of errors) form.setError(e.path.replace(/^input\./, "") as never, { type: "server", message: e.message });
+  };
+  const live = useLiveResult(values, props.initialResult, initialKey, setFieldErrors);
+
+  const [base, setBase] = useState({ id: props.baseRevisionId, number: props.baseNumber });
+  const [note, setNote] = useState("");
+  const [saving, setSaving] = useState(false);
+  const [saveMessage, setSaveMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const dirty = JSON.stringify(values) !== initialKey || base.id !== props.baseRevisionId;
+
+  async function save(input: DesignInput, baseId = base.id) {
+    setSaving(true);
+    setSaveMessage(null);
+    try {
+      const response = await fetch(`/api/designs/${props.designId}/revisions`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ baseRevisionId: baseId, input, note }),
+      });
+      const json = await response.json().catch(() => ({}));
+      if (response.status === 201) {
+        setBase({ id: json.revision.id, number: json.revision.number });
+        setConflict(null);
+        setNote("");
+        setSaveMessage({ ok: true, text: `Saved as revision ${json.revision.number}.` });
+        router.refresh();
+      } else if (response.status === 409) {
+        setConflict({ message: json.errors?.[0]?.message ?? "Someone saved this design since you opened it.", latestRevisionId: json.latestRevisionId ?? null, latestNumber: json.latestNumber ?? null });
+      } else if (response.status === 422) {
+        setFieldErrors(json.errors ?? []);
+        setSaveMessage({ ok: false, text: "Not saved: fix the fields marked in red. Nothing you typed was lost." });
+      } else {
+        setSaveMessage({ ok: false, text: json.errors?.[0]?.message ?? "Not saved: the server did not answer. Your inputs are still here; try again." });
+      }
+    } catch {
+      setSaveMessage({ ok: false, text: "Not saved: could not reach the server. Your inputs are still here; try again." });
+    } finally {
+      setSaving(false);
+    }
+  }
+
+  const onSubmit = form.handleSubmit((input) => save(input), () => setSaveMessage({ ok: false, text: "Not saved: fix the fields marked in red first." }));
+  const applyCard = props.card ? () => {
+    const next = applyCriteriaCard(form.getValues(), props.card!.values);
+    form.setValue("site", next.site, { shouldValidate: true, shouldDirty: true });
+  } : null;
+
+  const result = live.result;
+  const stale = live.status === "invalid" || live.status === "error";
+  const statusLine = stale ? live.message : STATUS_TEXT[live.status];
+
+  return (
+    <FormProvider {...(form as unknown as import("react-hook-form").UseFormReturn<FieldValues>)}>
+      <form onSubmit={onSubmit} noValidate className="grid gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
+        <div className="space-y-4">
+          <div className="flex flex-wrap items-center justify-between gap-3">
+            <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">
+              {(["imperial", "metric"] as const).map((u) => (
+                <button key={u} type="button" role="radio" aria-checked={units === u} onClick={() => chooseUnits(u)} className={`rounded px-3 py-1 ${units === u ? "bg-accent-700 text-white" : "text-slate-700 hover:bg-slate-100"}`}>
+                  {u === "imperial" ? "US units (ft, in, lb)" : "Metric (m, mm, kN)"}
+                </button>
+              ))}
+            </div>
+            {props.readOnly ? <p className="text-sm text-slate-600">Read only.</p> : null}
+          </div>
+
+          <fieldset disabled={props.readOnly} className="space-y-4">
+            <SiteGroup units={units} card={props.card && applyCard ? { label: props.card.label, apply: applyCard } : null} />
+            <ArrayGroup units={units} />
+            <PostsGroup units={units} />
+          </fieldset>
+
+          {!props.readOnly ? (
+            <div className="rounded-lg border border-slate-200 bg-white p-4">
+              <h2 className="text-base font-semibold">Save a revision</h2>
+              <p className="text-xs text-slate-500">Every save is kept as a new revision; earlier revisions never change. You are editing from revision {base.number}.</p>
+              <div className="mt-3 flex flex-wrap items-end gap-3">
+                <div className="min-w-56 flex-1 space-y-1">
+                  <label htmlFor="revision-note" className="block text-sm font-medium text-slate-800">What changed</label>
+                  <input id="revision-note" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder="e.g. county confirmed 125 mph" className="block w-full rounded-md border border-slate-300 px-3 py-2 text-sm" />
+                </div>
+                <button type="submit" disabled={saving} className="rounded-md bg-accent-700 px-4 py-2 text-sm font-medium text-white hover:bg-accent-800 disabled:opacity-60">{saving ? "Saving…" : "Save revision"}</button>
+              </div>
+              <p aria-live="polite" className={`mt-2 text-sm ${saveMessage?.ok === false ? "font-medium text-red-700" : "text-accent-800"}`}>
+                {saveMessage?.text ?? (dirty ? "You have unsaved changes." : "")}
+              </p>
+              {conflict ? (
+                <div role="alert" className="mt-2 rounded-md border border-amber-300 bg-amber-50 p-3 text-sm text-amber-950">
+                  <p className="font-medium">Not saved: {conflict.message}</p>
+                  <div className="mt-2 flex flex-wrap gap-2">
+                    <button type="button" onClick={() => window.location.assign(window.location.pathname)} className="rounded-md border border-amber-400 bg-white px-3 py-1">Reload the latest (discards what you typed)</button>
+                    {conflict.latestRevisionId ? (
+                      <button type="button" onClick={form.handleSubmit((input) => save(input, conflict.latestRevisionId!))} className="rounded-md border border-amber-400 bg-white px-3 py-1">Save mine as revision {(conflict.latestNumber ?? 0) + 1} anyway</button>
+                    ) : null}
+                  </div>
+                </div>
+              ) : null}
+            </div>
+          ) : null}
+        </div>
+
+        <aside aria-label="Results" className="space-y-3 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:self-start lg:overflow-y-auto lg:pr-1">
+          <Caution compact />
+          <div className="flex items-center justify-between gap-2">
+            <h2 className="text-base font-semibold">Results</h2>
+            <p aria-live="polite" role="status" className={`text-xs ${stale ? "font-medium text-red-700" : "text-slate-500"}`}>
+              {live.status === "loading" || live.status === "waiting" ? <span className="mr-1 inline-block h-2 w-2 animate-pulse rounded-full bg-accent-600" /> : null}
+              {statusLine}
+            </p>
+          </div>
+          <div className={`space-y-3 transition-opacity ${stale || live.status === "loading" ? "opacity-60" : ""}`}>
+            <FootingHeadline result={result} units={units} />
+            {/* 3D preview slot (components/preview, built by the preview engineer). */}
+            <DesignPreviewLazy input={result.input} result={result} unitSystem={units} readOnly={props.readOnly} height={300} showCaution={false} />
+            <ResultsPanel result={result} units={units} />
+          </div>
+        </aside>
+
+        {/* Phone: the caution and the footing stay in view at the bottom of the screen. */}
+        <div className="fixed inset-x-0 bottom-0 z-20 border-t border-amber-300 bg-amber-50/95 px-3 py-2 text-xs text-amber-950 shadow-lg backdrop-blur lg:hidden">
+          <p className="font-semibold text-slate-900">
+            {formatQuantity(result.footing.diameterIn, "in", units, { decimals: 0 })} dia × {formatQuantity(result.footing.depthFt, "ft", units)} · {result.footing.pass ? "passes" : "FAILS a check"}
+            {stale ? " · results paused" : live.status === "loading" ? " · updating…" : ""}
+          </p>
+          <p><strong>Caution:</strong> preliminary sizing only. The code, the authority having jurisdiction and a licensed engineer govern.{" "}<Link href="#res-checks" className="underline">Details</Link></p>
+        </div>
+      </form>
+    </FormProvider>
+  );
+}

@@ -1,0 +1,33 @@
+"use client";
+
+import { createColumnHelper } from "@tanstack/react-table";
+import Link from "next/link";
+import { DataTable, type ServerPage } from "@/components/design/data-table";
+import { StatusBadge } from "@/components/design/status-badge";
+import type { RevisionRow } from "@/db/queries/revisions";
+
+const col = createColumnHelper<RevisionRow>();
+
+export function RevisionsTable({ page, basePath, latestId, viewingId }: { page: ServerPage<RevisionRow>; basePath: string; latestId: string; viewingId: string }) {
+  const columns = [
+    col.accessor("number", {
+      header: "Revision",
+      cell: (c) => {
+        const r = c.row.original;
+        const href = r.id === latestId ? basePath : `${basePath}?revision=${r.id}`;
+        return <Link href={href} className="font-medium text-accent-800 hover:underline" aria-current={r.id === viewingId ? "page" : undefined}>Rev {r.number}{r.id === latestId ? " (latest)" : ""}{r.id === viewingId ? " · viewing" : ""}</Link>;
+      },
+    }),
+    col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
+    col.accessor("note", { header: "Note", enableSorting: false, cell: (c) => <span className="block max-w-xs text-slate-700">{c.getValue() || "—"}</span> }),
+    col.accessor("depthIn", { header: "Footing", cell: (c) => { const r = c.row.original; return r.depthIn === null ? "—" : <span className="whitespace-nowrap tabular-nums">{r.diameterIn} in × {(r.depthIn / 12).toFixed(1)} ft{r.pass ? "" : <span className="font-medium text-red-700"> fails</span>}</span>; } }),
+    col.accessor("authorName", { header: "By", cell: (c) => c.getValue() ?? "—" }),
+    col.accessor("createdAt", { header: "Saved", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{new Date(c.getValue()).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}</time> }),
+    col.display({
+      id: "compare",
+      header: "Compare",
+      cell: (c) => (c.row.original.id === latestId ? null : <Link href={`${basePath}/diff?from=${c.row.original.id}&to=${latestId}`} className="whitespace-nowrap text-accent-800 hover:underline">with latest</Link>),
+    }),
+  ];
+  return <DataTable page={page} columns={columns} caption="Revisions" prefix="r_" filterLabel="Filter revisions by note, author or status" />;
+}

@@ -1,0 +1,94 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AccessError, hasRole, requireUser } from "@/app/_lib/auth";
+import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
+import { forPage } from "@/app/_lib/page-access";
+import { listQueryLenient } from "@/app/_lib/schemas/project";
+import { StatusBadge } from "@/components/design/status-badge";
+import { latestRevision, listRevisions } from "@/db/queries/revisions";
+import { DesignEditor } from "./_components/design-editor";
+import { RevisionsTable } from "./_components/revisions-table";
+
+export const metadata: Metadata = { title: "Design" };
+type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+/**
+ * The design editor on its latest revision. `?revision=<id>` opens an older revision read-only;
+ * `?from=<id>` starts editing from an older revision's values on top of the latest.
+ */
+export default async function DesignPage({ params, searchParams }: Props) {
+  const { projectId, designId } = await params;
+  const search = await searchParams;
+  const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
+  const path = `/projects/${projectId}/designs/${designId}`;
+  const { user, project, design, card, latest, viewing, from } = await forPage(async () => {
+    const u = await requireUser();
+    const p = await projectFor(u, projectId);
+    const d = await designFor(u, designId);
+    if (d.projectId !== p.id) throw new AccessError(404, "That design was not found.");
+    const l = (await latestRevision(d.id)) as DesignRevision | undefined;
+    if (!l) throw new Error(`design ${d.id} has no revision`);
+    const pick = async (id: string | undefined) => {
+      if (!id) return null;
+      const r = await revisionFor(u, id);
+      if (r.designId !== d.id) throw new AccessError(404, "That revision was not found.");
+      return r;
+    };
+    return { user: u, project: p, design: d, card: await cardFor(u, p.criteriaCardId), latest: l, viewing: await pick(one("revision")), from: await pick(one("from")) };
+  }, path);
+
+  const canWrite = hasRole(user, "designer", "admin");
+  const shown = viewing ?? latest;
+  const isOld = shown.id !== latest.id;
+  const start = !isOld && from && canWrite ? from : shown;
+  const revisions = await listRevisions(design.id, listQueryLenient(search, "r_"));
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link href="/projects" className="text-accent-800 hover:underline">Projects</Link> <span className="text-slate-400">/</span>{" "}
+        <Link href={`/projects/${project.id}`} className="text-accent-800 hover:underline">{project.name}</Link>
+      </nav>
+      <div className="mt-2 flex flex-wrap items-center gap-3">
+        <h1 className="text-2xl font-semibold">{design.name}</h1>
+        <span className="text-sm text-slate-600">Revision {shown.number} of {latest.number}</span>
+        <StatusBadge status={shown.status} />
+      </div>
+      <p className="mt-1 text-sm text-slate-600">
+        Saved {new Date(shown.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note}”` : ""}.
+        <span className="ml-1 font-mono text-xs text-slate-400" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
+      </p>
+      {isOld ? (
+        <div role="status" className="mt-3 flex flex-wrap items-center gap-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">
+          <span>You are reading revision {shown.number}, an older revision. It cannot change.</span>
+          <Link href={path} className="font-medium underline">Open the latest</Link>
+          <Link href={`${path}/diff?from=${shown.id}&to=${latest.id}`} className="font-medium underline">Compare with the latest</Link>
+          {canWrite ? <Link href={`${path}?from=${shown.id}`} className="font-medium underline">Edit from these values</Link> : null}
+        </div>
+      ) : start.id !== latest.id ? (
+        <p role="status" className="mt-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">Editing from revision {start.number}&apos;s values; saving makes revision {latest.number + 1}.</p>
+      ) : null}
+
+      <div className="mt-4">
+        <DesignEditor
+          key={`${shown.id}-${start.id}`}
+          designId={design.id}
+          initialInput={start.input}
+          initialResult={start.result}
+          baseRevisionId={latest.id}
+          baseNumber={latest.number}
+          readOnly={!canWrite || isOld}
+          card={card ? { label: `${card.jurisdiction}, ${card.state}`, values: card.values } : null}
+        />
+      </div>
+
+      <section aria-labelledby="revisions-heading" className="mt-10 space-y-3">
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
+          {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
+        </div>
+        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} />
+      </section>
+    </>
+  );
+}
