@@ -8,11 +8,11 @@
  * know" (`undefined`): anything invalid, unusual (non-plain objects) or outside the small set of
  * schema kinds it understands goes to zod, which then produces the result or the field messages.
  * A schema part it cannot compile (say a new kind of rule added later) switches it off entirely
- * (`FAST_PARSE_ENABLED` false), so it can make validation slower but never different.
+ * (`fastParseStatus().enabled` false), so it can make validation slower but never different.
  * Refinements (`superRefine`) and sub-schemas it does not model (the soil-class preprocess) are run
  * through zod itself. tests/engine/fast-parse.test.ts compares it with zod on random inputs.
  */
-import type { z } from "zod";
+import { config as zodConfig, type z } from "zod";
 import { designInputSchema, type DesignInput } from "./schema";
 
 const FAIL = Symbol("fail");
@@ -115,17 +115,23 @@ function field(key: string, schema: Internal): Field {
   return { key, parse: compile(schema), mode: "required" };
 }
 
-/** Whether this runtime lets us build functions from source (a strict CSP may not). */
-const CAN_GENERATE = (() => {
+/**
+ * Whether to build functions from source: only where zod itself would (its `jitless` setting is
+ * honoured, so an app that sets it for a strict CSP gets no eval probe from here either) and the
+ * runtime allows it. Asked once, on the first parse.
+ */
+function canGenerate(): boolean {
+  if (zodConfig().jitless) return false;
+  if (typeof navigator !== "undefined" && navigator?.userAgent?.includes("Cloudflare")) return false;
   try {
     return new Function("return 1")() === 1;
   } catch {
     return false;
   }
-})();
+}
 
-/** Set while compiling: generate code (when the runtime allows) or use the generic loop. */
-let generating = CAN_GENERATE;
+/** Set while compiling: generate code or use the generic loop. */
+let generating = false;
 
 function compileObject(def: any, checks: Internal[]): Parser {
   if (def.catchall !== undefined) throw new Unsupported("catchall");
@@ -245,12 +251,12 @@ function compile(schema: Internal): Parser {
 /* eslint-enable @typescript-eslint/no-explicit-any */
 
 /**
- * Compile the fast parser for `designInputSchema`; `null` when the schema holds something it does
- * not model. `generate: false` builds the generic version used where code generation is blocked
- * (exported so the tests can check both).
+ * Compile the fast parser for `designInputSchema`; `parse` is null when the schema holds something
+ * it does not model. `generate: false` builds the generic version used where code generation is
+ * not allowed (exported so the tests can check both).
  */
-export function compileFastParser(generate = CAN_GENERATE): { parse: ((raw: unknown) => DesignInput | undefined) | null; offReason: string } {
-  generating = generate && CAN_GENERATE;
+export function compileFastParser(generate = canGenerate()): { parse: ((raw: unknown) => DesignInput | undefined) | null; offReason: string } {
+  generating = generate;
   try {
     const p = compile(designInputSchema as unknown as Internal);
     return { parse: (raw) => { const r = p(raw); return r === FAIL ? undefined : (r as DesignInput); }, offReason: "" };
@@ -258,23 +264,23 @@ export function compileFastParser(generate = CAN_GENERATE): { parse: ((raw: unkn
     if (!(e instanceof Unsupported)) throw e;
     return { parse: null, offReason: e.message };
   } finally {
-    generating = CAN_GENERATE;
+    generating = false;
   }
 }
 
-const compiled = compileFastParser();
+let compiled: ReturnType<typeof compileFastParser> | undefined;
 
-/** False when the schema holds something the fast path does not model: then zod does all the work. */
-export const FAST_PARSE_ENABLED = compiled.parse !== null;
-/** Why the fast path is off ("" when on), for the test that insists it is on. */
-export const FAST_PARSE_OFF_REASON = compiled.offReason;
-
-const fast = compiled.parse;
+/** Whether the fast path is on, and why not ("" when on); compiles it on first use. */
+export function fastParseStatus(): { enabled: boolean; offReason: string } {
+  compiled ??= compileFastParser();
+  return { enabled: compiled.parse !== null, offReason: compiled.offReason };
+}
 
 /**
  * The parsed input exactly as `designInputSchema.parse(raw)` would return it, or `undefined` when
  * the fast path cannot vouch for that (invalid or unusual input): then ask zod.
  */
 export function fastParseDesignInput(raw: unknown): DesignInput | undefined {
-  return fast ? fast(raw) : undefined;
+  compiled ??= compileFastParser();
+  return compiled.parse ? compiled.parse(raw) : undefined;
 }
