@@ -24,10 +24,10 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
           </nav>
           {user ? (
             <div className="ml-auto flex items-center gap-3 text-sm">
-              <span className="text-slate-600">
+              <Link href="/account" className="text-slate-600 hover:text-accent-700" title="Your account and licences">
                 {user.name} · {user.organisationName}
                 <span className="ml-1 text-xs text-slate-500">({user.roles.map((r) => ROLE_LABELS[r]).join(", ")})</span>
-              </span>
+              </Link>
               <form action={signOutAction}>
                 <button type="submit" className="rounded-md border border-slate-300 px-3 py-1 hover:bg-slate-50">Sign out</button>
               </form>

@@ -31,7 +31,7 @@ export function RoleCheckboxes({
       <div className={compact ? "flex flex-wrap gap-x-4 gap-y-1" : "space-y-1"}>
         {roles.map((role) => (
           <label key={role} className="flex items-start gap-2 text-sm">
-            <input type="checkbox" name={name} value={role} defaultChecked={checked.includes(role)} className="mt-0.5 size-4 accent-accent-700" />
+            <input type="checkbox" name={name} value={role} defaultChecked={checked.includes(role)} className="mt-0.5 size-4 shrink-0 accent-accent-700" />
             <span>
               {ROLE_LABELS[role]}
               {compact ? null : <span className="text-slate-500"> — {ROLE_HINTS[role]}</span>}

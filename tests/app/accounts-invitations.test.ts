@@ -4,9 +4,9 @@ import { inviteMemberAction } from "@/app/(workspace)/admin/members/actions";
 import { GET as getSession } from "@/app/api/session/route";
 import { hashToken } from "@/app/_lib/tokens";
 import { db } from "@/db/client";
-import { DEMO_ORG_ID, DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
+import { DEMO_ORG_ID, OTHER_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { formArgs } from "../support/access-matrix";
-import { freshInvitation, uniqueEmail } from "../support/accounts";
+import { FRESH_PASSWORD, freshInvitation, freshMember, uniqueEmail } from "../support/accounts";
 import { firstLink, mailTo } from "../support/mailbox";
 import { actAs, jsonRequest, outcomeOf, resetRequest } from "../support/next-context";
 
@@ -74,14 +74,15 @@ describe("invitations", () => {
   });
 
   it("lets someone with an account elsewhere join by proving their password (a wrong one does not use the link)", async () => {
-    const email = "designer@other.pierwise.test";
+    // A fresh person of the other organisation (not the demo cast, whose single membership other tests rely on).
+    const { email } = await freshMember({ organisationId: OTHER_ORG_ID, roles: ["designer"] });
     const { token } = await freshInvitation({ email, roles: ["engineer"] });
     const wrong = stateOf(await run(acceptInvitationAction, { token, password: "not-the-password" }));
     expect(wrong.fieldErrors?.password?.[0]).toMatch(/not the password/);
     expect((await db("invitations").where("token_hash", hashToken(token)).first("accepted_at")).accepted_at).toBeNull();
 
     resetRequest();
-    expect(await run(acceptInvitationAction, { token, password: DEMO_PASSWORD })).toEqual({ kind: "redirect", location: "/projects" });
+    expect(await run(acceptInvitationAction, { token, password: FRESH_PASSWORD })).toEqual({ kind: "redirect", location: "/projects" });
     const me = await (await getSession(jsonRequest("GET", "/api/session"), {})).json();
     expect(me.organisation.id).toBe(DEMO_ORG_ID);
     expect(me.roles).toEqual(["engineer"]);

@@ -3,9 +3,9 @@ import { acceptInvitationAction } from "@/app/(auth)/invite/[token]/actions";
 import { POST } from "@/app/api/session/route";
 import { db } from "@/db/client";
 import { THROTTLE } from "@/db/queries/sign-in-throttle";
-import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
+import { DEMO_PASSWORD, OTHER_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { formArgs } from "../support/access-matrix";
-import { freshInvitation, uniqueEmail } from "../support/accounts";
+import { FRESH_PASSWORD, freshInvitation, freshMember, uniqueEmail } from "../support/accounts";
 import { jsonRequest, outcomeOf, resetRequest } from "../support/next-context";
 
 beforeEach(async () => {
@@ -29,14 +29,14 @@ describe("sign-in throttling beyond one account", () => {
   });
 
   it("counts wrong passwords typed on an invitation page against the account too", async () => {
-    const email = "designer@other.pierwise.test";
+    const { email } = await freshMember({ organisationId: OTHER_ORG_ID });
     resetRequest({ ip: "192.0.2.60" });
     for (let i = 0; i < THROTTLE.perEmail; i++) {
       const { token } = await freshInvitation({ email });
       await outcomeOf(() => acceptInvitationAction(...(formArgs({ token, password: `wrong-${i}` }) as [never, FormData])));
     }
     const { token } = await freshInvitation({ email });
-    const outcome = await outcomeOf(() => acceptInvitationAction(...(formArgs({ token, password: DEMO_PASSWORD }) as [never, FormData])));
+    const outcome = await outcomeOf(() => acceptInvitationAction(...(formArgs({ token, password: FRESH_PASSWORD }) as [never, FormData])));
     expect((outcome as { value: { message: string } }).value.message).toMatch(/Too many failed attempts/);
   });
 });

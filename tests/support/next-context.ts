@@ -57,6 +57,7 @@ export async function actAs(email: string | null): Promise<void> {
   const row = await db("users as u")
     .join("memberships as m", "m.user_id", "u.id")
     .where("u.email", email)
+    .orderBy("m.created_at", "asc") // the first organisation joined, as sign-in picks it
     .first("u.id as userId", "m.organisation_id as organisationId");
   if (!row) throw new Error(`no such test user: ${email}`);
   const { sessionOptions } = await import("@/app/_lib/session");

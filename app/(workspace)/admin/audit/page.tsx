@@ -48,7 +48,21 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <p className="mt-1 text-sm text-slate-600">
         Sign-ins, failed sign-ins, invitations, role changes and deactivations in {user.organisationName}, newest first. Times are UTC.
       </p>
-      <div className="mt-4 overflow-x-auto rounded-lg border border-slate-200 bg-white">
+      {/* Phones get one card per event instead of a table that scrolls sideways. */}
+      <ol className="mt-4 space-y-2 md:hidden" aria-label="Audit events">
+        {rows.map((row) => (
+          <li key={row.id} className="rounded-lg border border-slate-200 bg-white p-3 text-sm">
+            <div className={`font-medium ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{ACTION_LABELS[row.action] ?? row.action}</div>
+            <div>{row.actorName ?? <span className="text-slate-500">not signed in</span>}{row.subject ? <span className="break-all text-slate-600"> · {row.subject}</span> : null}</div>
+            {describe(row) ? <div className="text-slate-500">{describe(row)}</div> : null}
+            <div className="text-xs text-slate-500">
+              <time dateTime={row.at.toISOString()}>{row.at.toISOString().slice(0, 19).replace("T", " ")} UTC</time> · from <span className="font-mono">{row.ip ?? "unknown"}</span>
+            </div>
+          </li>
+        ))}
+        {rows.length === 0 ? <li className="px-3 py-6 text-center text-slate-500">Nothing recorded on this page.</li> : null}
+      </ol>
+      <div className="mt-4 hidden overflow-x-auto rounded-lg border border-slate-200 bg-white md:block">
         <table className="w-full min-w-[44rem] text-left text-sm">
           <thead className="bg-slate-50 text-slate-700">
             <tr>

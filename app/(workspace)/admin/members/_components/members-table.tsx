@@ -49,7 +49,7 @@ const columns = [
         <span className="text-accent-800">Active</span>
       ),
   }),
-  column.accessor("joinedAt", { header: "Joined", cell: ({ getValue }) => getValue().slice(0, 10) }),
+  column.accessor("joinedAt", { header: "Joined", cell: ({ getValue }) => <span className="whitespace-nowrap">{getValue().slice(0, 10)}</span> }),
   column.display({
     id: "actions",
     header: () => <span className="sr-only">Actions</span>,
@@ -105,7 +105,21 @@ export function MembersTable({ members, currentUserId }: { members: MemberRow[];
           </select>
         </label>
       </div>
-      <div className="mt-3 overflow-x-auto rounded-lg border border-slate-200 bg-white">
+      {/* Phones get one card per member, so every action stays in reach without sideways scrolling. */}
+      <ul className="mt-3 space-y-3 md:hidden" aria-label="Members">
+        {rows.map((row) => (
+          <li key={row.id} className="space-y-2 rounded-lg border border-slate-200 bg-white p-3 text-sm">
+            {row.getVisibleCells().map((cell) => (
+              <div key={cell.id}>
+                {cell.column.id === "joinedAt" ? <span className="text-slate-500">Joined </span> : null}
+                {flexRender(cell.column.columnDef.cell, cell.getContext())}
+              </div>
+            ))}
+          </li>
+        ))}
+        {rows.length === 0 ? <li className="px-3 py-6 text-center text-slate-500">No members match these filters.</li> : null}
+      </ul>
+      <div className="relative mt-3 hidden overflow-x-auto rounded-lg border border-slate-200 bg-white md:block">
         <table className="w-full min-w-[40rem] text-left text-sm">
           <thead className="bg-slate-50 text-slate-700">
             {table.getHeaderGroups().map((group) => (
