@@ -25,7 +25,10 @@ export class AccessError extends Error {
 export const currentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await getSession();
   if (!session.userId || !session.organisationId) return null;
-  return (await findActiveMember(session.userId, session.organisationId)) ?? null;
+  const member = await findActiveMember(session.userId, session.organisationId);
+  // A password reset ends every session that began before it.
+  if (member?.passwordChangedAt && (session.signedInAt ?? 0) < new Date(member.passwordChangedAt).getTime()) return null;
+  return member ?? null;
 });
 
 export async function requireUser(): Promise<CurrentUser> {

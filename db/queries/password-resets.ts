@@ -44,7 +44,8 @@ export async function consumePasswordReset(tokenHash: string, passwordHash: stri
     }
     const userId = claimed.user_id as string;
     await trx("password_resets").where("user_id", userId).whereNull("used_at").update({ used_at: trx.fn.now() });
-    const [user] = await trx("users").where("id", userId).update({ password_hash: passwordHash }).returning("email");
+    // The app's clock, not the database's: the new session started right after compares against it.
+    const [user] = await trx("users").where("id", userId).update({ password_hash: passwordHash, password_changed_at: new Date() }).returning("email");
     await trx("sign_in_failures").where("email", user.email).delete();
     const membership = await trx("memberships").where("user_id", userId).orderBy("created_at").first("organisation_id");
     return { ok: true, userId, email: user.email, organisationId: membership?.organisation_id ?? null } as const;

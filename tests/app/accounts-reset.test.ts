@@ -1,14 +1,15 @@
 import { afterAll, beforeEach, describe, expect, it } from "vitest";
 import { setNewPasswordAction } from "@/app/(auth)/reset/[token]/actions";
 import { requestPasswordResetAction } from "@/app/(auth)/reset/actions";
-import { POST as postSession } from "@/app/api/session/route";
+import { cookies } from "next/headers";
+import { GET as getSession, POST as postSession } from "@/app/api/session/route";
 import { hashToken } from "@/app/_lib/tokens";
 import { db } from "@/db/client";
 import { passwordResetState } from "@/db/queries/password-resets";
 import { formArgs } from "../support/access-matrix";
 import { FRESH_PASSWORD, freshMember, freshReset, uniqueEmail } from "../support/accounts";
 import { firstLink, mailTo } from "../support/mailbox";
-import { jsonRequest, outcomeOf, resetRequest } from "../support/next-context";
+import { actAs, jsonRequest, outcomeOf, resetRequest, sessionCookie } from "../support/next-context";
 
 type State = { ok?: boolean; message?: string; fieldErrors?: Record<string, string[]> };
 const run = async (action: (p: never, f: FormData) => Promise<unknown>, fields: Record<string, string>) =>
@@ -61,6 +62,19 @@ describe("password reset", () => {
     expect(await db("audit_events").where({ subject: member.email }).pluck("action")).toEqual(
       expect.arrayContaining(["password-reset-requested", "password-reset"]),
     );
+  });
+
+  it("ends sessions that began before the reset; the session the reset starts works", async () => {
+    const member = await freshMember();
+    await actAs(member.email);
+    const before = sessionCookie()!;
+    expect((await getSession(jsonRequest("GET", "/api/session"), {})).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 5)); // the old session must begin strictly earlier
+    const token = await freshReset(member.userId);
+    expect((await run(setNewPasswordAction, { token, password: "after-reset-password" })).kind).toBe("redirect");
+    expect((await getSession(jsonRequest("GET", "/api/session"), {})).status).toBe(200); // the new session
+    (await cookies()).set("pierwise_session", before); // someone still holding the old cookie
+    expect((await getSession(jsonRequest("GET", "/api/session"), {})).status).toBe(401);
   });
 
   it("refuses an expired link with its own message and leaves the password alone", async () => {
