@@ -35,7 +35,7 @@ export default async function ProjectPage({ params, searchParams }: Props) {
         <div>
           <h1 className="text-2xl font-semibold">{project.name}</h1>
           <p className="mt-1 text-sm text-slate-600">
-            {project.address || "No address"} · {project.state}
+            {project.address || "No address"}{project.address.toUpperCase().includes(`, ${project.state}`) ? "" : ` · ${project.state}`}
             {project.latitude !== null && project.longitude !== null ? ` · ${project.latitude.toFixed(4)}, ${project.longitude.toFixed(4)}` : ""}
           </p>
           {project.notes ? <p className="mt-2 max-w-2xl text-sm whitespace-pre-line text-slate-700">{project.notes}</p> : null}

@@ -55,7 +55,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
         <StatusBadge status={shown.status} />
       </div>
       <p className="mt-1 text-sm text-slate-600">
-        Saved {new Date(shown.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note}”` : ""}.
+        Saved {new Date(shown.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note.replace(/\.$/, "")}”` : ""}.
         <span className="ml-1 font-mono text-xs text-slate-400" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
       </p>
       {isOld ? (

@@ -112,8 +112,8 @@ export function DesignEditor(props: EditorProps) {
 
   return (
     <FormProvider {...(form as unknown as import("react-hook-form").UseFormReturn<FieldValues>)}>
-      <form onSubmit={onSubmit} noValidate className="grid gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
-        <div className="space-y-4">
+      <form onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
+        <div className="min-w-0 space-y-4">
           <div className="flex flex-wrap items-center justify-between gap-3">
             <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">
               {(["imperial", "metric"] as const).map((u) => (
@@ -160,7 +160,7 @@ export function DesignEditor(props: EditorProps) {
           ) : null}
         </div>
 
-        <aside aria-label="Results" className="space-y-3 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:self-start lg:overflow-y-auto lg:pr-1">
+        <aside aria-label="Results" className="min-w-0 space-y-3 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:self-start lg:overflow-y-auto lg:pr-1">
           <Caution compact />
           <div className="flex items-center justify-between gap-2">
             <h2 className="text-base font-semibold">Results</h2>
