@@ -17,9 +17,9 @@ import type { DesignInput } from "@/engine";
 import { listProjectFiles } from "@/db/queries/project-files";
 import { organisationEngineers } from "@/db/queries/review-people";
 import { lastReviewed, lastReviewedBy } from "@/db/queries/review-queue";
-import { DecisionForm } from "./_components/decision-form";
+import { DecisionPanel } from "./_components/decision-form";
 import { ReviewHistory } from "./_components/review-history";
-import { SubmitForm, type EngineerChoice } from "./_components/submit-form";
+import { SubmitPanel, type EngineerChoice } from "./_components/submit-form";
 
 export const metadata: Metadata = { title: "Review" };
 
@@ -145,23 +145,12 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
         </div>
 
         <aside className="order-1 space-y-4 lg:order-2">
-          {canDecide ? (
-            <section aria-labelledby="decide-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
-              <h2 id="decide-h" className="text-base font-semibold">Your decision</h2>
-              {eligibility && !eligibility.ok ? <p role="alert" className="mt-2 rounded bg-red-50 p-2 text-sm text-red-800">{eligibility.message}</p> : null}
-              <div className="mt-3">
-                <DecisionForm revisionId={ctx.id} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
-                  licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} and the time. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
-              </div>
-            </section>
+          {isEngineer ? (
+            <DecisionPanel open={canDecide} revisionId={ctx.id} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
+              licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}
+              licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} and the time. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
           ) : null}
-          {canSubmit ? (
-            <section aria-labelledby="submit-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
-              <h2 id="submit-h" className="text-base font-semibold">{ctx.status === "changes_requested" ? "Resubmit for review" : "Submit for review"}</h2>
-              {ctx.status === "changes_requested" ? <p className="mt-1 text-sm text-slate-600">Changes were requested on this revision: save a new revision with the changes and submit that one, or resubmit this one as it is.</p> : null}
-              <div className="mt-3"><SubmitForm revisionId={ctx.id} engineers={choices} /></div>
-            </section>
-          ) : null}
+          {hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} /> : null}
           <ReviewHistory standing={standing} revisionId={ctx.id} />
         </aside>
       </div>

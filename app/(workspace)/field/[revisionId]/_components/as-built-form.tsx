@@ -21,7 +21,7 @@ export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revi
   const errorLine = (name: string) => (err(name) ? <p id={`${name}-error`} className="text-sm text-red-700">{err(name)!.join(" ")}</p> : null);
   const input = "block w-full rounded-md border border-slate-300 bg-white px-3 py-3 text-base aria-[invalid]:border-red-600";
   return (
-    <form action={action} className="space-y-3" encType="multipart/form-data">
+    <form action={action} className="space-y-3">
       <input type="hidden" name="revisionId" value={revisionId} />
       <div>
         <label htmlFor="postId" className="block text-sm font-medium">Hole at post</label>

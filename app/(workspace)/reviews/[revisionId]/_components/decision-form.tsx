@@ -9,13 +9,25 @@ import { decideReviewAction } from "../actions";
  * Approve or request changes. Each comment may be pinned to an input; requesting changes needs
  * at least one comment. A signed letter may go with an approval.
  */
-export function DecisionForm({ revisionId, inputs, licenceNote }: { revisionId: string; inputs: { path: string; label: string }[]; licenceNote: string }) {
+export function DecisionPanel(props: { revisionId: string; inputs: { path: string; label: string }[]; licenceNote: string; licenceProblem: string | null; open: boolean }) {
   const [state, action] = useActionState<ActionState, FormData>(decideReviewAction, {});
+  // Stays mounted once the decision is made (the page then no longer offers the form) to keep the confirmation in view.
+  if (!props.open) return state.ok ? <p role="status" className="no-print rounded-lg border-2 border-accent-600 bg-accent-50 p-4 text-sm font-medium">{state.message}</p> : null;
+  return (
+    <section aria-labelledby="decide-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
+      <h2 id="decide-h" className="text-base font-semibold">Your decision</h2>
+      {props.licenceProblem ? <p role="alert" className="mt-2 rounded bg-red-50 p-2 text-sm text-red-800">{props.licenceProblem}</p> : null}
+      <div className="mt-3"><DecisionForm {...props} state={state} action={action} /></div>
+    </section>
+  );
+}
+
+function DecisionForm({ revisionId, inputs, licenceNote, state, action }: { revisionId: string; inputs: { path: string; label: string }[]; licenceNote: string; state: ActionState; action: (form: FormData) => void }) {
   const [count, setCount] = useState(1);
   const rows = Math.max(count, ...Object.keys(state.values ?? {}).map((k) => Number(k.match(/^comment\.(\d+)\./)?.[1] ?? -1) + 1));
   const err = (name: string) => state.fieldErrors?.[name];
   return (
-    <form action={action} className="space-y-4" encType="multipart/form-data">
+    <form action={action} className="space-y-4">
       <input type="hidden" name="revisionId" value={revisionId} />
       <fieldset className="space-y-2">
         <legend className="text-sm font-medium">Decision</legend>

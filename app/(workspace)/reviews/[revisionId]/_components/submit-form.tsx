@@ -13,9 +13,23 @@ export interface EngineerChoice {
   eligible: boolean;
 }
 
-/** The designer chooses a reviewing engineer and submits this revision. */
-export function SubmitForm({ revisionId, engineers }: { revisionId: string; engineers: EngineerChoice[] }) {
+/**
+ * The designer chooses a reviewing engineer and submits this revision. Stays mounted after a
+ * successful submit (when the page no longer offers the form) so its confirmation stays in view.
+ */
+export function SubmitPanel({ revisionId, engineers, open, resubmit }: { revisionId: string; engineers: EngineerChoice[]; open: boolean; resubmit: boolean }) {
   const [state, action] = useActionState<ActionState, FormData>(submitForReviewAction, {});
+  if (!open) return state.ok ? <p role="status" className="no-print rounded-lg border-2 border-accent-600 bg-accent-50 p-4 text-sm font-medium">{state.message}</p> : null;
+  return (
+    <section aria-labelledby="submit-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
+      <h2 id="submit-h" className="text-base font-semibold">{resubmit ? "Resubmit for review" : "Submit for review"}</h2>
+      {resubmit ? <p className="mt-1 text-sm text-slate-600">Changes were requested on this revision: save a new revision with the changes and submit that one, or resubmit this one as it is.</p> : null}
+      <div className="mt-3"><SubmitForm revisionId={revisionId} engineers={engineers} state={state} action={action} /></div>
+    </section>
+  );
+}
+
+function SubmitForm({ revisionId, engineers, state, action }: { revisionId: string; engineers: EngineerChoice[]; state: ActionState; action: (form: FormData) => void }) {
   const error = state.fieldErrors?.engineerId;
   const firstEligible = engineers.find((e) => e.eligible)?.userId ?? "";
   return (
