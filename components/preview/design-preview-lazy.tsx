@@ -1,13 +1,25 @@
 "use client";
 import dynamic from "next/dynamic";
+import type { CSSProperties } from "react";
 import type { DesignPreviewProps } from "./design-preview";
 
-/** Keeps three.js and the scene out of the host page's first load; a box of the same height meanwhile. */
-export const DesignPreviewLazy = dynamic<DesignPreviewProps>(() => import("./design-preview"), {
+/** Keeps three.js and the scene out of the host page's first load. */
+const DesignPreviewChunk = dynamic<DesignPreviewProps>(() => import("./design-preview"), {
   ssr: false,
+  // As tall as the preview will be (toolbar, canvas, caption), so the page does not jump.
   loading: () => (
-    <div role="status" className="flex h-[440px] items-center justify-center rounded-lg border border-slate-200 bg-slate-50 text-sm text-slate-500">
+    <div role="status" className="flex h-[var(--pw-preview-h,560px)] items-center justify-center rounded-lg border border-slate-200 bg-slate-50 text-sm text-slate-500">
       Loading the 3D preview…
     </div>
   ),
 });
+
+/** The 3D preview, loaded on demand in the browser only. Props as `DesignPreview`. */
+export function DesignPreviewLazy(props: DesignPreviewProps) {
+  const style = { "--pw-preview-h": `${(props.height ?? 440) + 120}px` } as CSSProperties;
+  return (
+    <div style={style}>
+      <DesignPreviewChunk {...props} />
+    </div>
+  );
+}

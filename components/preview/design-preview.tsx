@@ -11,6 +11,7 @@ import { previewFigures, type UnitSystem } from "./preview-labels";
 import { Scene } from "./scene";
 import { PreviewToolbar } from "./preview-toolbar";
 import { webglAvailable } from "./webgl-support";
+import { northMarker } from "./scene-annotations";
 
 export interface DesignPreviewProps {
   input: DesignInput;
@@ -78,7 +79,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
           <span className="font-medium">Embedment</span> {figures.embedment} (post {figures.embedmentPostId})
         </p>
         {figures.wind ? <p><span className="font-medium">Governing wind</span> {figures.wind}</p> : null}
-        <p className="text-xs text-slate-500">North marker: array assumed facing south (no azimuth is entered). Member sizes are drawn, not to scale; posts, footings and clearances are to scale.</p>
+        <p className="text-xs text-slate-500">North marker: {northMarker(geometry).assumption} (the design has no azimuth). Rails, beam and module thickness are drawn, not to scale; posts, footings, clearance and embedment are to scale.</p>
         {showCaution ? <Caution compact /> : null}
       </figcaption>
     </figure>

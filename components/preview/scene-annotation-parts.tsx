@@ -94,12 +94,11 @@ export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figure
       {wind ? (
         <group>
           <Arrow tail={wind.tail} head={wind.head} radiusFt={size * 0.18} material={MATERIALS.wind} />
-          <Label at={[wind.tail[0], wind.tail[1] + size * 1.2, wind.tail[2]]} text={g.wind ? windSceneLabel(g.wind) : ""} color={COLOURS.wind} side="center" />
+          <Label at={[wind.tail[0], wind.tail[1] + size * 3, wind.tail[2]]} text={g.wind ? windSceneLabel(g.wind) : ""} color={COLOURS.wind} />
         </group>
       ) : null}
       <Arrow tail={north.at} head={northTip} radiusFt={size * 0.08} material={MATERIALS.north} />
       <Label at={[northTip[0], northTip[1] + size, northTip[2]]} text="N" color={COLOURS.north} px={16} side="center" />
-      <Label at={[north.at[0], north.at[1] + size * 0.2, north.at[2] + size * 1.5]} text={north.assumption} color={COLOURS.north} px={11} />
     </group>
   );
 }

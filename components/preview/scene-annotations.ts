@@ -12,17 +12,21 @@ export interface DimensionLine { from: Vec3; to: Vec3; ticks: [Vec3, Vec3][]; la
 const add = (a: Vec3, b: Vec3): Vec3 => [a[0] + b[0], a[1] + b[1], a[2] + b[2]];
 const scale = (a: Vec3, k: number): Vec3 => [a[0] * k, a[1] * k, a[2] * k];
 
-function verticalDimension(from: Vec3, to: Vec3, standOff: Vec3): DimensionLine {
+/**
+ * `labelEnd` puts the label beside one end of the line: the clearance label at its top and the
+ * embedment label at its bottom keep the two apart on screen when the lines stand close together.
+ */
+function verticalDimension(from: Vec3, to: Vec3, standOff: Vec3, labelEnd: "from" | "to"): DimensionLine {
   const a = add(from, standOff), b = add(to, standOff);
   const t = DRAW.tickFt / 2;
   const ticks: [Vec3, Vec3][] = [a, b].map((p) => [add(p, [-t, 0, 0]), add(p, [t, 0, 0])] as [Vec3, Vec3]);
-  return { from: a, to: b, ticks, labelAt: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2, (a[2] + b[2]) / 2] };
+  return { from: a, to: b, ticks, labelAt: labelEnd === "from" ? a : b };
 }
 
 /** Clearance: from the lowest edge straight down to grade, stood off toward the front (+z in three). */
 export function clearanceDimension(g: PreviewGeometry): DimensionLine {
   const c = g.dimensions.clearance;
-  return verticalDimension(toScene(c.from), toScene(c.to), [0, 0, DRAW.dimensionStandOffFt]);
+  return verticalDimension(toScene(c.from), toScene(c.to), [0, 0, DRAW.dimensionStandOffFt], "from");
 }
 
 /**
@@ -33,7 +37,7 @@ export function embedmentDimension(g: PreviewGeometry): DimensionLine {
   const e = g.dimensions.embedment;
   const footing = g.footings.find((f) => f.postId === e.postId) ?? g.footings[0];
   const out = (footing ? footing.diameterFt / 2 : 0) + DRAW.dimensionStandOffFt;
-  return verticalDimension(toScene(e.from), toScene(e.to), [0, 0, out]);
+  return verticalDimension(toScene(e.from), toScene(e.to), [0, 0, out], "to");
 }
 
 export interface WindArrow { tail: Vec3; head: Vec3; direction: Vec3; lengthFt: number }
@@ -54,10 +58,11 @@ export function windArrow(g: PreviewGeometry, lengthFt: number): WindArrow | nul
 /**
  * The north marker. The engine has no azimuth input, so the array is assumed to face south: its
  * modules face the engine's −y, so north is +y (three's −z). The marker sits at the ground's
- * front-left corner.
+ * back-right corner, away from the dimension labels (the engine's clearance and embedment points
+ * are at the front or on the post row).
  */
 export function northMarker(g: PreviewGeometry): { at: Vec3; north: Vec3; assumption: string } {
-  const corner = g.ground.corners[0];
+  const corner = g.ground.corners[2];
   return { at: toScene(corner), north: toScene({ xFt: 0, yFt: 1, zFt: 0 }), assumption: "array assumed facing south" };
 }
 
