@@ -34,6 +34,8 @@ function geometryAtTilt(input: DesignInput, result: DesignResult, tiltDeg: numbe
   }
 }
 
+const SCENE_FAILED = "The 3D preview could not start in this browser.";
+
 /** The 3D preview of the array, grade and footings, with a 2D elevation where WebGL is missing. */
 export default function DesignPreview({ input, result, unitSystem, readOnly = false, height = 440, showCaution = true }: DesignPreviewProps) {
   const settings = useMemo(
@@ -46,7 +48,8 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
   const tiltDeg = chosen && chosen.designTiltDeg === input.array.tiltDeg && settings?.includes(chosen.tiltDeg) ? chosen.tiltDeg : null;
   const { geometry, error } = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
   const figures = useMemo(() => previewFigures(geometry, unitSystem), [geometry, unitSystem]);
-  const [webgl, setWebgl] = useState(webglAvailable);
+  // Why the 3D scene is not shown (null while it is): no WebGL up front, or it failed or was lost later.
+  const [noScene, setNoScene] = useState<string | null>(() => (webglAvailable() ? null : "This browser has WebGL turned off, so the 3D preview cannot be drawn."));
   const [view, setView] = useState<{ name: ViewName; seq: number }>({ name: "home", seq: 0 });
 
   const fallback = (reason: string) => <ElevationFallback geometry={geometry} figures={figures} height={height} reason={reason} />;
@@ -56,7 +59,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
   return (
     <figure className="overflow-hidden rounded-lg border border-slate-200 bg-white" aria-label="Design preview" data-testid="design-preview">
       <PreviewToolbar
-        views={webgl}
+        views={noScene === null}
         onView={(name) => setView((v) => ({ name, seq: v.seq + 1 }))}
         settings={settings}
         designTiltDeg={input.array.tiltDeg}
@@ -64,12 +67,12 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
         onTilt={(t) => setChosen({ designTiltDeg: input.array.tiltDeg, tiltDeg: t })}
       />
       <div className="relative" style={{ height }}>
-        {webgl ? (
-          <PreviewErrorBoundary fallback={fallback("The 3D preview could not start in this browser.")}>
-            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={() => setWebgl(false)} />
+        {noScene === null ? (
+          <PreviewErrorBoundary fallback={fallback(SCENE_FAILED)} onError={() => setNoScene(SCENE_FAILED)}>
+            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={() => setNoScene("The 3D preview lost its graphics context.")} />
           </PreviewErrorBoundary>
         ) : (
-          fallback("This browser has WebGL turned off, so the 3D preview cannot be drawn.")
+          fallback(noScene)
         )}
       </div>
       <figcaption className="space-y-1 border-t border-slate-200 px-3 py-2 text-sm text-slate-700">

@@ -5,7 +5,7 @@ import { Component, type ReactNode } from "react";
  * Catches a failing 3D scene (no WebGL context, a lost context, a shader that will not compile) and
  * shows the fallback instead of breaking the page around it.
  */
-export class PreviewErrorBoundary extends Component<{ fallback: ReactNode; children: ReactNode }, { failed: boolean }> {
+export class PreviewErrorBoundary extends Component<{ fallback: ReactNode; onError?: () => void; children: ReactNode }, { failed: boolean }> {
   state = { failed: false };
 
   static getDerivedStateFromError(): { failed: boolean } {
@@ -14,6 +14,7 @@ export class PreviewErrorBoundary extends Component<{ fallback: ReactNode; child
 
   componentDidCatch(error: unknown): void {
     console.warn("3D preview failed; showing the 2D elevation instead.", error);
+    this.props.onError?.();
   }
 
   render(): ReactNode {

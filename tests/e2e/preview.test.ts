@@ -1,0 +1,197 @@
+/**
+ * The 3D preview in the design editor, in Debian's Chromium: software WebGL draws the scene and
+ * a tilt edit redraws it; with WebGL switched off the 2D side elevation shows the same clearance and
+ * embedment figures. Navigates by the demo seed's invented project and design names.
+ */
+import type { Browser, Locator, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DESKTOP, PHONE, launch, shot, signedInContext } from "../support/browser";
+
+const DESIGNER = "designer@demo.pierwise.test";
+// The scene's clear colour (components/preview/scene-style.ts COLOURS.background).
+const BACKGROUND = [0xee, 0xf2, 0xf6];
+
+async function openDemoDesign(browser: Browser, viewport = DESKTOP): Promise<Page> {
+  const context = await signedInContext(browser, DESIGNER, viewport);
+  const page = await context.newPage();
+  await page.goto("/projects");
+  await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
+  await page.getByRole("link", { name: "Alternative on four posts" }).click();
+  await page.getByTestId("design-preview").waitFor({ timeout: 30_000 });
+  return page;
+}
+
+/** Decodes a PNG of the canvas in the page (a 2D canvas works without WebGL) and returns its pixels. */
+async function canvasPixels(page: Page, canvas: Locator): Promise<number[]> {
+  const png = (await canvas.screenshot()).toString("base64");
+  return page.evaluate(async (b64) => {
+    const img = new Image();
+    img.src = `data:image/png;base64,${b64}`;
+    await img.decode();
+    const c = document.createElement("canvas");
+    c.width = img.width;
+    c.height = img.height;
+    const ctx = c.getContext("2d")!;
+    ctx.drawImage(img, 0, 0);
+    return Array.from(ctx.getImageData(0, 0, c.width, c.height).data);
+  }, png);
+}
+
+function drawnFraction(rgba: number[]): number {
+  let drawn = 0;
+  for (let i = 0; i < rgba.length; i += 4) {
+    const d = Math.abs(rgba[i] - BACKGROUND[0]) + Math.abs(rgba[i + 1] - BACKGROUND[1]) + Math.abs(rgba[i + 2] - BACKGROUND[2]);
+    if (d > 30) drawn++;
+  }
+  return drawn / (rgba.length / 4);
+}
+
+function changedFraction(a: number[], b: number[]): number {
+  if (a.length !== b.length) return 1;
+  let changed = 0;
+  for (let i = 0; i < a.length; i += 4) {
+    if (Math.abs(a[i] - b[i]) + Math.abs(a[i + 1] - b[i + 1]) + Math.abs(a[i + 2] - b[i + 2]) > 30) changed++;
+  }
+  return changed / (a.length / 4);
+}
+
+/** The preview alone, for reading by eye (SCREENSHOTS=1). */
+async function elementShot(element: Locator, name: string): Promise<void> {
+  if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `/tmp/shots/${name}.png` });
+}
+
+/** Polls until `check` passes: software WebGL and the font take a moment. */
+async function eventually<T>(read: () => Promise<T>, ok: (v: T) => boolean, timeoutMs = 30_000): Promise<T> {
+  const until = Date.now() + timeoutMs;
+  let value = await read();
+  while (!ok(value) && Date.now() < until) {
+    await new Promise((r) => setTimeout(r, 500));
+    value = await read();
+  }
+  return value;
+}
+
+describe("3D preview in the design editor (software WebGL)", () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("draws the scene, and redraws it when the tilt changes", async () => {
+    const page = await openDemoDesign(browser);
+    const preview = page.getByTestId("design-preview");
+    const canvas = preview.locator("canvas");
+    await canvas.waitFor({ timeout: 30_000 });
+    expect(await preview.getByTestId("preview-fallback").count()).toBe(0);
+
+    const before = await eventually(() => canvasPixels(page, canvas), (px) => drawnFraction(px) > 0.03);
+    // The array, ground and footings cover well over 3 % of the canvas at the framed home view.
+    expect(drawnFraction(before)).toBeGreaterThan(0.03);
+    await shot(page, "preview-editor-desktop");
+    await elementShot(preview, "preview-element-desktop");
+
+    const tilt = page.getByLabel("Tilt", { exact: true });
+    expect(await tilt.inputValue()).toBe("30");
+    await tilt.fill("10");
+    await tilt.blur();
+    await page.locator('[role="img"][aria-label^="3D preview at 10° tilt"]').waitFor({ timeout: 30_000 });
+    const after = await eventually(() => canvasPixels(page, canvas), (px) => changedFraction(before, px) > 0.01);
+    expect(changedFraction(before, after)).toBeGreaterThan(0.01);
+    expect(drawnFraction(after)).toBeGreaterThan(0.03);
+
+    await preview.getByRole("button", { name: "Side" }).click();
+    const side = await eventually(() => canvasPixels(page, canvas), (px) => changedFraction(after, px) > 0.01);
+    expect(changedFraction(after, side)).toBeGreaterThan(0.01);
+    await shot(page, "preview-editor-side");
+    await page.context().close();
+  });
+
+  it("fits a phone screen", async () => {
+    const page = await openDemoDesign(browser, PHONE);
+    const preview = page.getByTestId("design-preview");
+    const canvas = preview.locator("canvas");
+    await canvas.waitFor({ timeout: 30_000 });
+    const px = await eventually(() => canvasPixels(page, canvas), (p) => drawnFraction(p) > 0.03);
+    await shot(page, "preview-editor-phone");
+    await elementShot(preview, "preview-element-phone");
+    expect(drawnFraction(px)).toBeGreaterThan(0.03);
+    // The preview is as wide as the column the host gives it, never wider.
+    const own = (await preview.boundingBox())!;
+    const host = (await preview.locator("xpath=..").boundingBox())!;
+    expect(own.width).toBeLessThanOrEqual(host.width + 1);
+    expect((await canvas.boundingBox())!.width).toBeLessThanOrEqual(own.width);
+    await page.context().close();
+  });
+});
+
+describe("2D fallback when the 3D scene cannot start", () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("catches a renderer that fails after the up-front check passed, and shows the elevation", async () => {
+    const context = await signedInContext(browser, DESIGNER);
+    // The up-front probe gets its WebGL context; every later WebGL request fails, as when a
+    // browser runs out of contexts or the GPU process dies.
+    await context.addInitScript(() => {
+      const original = HTMLCanvasElement.prototype.getContext;
+      let webglCalls = 0;
+      HTMLCanvasElement.prototype.getContext = function (this: HTMLCanvasElement, type: string, ...rest: unknown[]) {
+        if (type === "webgl2" || type === "webgl") {
+          webglCalls += 1;
+          if (webglCalls > 1) return null;
+        }
+        return (original as (...a: unknown[]) => RenderingContext | null).call(this, type, ...rest);
+      } as typeof HTMLCanvasElement.prototype.getContext;
+    });
+    const page = await context.newPage();
+    await page.goto("/projects");
+    await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
+    await page.getByRole("link", { name: "Alternative on four posts" }).click();
+    const fallback = page.getByTestId("design-preview").getByTestId("preview-fallback");
+    await fallback.waitFor({ timeout: 30_000 });
+    expect(await fallback.textContent()).toMatch(/could not start/);
+    // The camera buttons go with the scene; nothing is left that does nothing.
+    expect(await page.getByTestId("design-preview").getByRole("button", { name: "Side" }).count()).toBe(0);
+    expect(await fallback.locator("svg").textContent()).toMatch(/Clearance \d+ in.*Embedment \d+ in/s);
+    await context.close();
+  });
+});
+
+describe("2D fallback without WebGL", () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launch({ webgl: false });
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("shows a side elevation with the same clearance and embedment figures", async () => {
+    const page = await openDemoDesign(browser);
+    const preview = page.getByTestId("design-preview");
+    const fallback = preview.getByTestId("preview-fallback");
+    await fallback.waitFor({ timeout: 30_000 });
+    expect(await preview.locator("canvas").count()).toBe(0);
+    expect(await fallback.textContent()).toMatch(/WebGL/);
+
+    const caption = (await preview.locator("figcaption").textContent()) ?? "";
+    const clearance = caption.match(/Lowest-edge clearance\s*(.+?)\s*·/)?.[1];
+    const embedment = caption.match(/Embedment\s*(.+?)\s*\(post/)?.[1];
+    expect(clearance).toMatch(/^\d+ in/);
+    expect(embedment).toMatch(/^\d+ in/);
+    const svgText = (await fallback.locator("svg").textContent()) ?? "";
+    expect(svgText).toContain(`Clearance ${clearance}`);
+    expect(svgText).toContain(`Embedment ${embedment}`);
+    await shot(page, "preview-fallback-desktop");
+    await elementShot(preview, "preview-element-fallback");
+    await page.context().close();
+  });
+});
