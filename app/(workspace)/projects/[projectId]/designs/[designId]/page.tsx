@@ -73,7 +73,8 @@ export default async function DesignPage({ params, searchParams }: Props) {
 
       <div className="mt-4">
         <DesignEditor
-          key={`${shown.id}-${start.id}`}
+          // Stays mounted across the refresh after a save (a new latest), so typing in progress is kept.
+          key={isOld ? `old-${shown.id}` : start.id !== latest.id ? `from-${start.id}` : "latest"}
           designId={design.id}
           initialInput={start.input}
           initialResult={start.result}

@@ -67,7 +67,8 @@ export function DesignEditor(props: EditorProps) {
   const [saving, setSaving] = useState(false);
   const [saveMessage, setSaveMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [conflict, setConflict] = useState<Conflict | null>(null);
-  const dirty = JSON.stringify(values) !== initialKey || base.id !== props.baseRevisionId;
+  const [savedKey, setSavedKey] = useState(initialKey);
+  const dirty = JSON.stringify(values) !== savedKey;
 
   async function save(input: DesignInput, baseId = base.id) {
     setSaving(true);
@@ -81,6 +82,7 @@ export function DesignEditor(props: EditorProps) {
       const json = await response.json().catch(() => ({}));
       if (response.status === 201) {
         setBase({ id: json.revision.id, number: json.revision.number });
+        setSavedKey(JSON.stringify(form.getValues()));
         setConflict(null);
         setNote("");
         setSaveMessage({ ok: true, text: `Saved as revision ${json.revision.number}.` });
