@@ -80,6 +80,27 @@ describe("submit for review", () => {
   });
 });
 
+describe("superseded (derived)", () => {
+  it("shows an approved revision as superseded once a newer revision of the design is approved", async () => {
+    const { revisionStanding } = await import("@/app/_lib/review/standing");
+    const { getRevisionContext } = await import("@/db/queries/reviews");
+    const { designId, revisionId: first } = await makeDesign();
+    await submitAs(DESIGNER, first);
+    await decideAs(ENGINEER, first, { decision: "approve" });
+    expect((await revisionStanding((await getRevisionContext(first))!)).status).toBe("approved");
+    // A later edit is a new draft revision; the approved one stays approved until the new one is approved.
+    const second = await addRevision(designId, { ...twoPostDesignInput, array: { ...twoPostDesignInput.array, tiltDeg: 25 } });
+    expect(await statusOf(second)).toBe("draft");
+    expect((await revisionStanding((await getRevisionContext(first))!)).status).toBe("approved");
+    await submitAs(DESIGNER, second);
+    await decideAs(ENGINEER, second, { decision: "approve" });
+    const standing = await revisionStanding((await getRevisionContext(first))!);
+    expect(standing.status).toBe("superseded");
+    expect(standing.supersededBy?.id).toBe(second);
+    expect(await statusOf(first)).toBe("approved"); // stored status never changes: the pin holds
+  });
+});
+
 describe("decide a review", () => {
   it("requests changes with comments pinned to inputs; the designer is e-mailed; resubmission is allowed", async () => {
     const { designId, revisionId } = await makeDesign();

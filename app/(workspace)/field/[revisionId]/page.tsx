@@ -109,7 +109,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
             <li key={p.id} className="rounded-md border border-slate-300 p-3">
               <p className="text-lg font-bold">Post {p.id}</p>
               <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-base">
-                <dt className="text-slate-600">Position</dt><dd className="font-semibold">{ftIn(positions.get(p.id) ?? 0)} from {r.field.posts[0]?.id}</dd>
+                <dt className="text-slate-600">Position</dt><dd className="font-semibold">{p.id === r.field.posts[0]?.id ? "Start: measure the others from here" : `${ftIn(positions.get(p.id) ?? 0)} from ${r.field.posts[0]?.id}`}</dd>
                 <dt className="text-slate-600">Hole</dt><dd className="font-semibold">{quarterIn(r.footing.diameterIn)} × {quarterIn(p.embedmentIn)} deep</dd>
                 <dt className="text-slate-600">Above grade</dt><dd className="font-semibold">{ftIn(p.heightAboveGradeIn)}</dd>
                 <dt className="text-slate-600">Below grade</dt><dd className="font-semibold">{ftIn(p.embedmentIn)}</dd>

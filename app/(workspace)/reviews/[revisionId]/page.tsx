@@ -17,6 +17,7 @@ import type { DesignInput } from "@/engine";
 import { listProjectFiles } from "@/db/queries/project-files";
 import { organisationEngineers } from "@/db/queries/review-people";
 import { lastReviewed, lastReviewedBy } from "@/db/queries/review-queue";
+import { reviewsOfRevision } from "@/db/queries/reviews";
 import { DecisionPanel } from "./_components/decision-form";
 import { ReviewHistory } from "./_components/review-history";
 import { SubmitPanel, type EngineerChoice } from "./_components/submit-form";
@@ -46,6 +47,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
       return { userId: e.userId, name: e.name, eligible: ok.ok, note: ok.ok ? `${ok.licence.state} licence ${ok.licence.licenceNumber}, valid to ${ok.licence.expiresOn}` : ok.message };
     }),
   );
+  const previousComments = previous ? (await reviewsOfRevision(previous.id)).flatMap((rv) => rv.comments) : [];
   const changes = previous ? inputChanges(previous.input as DesignInput, ctx.input as DesignInput) : [];
   const pinned = new Map<string, { body: string; when: Date }[]>();
   for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
@@ -74,8 +76,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
       <HoldBanner holds={standing.holds} canClear={isEngineer} />
       <Caution />
 
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <div className="order-2 space-y-6 lg:order-1">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="order-2 min-w-0 space-y-6 lg:order-1">
           <section aria-labelledby="diff-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
             {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
@@ -83,6 +85,12 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
                 {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span> <span className="text-slate-500">({c.path})</span>: {String(c.from)} → <strong>{String(c.to)}</strong></li>)}
               </ul>
             )}
+            {previousComments.length ? (
+              <div className="mt-3 text-sm">
+                <p className="font-medium">Comments made on revision {previous!.number}:</p>
+                <ul className="mt-1 space-y-1">{previousComments.map((c) => <li key={c.id} className="rounded bg-slate-50 p-2">{c.fieldPath ? <span className="mr-1 rounded bg-sky-100 px-1 text-xs text-sky-900">{c.fieldPath}</span> : null}{c.body}</li>)}</ul>
+              </div>
+            ) : null}
           </section>
 
           <PlainTable id="criteria-h" table={criteriaTable(ctx)} numericFrom={99} />
@@ -144,7 +152,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           <ReviewPreview input={ctx.input as DesignInput} result={r} />
         </div>
 
-        <aside className="order-1 space-y-4 lg:order-2">
+        <aside className="order-1 min-w-0 space-y-4 lg:order-2">
           {isEngineer ? (
             <DecisionPanel open={canDecide} revisionId={ctx.id} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}

@@ -40,8 +40,9 @@ function SubmitForm({ revisionId, engineers, state, action }: { revisionId: stri
         <select id="engineerId" name="engineerId" defaultValue={state.values?.engineerId ?? firstEligible} aria-invalid={error ? true : undefined} aria-describedby={error ? "engineerId-error" : undefined}
           className="block w-full rounded-md border border-slate-300 bg-white px-3 py-2 text-sm aria-[invalid]:border-red-600">
           <option value="">Choose an engineer…</option>
-          {engineers.map((e) => <option key={e.userId} value={e.userId}>{e.name} — {e.note}</option>)}
+          {engineers.map((e) => <option key={e.userId} value={e.userId}>{e.name}{e.eligible ? "" : " (cannot decide this review)"}</option>)}
         </select>
+        <ul className="text-xs text-slate-600">{engineers.map((e) => <li key={e.userId}>{e.name}: {e.note}</li>)}</ul>
         {error ? <p id="engineerId-error" className="text-sm text-red-700">{error.join(" ")}</p> : null}
         {engineers.length === 0 ? <p className="text-sm text-amber-800">Your organisation has no member with the reviewing-engineer role yet; an admin can invite one.</p> : null}
       </div>
