@@ -43,7 +43,7 @@ export function sideElevation(g: PreviewGeometry): Elevation {
   const xs = all.map((p) => p[0]), ys = all.map((p) => p[1]);
   const minX = Math.min(...xs), maxX = Math.max(...xs), minY = Math.min(...ys), maxY = Math.max(...ys);
   const margin = Math.max(maxX - minX, maxY - minY) * 0.12;
-  const textSizeFt = Math.max(maxX - minX, maxY - minY) * 0.045;
+  const textSizeFt = Math.max(maxX - minX, maxY - minY) * 0.05;
   // The dimension labels sit left of their lines (in front of the array): leave room for them.
   const labelRoomFt = textSizeFt * 11;
 

@@ -109,7 +109,7 @@ describe("3D preview in the design editor (software WebGL)", () => {
     await page.context().close();
   });
 
-  it("fits a phone screen", async () => {
+  it("stays within its column on a phone and draws there too", async () => {
     const page = await openDemoDesign(browser, PHONE);
     const preview = page.getByTestId("design-preview");
     const canvas = preview.locator("canvas");
