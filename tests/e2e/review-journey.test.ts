@@ -42,7 +42,8 @@ async function as(email: string, viewport = DESKTOP): Promise<Page> {
 async function both(page: Page, url: string, name: string) {
   for (const [label, viewport] of [["desktop", DESKTOP], ["phone", PHONE]] as const) {
     await page.setViewportSize(viewport);
-    await page.goto(url, { waitUntil: "networkidle" });
+    await page.goto(url);
+    await page.getByRole("heading", { level: 1 }).waitFor();
     await shot(page, `${name}-${label}`);
   }
   await page.setViewportSize(DESKTOP);
