@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { Brand } from "@/components/ui/brand";
-import { Caution, FIELD_CAUTIONS } from "@/components/ui/caution";
+import { Caution } from "@/components/ui/caution";
+import { SITE_CAUTIONS } from "@/engine/notices";
 
 const ROLES = [
   {
@@ -59,7 +60,7 @@ export default function LandingPage() {
         <section className="mt-8 max-w-3xl" aria-labelledby="site-safety">
           <h2 id="site-safety" className="font-semibold">On site, always</h2>
           <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-slate-600">
-            {FIELD_CAUTIONS.map((c) => (
+            {SITE_CAUTIONS.map((c) => (
               <li key={c}>{c}</li>
             ))}
           </ul>

@@ -5,13 +5,14 @@
 import type { DesignInput } from "./schema";
 
 export const DEFER_TO_CODE =
-  "Preliminary sizing only. The local building code, the authority having jurisdiction and a licensed engineer govern; have this design reviewed and stamped before it is built.";
+  "Preliminary sizing only. The local building code, the authority having jurisdiction and a licensed professional engineer govern; do not build from these numbers until a licensed engineer has reviewed and approved them.";
 
 export const SITE_CAUTIONS = [
-  "Call before you dig: have buried utilities located and marked before any hole is drilled.",
-  "Open holes are a fall and collapse hazard: cover or barricade them, keep out of holes deeper than 4 ft, and keep spoil back from the edge.",
-  "Lift posts, beams and concrete bags with proper technique or equipment; mind the auger's torque and pinch points.",
-  "Do not handle modules in high wind: a module is a sail and can injure the crew or be torn loose.",
+  "Call before you dig: call your local utility-locate service (811 in the US) and wait for buried utilities to be marked before any hole is drilled.",
+  "Open holes are a fall and collapse hazard: cover or barricade them, never stand in an unshored hole deeper than your waist, and keep spoil back from the edge.",
+  "Wet concrete burns skin and eyes: wear gloves and eye protection. Bags, posts and beams are heavy: lift with two people or a machine, and mind the auger's torque and pinch points.",
+  "Do not lift or fasten modules in high or gusty wind: a module is a sail and can injure the crew or be torn loose.",
+  "Treat module leads as live in daylight; keep connectors capped until the electrician takes over.",
   "Check the concrete mix (≥ 2,500 psi premix is typical; the code minimum for post backfill is 2,000 psi) and let it cure before loading the posts.",
 ];
 

@@ -1,18 +1,10 @@
+import { DEFER_TO_CODE } from "@/engine/notices";
+
 /**
- * The defer-to-code statement. Shown wherever results, print-outs or field specs appear: Pierwise
- * gives preliminary sizing, never the final word.
+ * The defer-to-code statement, shown wherever results, print-outs or field specs appear: Pierwise
+ * gives preliminary sizing, never the final word. The wording lives in the engine (one source for
+ * pages, the PDF report and the engine's own results); site cautions are `SITE_CAUTIONS` there.
  */
-export const DEFER_TO_CODE =
-  "Preliminary sizing only. The local building code, the authority having jurisdiction and a licensed professional engineer govern; do not build from these numbers until a licensed engineer has reviewed and approved them.";
-
-export const FIELD_CAUTIONS = [
-  "Call your local utility-locate service (811 in the US) and wait for marks before you dig.",
-  "Cover or fence open holes; never stand in an unshored hole deeper than your waist.",
-  "Wet concrete burns skin and eyes — wear gloves and eye protection. Bags and posts are heavy: lift with two people or a machine.",
-  "Do not lift or fasten modules in high or gusty wind.",
-  "Treat module leads as live in daylight; keep connectors capped until the electrician takes over.",
-] as const;
-
 export function Caution({ compact = false, className = "" }: { compact?: boolean; className?: string }) {
   return (
     <aside

@@ -10,7 +10,8 @@ import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { HoldBanner } from "@/components/review/hold-banner";
 import { StatusBadge } from "@/components/review/status-badge";
-import { Caution, FIELD_CAUTIONS } from "@/components/ui/caution";
+import { Caution } from "@/components/ui/caution";
+import { SITE_CAUTIONS } from "@/engine/notices";
 import { asBuiltEntries } from "@/db/queries/as-built";
 import { AsBuiltForm } from "./_components/as-built-form";
 import { AsBuiltLog } from "./_components/as-built-log";
@@ -123,7 +124,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
 
       <section aria-labelledby="concrete-h" className="rounded-lg border border-slate-200 bg-white p-4">
         <h2 id="concrete-h" className="text-lg font-semibold">Concrete to order</h2>
-        <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (includes {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste; {fmt(r.concrete.job.withWasteYd3, 2)} yd³ needed)</p>
+        <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (the holes take {fmt(r.concrete.job.totalYd3, 2)} yd³; with {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste {fmt(r.concrete.job.withWasteYd3, 2)} yd³, ordered up to the next ¼ yd³)</p>
         <p className="text-base">or <strong>{r.concrete.job.bags80Lb} bags of 80 lb</strong> premix ({r.concrete.job.bags60Lb} × 60 lb)</p>
         <p className="text-sm text-slate-600">About {fmt(r.concrete.perHole.volumeFt3, 1)} ft³ and {r.concrete.perHole.bags80Lb} × 80 lb bags per hole.</p>
       </section>
@@ -135,7 +136,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
 
       <section aria-labelledby="safety-h" className="rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
         <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{FIELD_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
       </section>
       <Caution />
 
