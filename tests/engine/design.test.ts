@@ -23,7 +23,8 @@ describe("whole default design", () => {
   it("carries the defer-to-code caution, site cautions and the sections used", () => {
     expect(r.caution).toBe(DEFER_TO_CODE);
     expect(r.caution).toMatch(/authority having jurisdiction.*licensed engineer/);
-    expect(r.cautions.join(" ")).toMatch(/utilities located/);
+    expect(r.cautions.join(" ")).toMatch(/Call before you dig.*utility-locate/);
+    expect(r.cautions.join(" ")).toMatch(/leads as live/);
     expect(r.cautions.join(" ")).toMatch(/high wind/);
     expect(r.references.asce).toBe("ASCE 7-16");
     expect(r.references.sections.join("\n")).toMatch(/Fig\. 27\.3-4/);
