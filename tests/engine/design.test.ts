@@ -25,7 +25,7 @@ describe("whole default design", () => {
     expect(r.caution).toMatch(/authority having jurisdiction.*licensed engineer/);
     expect(r.cautions.join(" ")).toMatch(/Call before you dig.*utility-locate/);
     expect(r.cautions.join(" ")).toMatch(/leads as live/);
-    expect(r.cautions.join(" ")).toMatch(/high wind/);
+    expect(r.cautions.join(" ")).toMatch(/modules in high or gusty wind/);
     expect(r.references.asce).toBe("ASCE 7-16");
     expect(r.references.sections.join("\n")).toMatch(/Fig\. 27\.3-4/);
     expect(r.references.sections.join("\n")).toMatch(/§1807\.3\.2\.1/);
