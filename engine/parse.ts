@@ -4,15 +4,10 @@
  * @throws DesignInputError listing every field at fault, e.g. { path: "site.windSpeedMph", message: "Wind speed must be between 85 and 200 mph" }
  */
 import { DesignInputError, type FieldIssue } from "./errors";
-import { fastParseDesignInput } from "./fast-parse";
 import { designInputSchema, type DesignInput } from "./schema";
 import { zodIssuesToFieldErrors } from "./schema-helpers";
 
 export function safeParseDesignInput(raw: unknown): { ok: true; input: DesignInput } | { ok: false; issues: FieldIssue[] } {
-  // Valid input takes the fast path (same output as zod, see fast-parse.ts); anything else gets
-  // zod's full parse and its field messages.
-  const fast = fastParseDesignInput(raw);
-  if (fast !== undefined) return { ok: true, input: fast };
   const r = designInputSchema.safeParse(raw);
   return r.success ? { ok: true, input: r.data } : { ok: false, issues: zodIssuesToFieldErrors(r.error) };
 }
