@@ -81,6 +81,13 @@ export const arraySchema = z.object({
   rackDepthIn: num("Rack depth (panel underside to post top)", 0, 24, "in").default(6),
   flow: choice("Wind flow beneath the array", ["clear", "obstructed"]).default("clear"),
   slipperySurface: flag("Slippery surface").default(true),
+  /**
+   * The compass bearing the modules face (the low edge's outward normal), clockwise from true
+   * north: 180 faces south. Used only to orient the drawing (`geometryPreview.north`) and the field
+   * spec; it changes no calculation, because the free-roof wind method checks both along-slope
+   * wind directions (γ = 0° and 180°) whichever way the array faces.
+   */
+  azimuthDeg: num("Array azimuth", 0, 360, "degrees").default(180),
 });
 
 const diameterList = (label: string) =>

@@ -100,7 +100,7 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
     },
     warnings: collectWarnings(input, ctx.states, ev, extra),
     geometryPreview: previewGeometry(drawState, {
-      gapIn: array.gapIn, rackDepthIn: array.rackDepthIn, postOutsideDiameterIn: pipe.outsideDiameterIn,
+      azimuthDeg: array.azimuthDeg, gapIn: array.gapIn, rackDepthIn: array.rackDepthIn, postOutsideDiameterIn: pipe.outsideDiameterIn,
       diameterIn, depthIn: ev.depthIn, governingPostId, windCase,
     }),
   };

@@ -48,6 +48,7 @@ export const FIELD_META: Record<string, FieldMeta> = {
   "array.rackDepthIn": { label: "Rack depth", unit: "in", help: "From the panel underside down to the top of the post." },
   "array.flow": { label: "Wind under the array", help: "Clear unless stored material or a wall blocks more than half the space under the panels." },
   "array.slipperySurface": { label: "Snow slides off", help: "Glass modules without snow guards let snow slide, which lowers the design snow." },
+  "array.azimuthDeg": { label: "Array azimuth", unit: "deg", help: "Direction the module faces, clockwise from true north: 180 = south. Used for the drawing and the field spec, not the wind calculation." },
   "posts.count": { label: "Number of posts", help: "Posts in the single row under the beam." },
   "posts.spacingFt": { label: "Post spacing", unit: "ft", help: "Centre to centre. Leave blank to spread the posts evenly under the array." },
   "posts.pipeSize": { label: "Pipe size", help: "Nominal size of standard-weight (Schedule 40) steel pipe used for the posts." },

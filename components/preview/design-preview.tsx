@@ -7,11 +7,10 @@ import { Caution } from "@/components/ui/caution";
 import type { ViewName } from "./camera-framing";
 import { ElevationFallback } from "./elevation-fallback";
 import { PreviewErrorBoundary } from "./preview-error-boundary";
-import { previewFigures, type UnitSystem } from "./preview-labels";
+import { northCaption, previewFigures, type UnitSystem } from "./preview-labels";
 import { Scene } from "./scene";
 import { PreviewToolbar } from "./preview-toolbar";
 import { webglAvailable } from "./webgl-support";
-import { northMarker } from "./scene-annotations";
 
 export interface DesignPreviewProps {
   input: DesignInput;
@@ -28,7 +27,9 @@ export interface DesignPreviewProps {
 function geometryAtTilt(input: DesignInput, result: DesignResult, tiltDeg: number | null) {
   if (tiltDeg === null || tiltDeg === result.geometryPreview.panelPlane.tiltDeg) return { geometry: result.geometryPreview, error: null };
   try {
-    return { geometry: sizeParsedDesign({ ...input, array: { ...input.array, tiltDeg } }).geometryPreview, error: null };
+    // Revisions saved before the azimuth input have none; they were drawn facing south (the default).
+    const azimuthDeg = input.array.azimuthDeg ?? 180;
+    return { geometry: sizeParsedDesign({ ...input, array: { ...input.array, azimuthDeg, tiltDeg } }).geometryPreview, error: null };
   } catch (error) {
     return { geometry: result.geometryPreview, error: `The ${tiltDeg}° setting could not be drawn: ${error instanceof Error ? error.message : String(error)}` };
   }
@@ -82,7 +83,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
           <span className="font-medium">Embedment</span> {figures.embedment} (post {figures.embedmentPostId})
         </p>
         {figures.wind ? <p><span className="font-medium">Governing wind</span> {figures.wind}</p> : null}
-        <p className="text-xs text-slate-500">North marker: {northMarker(geometry).assumption} (the design has no azimuth). Rails, beam and module thickness are drawn, not to scale; posts, footings, clearance and embedment are to scale.</p>
+        <p className="text-xs text-slate-500">{northCaption(input.array.azimuthDeg)} Rails, beam and module thickness are drawn, not to scale; posts, footings, clearance and embedment are to scale.</p>
         {showCaution ? <Caution compact /> : null}
       </figcaption>
     </figure>

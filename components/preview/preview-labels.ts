@@ -64,3 +64,10 @@ export function windSceneLabel(wind: NonNullable<PreviewGeometry["wind"]>): stri
 export function latinOnly(text: string): string {
   return text.replace(/γ/g, "gamma ").replace(/[^\u0000-\u00ff]/g, "");
 }
+
+/** Where the north marker comes from; revisions saved before the azimuth input were drawn facing south. */
+export function northCaption(azimuthDeg: number | undefined): string {
+  return typeof azimuthDeg === "number"
+    ? `North marker from the array azimuth (${azimuthDeg}°).`
+    : "North marker drawn facing south: this revision was saved before the array azimuth input.";
+}

@@ -55,15 +55,19 @@ export function windArrow(g: PreviewGeometry, lengthFt: number): WindArrow | nul
   return { tail: add(head, scale(direction, -lengthFt)), head, direction, lengthFt };
 }
 
+/** North for a result stored before the array azimuth input: such arrays were drawn facing south. */
+const NORTH_IF_FACING_SOUTH = { xFt: 0, yFt: 1, zFt: 0 };
+
 /**
- * The north marker. The engine has no azimuth input, so the array is assumed to face south: its
- * modules face the engine's −y, so north is +y (three's −z). The marker sits at the ground's
- * back-right corner, away from the dimension labels (the engine's clearance and embedment points
- * are at the front or on the post row).
+ * The north marker, along the engine's `north` (from the array azimuth). Results saved before the
+ * azimuth input have no `north`; they are drawn facing south as they were then (`fromAzimuth`
+ * false). The marker sits at the ground's back-right corner, away from the dimension labels (the
+ * engine's clearance and embedment points are at the front or on the post row).
  */
-export function northMarker(g: PreviewGeometry): { at: Vec3; north: Vec3; assumption: string } {
+export function northMarker(g: PreviewGeometry): { at: Vec3; north: Vec3; fromAzimuth: boolean } {
   const corner = g.ground.corners[2];
-  return { at: toScene(corner), north: toScene({ xFt: 0, yFt: 1, zFt: 0 }), assumption: "array assumed facing south" };
+  const north = (g as Partial<PreviewGeometry>).north;
+  return { at: toScene(corner), north: toScene(north ?? NORTH_IF_FACING_SOUTH), fromAzimuth: north !== undefined };
 }
 
 /**

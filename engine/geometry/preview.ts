@@ -4,15 +4,19 @@
  *
  * Units ft. Axes: x along the array (right when facing the modules), y horizontal toward the back
  * (high edge), z up; origin on grade under the array centre. Grade z = along·x + across·y.
+ * `north` turns these axes to the compass from the array azimuth (see north.ts).
  */
 import type { ArrayLoadState } from "../loads/array-loads";
 import { gradeAt } from "./grade";
+import { northInPreviewAxes } from "./north";
 
 export interface Point3Ft { xFt: number; yFt: number; zFt: number }
 
 export interface PreviewGeometry {
   units: "ft";
   axes: string;
+  /** True north as a horizontal unit vector in these axes, from the array azimuth (drawing only). */
+  north: Point3Ft;
   ground: { slopeAlongPct: number; slopeAcrossPct: number; corners: Point3Ft[] };
   panelPlane: { tiltDeg: number; normal: Point3Ft; upSlope: Point3Ft; lowEdgeZFt: number; highEdgeZFt: number; widthFt: number; slopeLengthFt: number };
   posts: { id: string; xFt: number; yFt: number; gradeZFt: number; topZFt: number; bottomZFt: number; outsideDiameterFt: number }[];
@@ -38,7 +42,7 @@ function onPlane(pl: Plane, u: number, s: number, lift = 0): Point3Ft {
 
 export function previewGeometry(
   st: ArrayLoadState,
-  a: { gapIn: number; rackDepthIn: number; postOutsideDiameterIn: number; diameterIn: number; depthIn: number; governingPostId: string | null; windCase: number },
+  a: { azimuthDeg: number; gapIn: number; rackDepthIn: number; postOutsideDiameterIn: number; diameterIn: number; depthIn: number; governingPostId: string | null; windCase: number },
 ): PreviewGeometry {
   const { dims, heights } = st;
   const t = (st.tiltDeg * Math.PI) / 180;
@@ -80,6 +84,7 @@ export function previewGeometry(
   return {
     units: "ft",
     axes: "x along the array (right when facing the modules), y horizontal toward the back (high edge), z up; origin on grade under the array centre",
+    north: northInPreviewAxes(a.azimuthDeg),
     ground: { slopeAlongPct: slope.along, slopeAcrossPct: slope.across, corners },
     panelPlane: { tiltDeg: st.tiltDeg, normal: P(0, -sin, cos), upSlope: P(0, cos, sin), lowEdgeZFt: heights.lowestEdgeFt, highEdgeZFt: heights.highestEdgeFt, widthFt: W, slopeLengthFt: L },
     posts, footings,

@@ -9,7 +9,7 @@ import { defaultDesignInput, designInputSchema, sizeParsedDesign } from "@/engin
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { cameraForView, sceneBounds, type ViewName } from "@/components/preview/camera-framing";
 import { sideElevation } from "@/components/preview/elevation-mapping";
-import { formatForceLb, formatLengthIn, latinOnly, previewFigures } from "@/components/preview/preview-labels";
+import { formatForceLb, formatLengthIn, latinOnly, northCaption, previewFigures } from "@/components/preview/preview-labels";
 import { arrowParts, clearanceDimension, embedmentDimension, northMarker, windArrow } from "@/components/preview/scene-annotations";
 import { toScene } from "@/components/preview/scene-mapping";
 
@@ -60,11 +60,44 @@ describe.each(CASES)("annotations (%s)", (_name, g) => {
     expect(shaft.lengthFt + cone.lengthFt).toBeCloseTo(5, 9);
   });
 
-  it("the north marker points to the engine's +y (array assumed facing south, its modules facing −y)", () => {
+  it("the north marker points along the engine's north (from the array azimuth), level", () => {
     const n = northMarker(g);
-    expect(g.panelPlane.normal.yFt).toBeLessThanOrEqual(0);
+    expect(n.fromAzimuth).toBe(true);
+    expect(n.north).toEqual(toScene(g.north));
+    expect(n.north[1]).toBe(0);
+    expect(n.at).toEqual(toScene(g.ground.corners[2]));
+  });
+});
+
+describe("north marker and caption from the array azimuth", () => {
+  const facing = (azimuthDeg: number) => sizeParsedDesign(designInputSchema.parse({
+    ...defaultDesignInput, array: { ...defaultDesignInput.array, azimuthDeg },
+  })).geometryPreview;
+  // three.js is y-up with the engine's y going to −z (scene-mapping.ts). Compass convention
+  // [common practice]: facing south (180°) north is behind the array, engine +y = three −z;
+  // facing east (90°) someone facing the modules looks west and has north on their right hand,
+  // engine +x = three +x.
+  it("facing south, north is behind the array (three −z)", () => {
+    const [x, y, z] = northMarker(facing(180)).north;
+    expect([x, y, z]).toEqual([0, 0, -1]);
+  });
+  it("facing east, north is to the right of someone facing the modules (three +x)", () => {
+    const [x, y, z] = northMarker(facing(90)).north;
+    expect(x).toBeCloseTo(1, 12);
+    expect(y).toBe(0);
+    expect(z).toBeCloseTo(0, 12);
+  });
+  it("a result stored before the azimuth input (no north) is drawn facing south, and says so", () => {
+    const older: Partial<PreviewGeometry> = { ...demo };
+    delete older.north;
+    const n = northMarker(older as PreviewGeometry);
+    expect(n.fromAzimuth).toBe(false);
     expect(n.north).toEqual(toScene({ xFt: 0, yFt: 1, zFt: 0 }));
-    expect(n.assumption).toMatch(/facing south/);
+    expect(northCaption(undefined)).toMatch(/facing south.*before the array azimuth input/);
+  });
+  it("the caption names the azimuth and no longer assumes south", () => {
+    expect(northCaption(135)).toBe("North marker from the array azimuth (135°).");
+    expect(northCaption(180)).not.toMatch(/assumed/);
   });
 });
 

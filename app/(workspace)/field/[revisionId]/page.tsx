@@ -4,7 +4,7 @@ import QRCode from "qrcode";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
-import { ftIn, quarterIn } from "@/app/_lib/review/field-format";
+import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
 import { fmt } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
@@ -61,6 +61,8 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
   const positions = new Map(r.geometry.posts.map((p) => [p.id, (p.xFt - x0) * 12]));
   const a = standing.approval;
   const tilts = ctx.result.input.array.tiltSettingsDeg;
+  // Revisions saved before the azimuth input carry none: say nothing rather than guess.
+  const azimuthDeg = ctx.result.input.array.azimuthDeg as number | undefined;
   const big = "text-2xl font-bold tabular-nums";
 
   return (
@@ -97,7 +99,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <div><p className="text-sm text-slate-600">Diameter</p><p className={big}>{quarterIn(r.footing.diameterIn)}</p></div>
           <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p><p className="text-sm">{ftIn(r.footing.depthIn)}</p></div>
           <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{r.footing.post.size} in std. pipe, {r.field.posts.length} posts</p></div>
-          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}</div>
+          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
           <div className="col-span-2"><p className="text-sm text-slate-600">Lowest panel edge above grade (hold at least)</p><p className={big}>{quarterIn(r.geometry.minClearanceIn)}</p></div>
         </div>
       </section>

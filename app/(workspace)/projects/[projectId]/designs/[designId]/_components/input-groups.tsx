@@ -84,6 +84,7 @@ export function ArrayGroup({ units }: { units: UnitSystem }) {
           <ListField name="array.tiltSettingsDeg" units={units} optional />
           <SelectField name="array.flow" options={[["clear", "Clear"], ["obstructed", "Obstructed (blocked underneath)"]]} />
           <CheckField name="array.slipperySurface" />
+          <NumberField name="array.azimuthDeg" units={units} />
         </>
       }
     >
