@@ -1,6 +1,6 @@
 "use client";
 
-/** Something failed while loading; nothing was changed. */
+/** Any workspace page that fails to load lands here; nothing was changed, so trying again is safe. */
 export default function ErrorPage({ reset }: { error: Error; reset: () => void }) {
   return (
     <div role="alert" className="rounded-lg border border-red-300 bg-red-50 p-4">

@@ -1,4 +1,4 @@
-/** The page's shell while its data loads: a heading bar and two blocks, as the page lays out. */
+/** The workspace shell while a page loads (pages with their own layout add a loading.tsx beside them). */
 export default function Loading() {
   return (
     <div role="status" aria-label="Loading" className="space-y-4">
