@@ -107,7 +107,8 @@ describe("design editor", () => {
     it(`shows the demo project, its designs and the editor with the caution in view (${label})`, async () => {
       const context = await signedInContext(browser, "designer@demo.pierwise.test", viewport);
       const page = await context.newPage();
-      await page.goto("/projects");
+      // Earlier suites add many projects to the demo organisation: find the demo one by name.
+      await page.goto("/projects?q=Larkspur");
       await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
       await page.getByRole("heading", { name: /Design criteria: Juniper Flats County/ }).waitFor();
       expect(await page.getByRole("table", { name: "Designs" }).textContent()).toMatch(/12-module array on two posts.*Draft/s);
@@ -129,7 +130,8 @@ describe("design editor", () => {
   it("lets an installer read a design but not edit it", async () => {
     const context = await signedInContext(browser, "installer@demo.pierwise.test");
     const page = await context.newPage();
-    await page.goto("/projects");
+    // Earlier suites add many projects to the demo organisation: find the demo one by name.
+    await page.goto("/projects?q=Larkspur");
     await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
     await page.getByRole("link", { name: "12-module array on two posts" }).click();
     await page.getByTestId("footing-spec").waitFor();

@@ -14,7 +14,8 @@ const BACKGROUND = [0xee, 0xf2, 0xf6];
 async function openDemoDesign(browser: Browser, viewport = DESKTOP): Promise<Page> {
   const context = await signedInContext(browser, DESIGNER, viewport);
   const page = await context.newPage();
-  await page.goto("/projects");
+  // Earlier suites add many projects to the demo organisation: find the demo one by name.
+  await page.goto("/projects?q=Larkspur");
   await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
   await page.getByRole("link", { name: "Alternative on four posts" }).click();
   await page.getByTestId("design-preview").waitFor({ timeout: 30_000 });
@@ -152,7 +153,8 @@ describe("2D fallback when the 3D scene cannot start", () => {
       } as typeof HTMLCanvasElement.prototype.getContext;
     });
     const page = await context.newPage();
-    await page.goto("/projects");
+    // Earlier suites add many projects to the demo organisation: find the demo one by name.
+    await page.goto("/projects?q=Larkspur");
     await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
     await page.getByRole("link", { name: "Alternative on four posts" }).click();
     const fallback = page.getByTestId("design-preview").getByTestId("preview-fallback");
