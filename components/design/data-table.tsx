@@ -3,21 +3,15 @@
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type PaginationState, type SortingState, type Updater } from "@tanstack/react-table";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useState, useTransition } from "react";
+import type { ListPage } from "@/db/queries/list-page";
 
 /**
  * A table whose sorting, filtering and paging happen on the server: the state lives in the URL
  * (`?q=&sort=&dir=&page=&pageSize=`, optionally prefixed so two tables can share a page) and each
  * change navigates, so the server query returns only the rows shown.
  */
-export interface ServerPage<T> {
-  rows: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-  sort: string;
-  dir: "asc" | "desc";
-  q: string;
-}
+/** One server-side page of rows, exactly as the list queries return it. */
+export type ServerPage<T> = ListPage<T>;
 
 export function DataTable<T>({ page, columns, caption, prefix = "", filterLabel = "Filter", emptyText = "Nothing here yet." }: {
   page: ServerPage<T>;

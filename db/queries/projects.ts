@@ -16,15 +16,8 @@ export interface Project {
   updatedAt: Date;
 }
 
-export interface ProjectFields {
-  name: string;
-  address: string;
-  state: string;
-  latitude: number | null;
-  longitude: number | null;
-  notes: string;
-  criteriaCardId: string | null;
-}
+/** What a designer can set on a project. */
+export type ProjectFields = Omit<Project, "id" | "organisationId" | "createdAt" | "updatedAt">;
 
 export interface ProjectRow {
   id: string;

@@ -6,22 +6,12 @@
  * @example requiredUpliftDepthFt({ upliftLb: 2000, deadFactor: 0.6, diameterFt: 2, concretePcf: 145,
  *   postLbPerFt: 7.58, postAboveGradeFt: 4, deadLb: 500 }) // ≈ 5.55
  */
-import { WATER_PCF } from "./uplift";
+import { WATER_PCF, type UpliftArgs } from "./uplift";
 
 /** Depths are not sought beyond 60 ft: past that the answer is "change the design". */
 export const MAX_DEPTH_FT = 60;
 
-export function requiredUpliftDepthFt(a: {
-  upliftLb: number;
-  deadFactor: number;
-  diameterFt: number;
-  concretePcf: number;
-  postLbPerFt: number;
-  postAboveGradeFt: number;
-  deadLb: number;
-  waterTableDepthFt?: number;
-  sideFrictionPsf?: number;
-}): number {
+export function requiredUpliftDepthFt(a: UpliftArgs & { upliftLb: number; deadFactor: number }): number {
   const area = (Math.PI * a.diameterFt * a.diameterFt) / 4;
   const friction = (a.sideFrictionPsf ?? 0) * Math.PI * a.diameterFt;
   const c0 = a.deadFactor * (a.postLbPerFt * a.postAboveGradeFt + a.deadLb);
