@@ -1,4 +1,5 @@
 "use client";
+import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 import type { DesignInput } from "@/engine/schema";
 import type { DesignResult } from "@/engine/types";
@@ -8,7 +9,6 @@ import type { ViewName } from "./camera-framing";
 import { ElevationFallback } from "./elevation-fallback";
 import { PreviewErrorBoundary } from "./preview-error-boundary";
 import { northCaption, previewFigures, type UnitSystem } from "./preview-labels";
-import { Scene } from "./scene";
 import { PreviewToolbar } from "./preview-toolbar";
 import { webglAvailable } from "./webgl-support";
 
@@ -36,6 +36,17 @@ function geometryAtTilt(input: DesignInput, result: DesignResult, tiltDeg: numbe
 }
 
 const SCENE_FAILED = "The 3D preview could not start in this browser.";
+
+// three.js and the scene load in a chunk of their own, only once WebGL is known to be there, so a
+// browser that gets the 2D elevation never downloads them.
+const Scene = dynamic(() => import("./scene").then((m) => m.Scene), {
+  ssr: false,
+  loading: () => (
+    <div role="status" className="flex h-full items-center justify-center bg-slate-50 text-sm text-slate-500">
+      Loading the 3D scene…
+    </div>
+  ),
+});
 
 /** The 3D preview of the array, grade and footings, with a 2D elevation where WebGL is missing. */
 export default function DesignPreview({ input, result, unitSystem, readOnly = false, height = 440, showCaution = true }: DesignPreviewProps) {
