@@ -45,7 +45,9 @@ export function lateralRatio(a: LateralArgs, depthFt: number): number {
 export function requiredLateralDepthFt(a: LateralArgs): { depthFt: number; converged: boolean } {
   const P = Math.abs(a.shearLb);
   const M = Math.abs(a.momentLbFt);
-  if (P === 0 && M === 0) return { depthFt: 0, converged: true };
+  // Loads far below a pound need no embedment; below this the cube of the depth underflows and
+  // Newton's step would divide 0 by 0.
+  if (P < 1e-9 && M < 1e-9) return { depthFt: 0, converged: true };
   const S = a.sPsfPerFt, b = a.diameterFt, cap = S_DEPTH_CAP_FT;
   let d: number;
   if (a.constrained) {

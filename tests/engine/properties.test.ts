@@ -1,6 +1,6 @@
 // Rules that must always hold, checked over many random designs (fast-check).
 import { fc, test as fcTest } from "@fast-check/vitest";
-import { describe, expect } from "vitest";
+import { describe, expect, it } from "vitest";
 import { defaultDesignInput, designInputSchema, parseDesignInput, requiredLateralDepthFt, sizeParsedDesign, type DesignInput } from "../../engine/index";
 import { arrayLoads } from "../../engine/loads/array-loads";
 
@@ -66,4 +66,14 @@ describe("properties", () => {
       r.geometry.posts.forEach((p) => expect(p.gradeFt + p.heightAboveGradeFt).toBeCloseTo(r.geometry.postTopFt, 9));
     },
   );
+});
+
+// A case fast-check found: a vanishing moment with no shear once gave NaN (0/0 in Newton's step).
+describe("lateral depth at vanishing load", () => {
+  it("is zero, not NaN, for loads far below a pound", () => {
+    for (const constrained of [false, true]) {
+      expect(requiredLateralDepthFt({ shearLb: 0, momentLbFt: 5e-324, diameterFt: 0.5, sPsfPerFt: 100, constrained }).depthFt).toBe(0);
+      expect(requiredLateralDepthFt({ shearLb: 1e-12, momentLbFt: 0, diameterFt: 2, sPsfPerFt: 150, constrained }).depthFt).toBe(0);
+    }
+  });
 });
