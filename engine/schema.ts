@@ -60,7 +60,7 @@ export const siteSchema = z.object({
   slopeAlongPct: num("Ground slope along the array", -50, 50, "%").default(0),
   slopeAcrossPct: num("Ground slope across the array", -50, 50, "%").default(0),
   waterTableDepthFt: num("Water table depth", 0, 200, "ft").optional(),
-});
+}, { error: "Site must be given: wind, exposure, snow, soil and frost for the site" });
 
 export const arraySchema = z.object({
   moduleLengthIn: num("Module length", 30, 110, "in"),
@@ -88,7 +88,7 @@ export const arraySchema = z.object({
    * wind directions (γ = 0° and 180°) whichever way the array faces.
    */
   azimuthDeg: num("Array azimuth", 0, 360, "degrees").default(180),
-});
+}, { error: "Array must be given: modules, rows and columns, tilt and clearance" });
 
 const diameterList = (label: string) =>
   z.array(num(`Each ${label} diameter`, 8, 60, "in"), { error: `${label} diameters must be a list of inches` })
@@ -114,10 +114,10 @@ export const postsSchema = z.object({
   subtractPostDisplacement: flag("Subtract post displacement").default(false),
   depthIncrementIn: num("Depth increment", 1, 12, "in").default(6),
   sideFrictionPsf: num("Side friction", 0, 2000, "psf").optional(),
-});
+}, { error: "Posts must be given: number of posts, pipe size and hole" });
 
 export const designInputSchema = z
-  .object({ site: siteSchema, array: arraySchema, posts: postsSchema, projectName: z.string().max(120).optional() })
+  .object({ site: siteSchema, array: arraySchema, posts: postsSchema, projectName: z.string().max(120).optional() }, { error: "A design must be an object with site, array and posts sections" })
   .superRefine((v, ctx) => {
     const alongWidthIn = v.array.orientation === "portrait" ? v.array.moduleWidthIn : v.array.moduleLengthIn;
     const widthFt = (v.array.columns * alongWidthIn + (v.array.columns - 1) * v.array.gapIn) / 12;

@@ -11,7 +11,7 @@ export function formatSummary(r: DesignResult): string {
     `Pierwise engine ${r.engineVersion}${r.projectName ? ` — ${r.projectName}` : ""}`,
     `CAUTION: ${r.caution}`,
     "",
-    `Array ${g.moduleCount} modules, ${f(g.widthFt, 2)} ft wide × ${f(g.slopeLengthFt, 2)} ft up the slope at ${g.tiltDeg}°`,
+    `Array ${g.moduleCount} modules, ${f(g.widthFt, 2)} ft wide × ${f(g.slopeLengthFt, 2)} ft up the slope at ${g.tiltDeg}°, facing ${r.input.array.azimuthDeg}° from north`,
     `  lowest edge ${f(g.lowestEdgeFt * 12)} in, highest ${f(g.highestEdgeFt * 12)} in, mean height ${f(g.meanHeightFt, 2)} ft, h/L ${f(g.hOverL, 2)}`,
     `  ${g.posts.length} posts at ${f(g.spacingFt, 2)} ft, ${ft.post.size} in std pipe; heights above own grade: ${g.posts.map((p) => `${p.id} ${f(p.heightAboveGradeFt * 12)} in`).join(", ")}`,
     `Wind ${r.references.asce}: Kz ${f(v.kz, 2)} Kzt ${f(v.kzt, 2)} Ke ${f(v.ke, 3)} Kd ${v.kd} → qz ${f(v.qzPsf, 2)} psf (${r.methodNote})`,

@@ -80,3 +80,17 @@ describe("design input schema", () => {
     if (!r.success) expect(zodIssuesToFieldErrors(r.error).map((i) => i.path)).toEqual(expect.arrayContaining(["site", "array", "posts"]));
   });
 });
+
+describe("missing sections", () => {
+  it("names each missing section and what it holds, not zod's generic message", () => {
+    const empty = safeParseDesignInput({});
+    expect(empty.ok).toBe(false);
+    if (empty.ok) return;
+    const byPath = Object.fromEntries(empty.issues.map((i) => [i.path, i.message]));
+    expect(byPath.site).toMatch(/^Site must be given/);
+    expect(byPath.array).toMatch(/^Array must be given/);
+    expect(byPath.posts).toMatch(/^Posts must be given/);
+    const notObject = safeParseDesignInput("a design");
+    expect(notObject.ok ? "" : notObject.issues[0].message).toMatch(/site, array and posts sections/);
+  });
+});
