@@ -12,21 +12,16 @@ import type { TiltEnvelopeRow } from "./options/tilt-envelope";
 import type { DesignInput } from "./schema";
 import type { SnowLoad } from "./snow/snow-load";
 import type { DesignWarning } from "./warnings";
+import type { ArrayWindForce } from "./wind/array-wind-force";
 import type { VelocityPressure } from "./wind/velocity-pressure";
 
-export interface WindCaseResult {
+/** One wind case: its coefficients and the resultant forces of `arrayWindForce`. */
+export interface WindCaseResult extends ArrayWindForce {
   label: string;
   windDirectionDeg: 0 | 180;
   loadCase: "A" | "B";
   cnWindward: number;
   cnLeeward: number;
-  windwardPressurePsf: number;
-  leewardPressurePsf: number;
-  normalForceLb: number;
-  centreOfPressureFromWindwardEdgeFt: number | null;
-  horizontalLb: number;
-  downwardLb: number;
-  momentAtPostTopLbFt: number;
 }
 
 export interface CombinationRow {

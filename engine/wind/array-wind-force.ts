@@ -51,29 +51,10 @@ export function arrayWindForce(a: {
   // Slope coordinate of each half's centroid measured from the low edge.
   const sWind = a.windDirectionDeg === 180 ? L / 4 : (3 * L) / 4;
   const sLee = L - sWind;
-  // The two halves, written out (no per-call array of pairs to iterate); same operations in the
-  // same order as a loop over [windward, leeward], starting from 0.
-  let horizontalLb = 0;
-  let downwardLb = 0;
-  let momentAtPostTopLbFt = 0;
-  {
-    const fy = pw * halfAreaFt2 * sin;
-    const fz = -pw * halfAreaFt2 * cos;
-    const y = (sWind - L / 2) * cos;
-    const z = (sWind - L / 2) * sin + a.rackDepthFt;
-    horizontalLb += fy;
-    downwardLb -= fz;
-    momentAtPostTopLbFt += fy * z - fz * y;
-  }
-  {
-    const fy = pl * halfAreaFt2 * sin;
-    const fz = -pl * halfAreaFt2 * cos;
-    const y = (sLee - L / 2) * cos;
-    const z = (sLee - L / 2) * sin + a.rackDepthFt;
-    horizontalLb += fy;
-    downwardLb -= fz;
-    momentAtPostTopLbFt += fy * z - fz * y;
-  }
+  // Windward half first, then leeward, each adding to the same running sums.
+  const sums = { horizontalLb: 0, downwardLb: 0, momentAtPostTopLbFt: 0 };
+  addHalf(sums, pw * halfAreaFt2, sWind - L / 2, sin, cos, a.rackDepthFt);
+  addHalf(sums, pl * halfAreaFt2, sLee - L / 2, sin, cos, a.rackDepthFt);
   const sumCn = a.cn.windward + a.cn.leeward;
   return {
     windwardPressurePsf: pw,
@@ -81,8 +62,28 @@ export function arrayWindForce(a: {
     normalForceLb: (pw + pl) * halfAreaFt2,
     centreOfPressureFromWindwardEdgeFt:
       Math.abs(sumCn) < 1e-9 ? null : (L * (0.25 * a.cn.windward + 0.75 * a.cn.leeward)) / sumCn,
-    horizontalLb,
-    downwardLb,
-    momentAtPostTopLbFt,
+    ...sums,
   };
+}
+
+/**
+ * Adds one half's resultant (force normal to the panel, lb, + toward the top surface) acting at
+ * slope distance `sFromMidFt` from the mid-slope line: horizontal and downward force and the moment
+ * about the post top (ft above it by `rackDepthFt`).
+ */
+function addHalf(
+  sums: { horizontalLb: number; downwardLb: number; momentAtPostTopLbFt: number },
+  normalLb: number,
+  sFromMidFt: number,
+  sin: number,
+  cos: number,
+  rackDepthFt: number,
+): void {
+  const fy = normalLb * sin;
+  const fz = -normalLb * cos;
+  const y = sFromMidFt * cos;
+  const z = sFromMidFt * sin + rackDepthFt;
+  sums.horizontalLb += fy;
+  sums.downwardLb -= fz;
+  sums.momentAtPostTopLbFt += fy * z - fz * y;
 }
