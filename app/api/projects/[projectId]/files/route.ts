@@ -67,4 +67,4 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
   }
   const saved = await getProjectFile(keys.fileId);
   return Response.json({ file: { ...saved, objectKey: undefined, thumbnailKey: undefined, hasThumbnail: Boolean(thumbnail) } }, { status: 201 });
-});
+}, { body: "multipart" });
