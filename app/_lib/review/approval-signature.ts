@@ -1,5 +1,5 @@
-import { ZodError } from "zod";
 import type { CurrentUser } from "@/app/_lib/auth";
+import { ValidationError } from "@/app/_lib/errors";
 import { verifyPassword } from "@/app/_lib/password";
 import { requestIp } from "@/app/_lib/request-ip";
 import type { DesignResult } from "@/engine";
@@ -8,7 +8,7 @@ import { clearFailures, recordFailure, secondsUntilAllowed } from "@/db/queries/
 import { findUserByEmail } from "@/db/queries/users";
 import { checkOutcome, ratioText, type CheckOverride } from "./check-outcome";
 
-const invalid = (path: (string | number)[], message: string) => new ZodError([{ code: "custom", path, message, input: undefined }]);
+const invalid = (path: (string | number)[], message: string) => ValidationError.field(path.join("."), message);
 
 /**
  * An approval of a revision with failing checks needs the engineer's reason for each one, and

@@ -5,7 +5,7 @@ import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { clearHold, clearHoldSchema } from "@/app/_lib/review/holds";
 import { reviewSchema } from "@/app/_lib/review/schemas";
 import { decideRevision, ownedRevision, submitRevision } from "@/app/_lib/review/workflow";
@@ -29,7 +29,7 @@ export async function submitForReviewAction(_prev: ActionState, form: FormData):
   try {
     await submitRevision(user, revisionId, z.string().uuid({ error: "Choose the reviewing engineer" }).parse(text(form, "engineerId")));
   } catch (error) {
-    const state = actionFailure(error, values);
+    const state = actionState(error, values);
     if (state.fieldErrors?.["form"]) state.fieldErrors.engineerId = state.fieldErrors.form;
     return state;
   }
@@ -62,7 +62,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
   for (let i = 0; i < 20 && form.has(`override.${i}.checkId`); i++) overrides.push({ checkId: text(form, `override.${i}.checkId`), reason: text(form, `override.${i}.reason`) });
   const approving = text(form, "decision") === "approve";
   const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  if (!parsed.success) return actionState(parsed.error, values);
   const letter = form.get("letter");
   let letterKey: string | null = null;
   try {
@@ -78,7 +78,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     revalidatePath(`/reviews/${revisionId}`);
     return { ok: true, message: status === "approved" ? "Approved: the revision is pinned and the designer has been e-mailed." : "Changes requested: the designer has been e-mailed." };
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
 }
 
@@ -93,12 +93,12 @@ export async function clearHoldAction(_prev: ActionState, form: FormData): Promi
     return user;
   });
   const parsed = clearHoldSchema.safeParse({ note: text(form, "note"), confirm: form.get("confirm") === "yes" });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  if (!parsed.success) return actionState(parsed.error, values);
   let told: string[];
   try {
     ({ told } = await clearHold(user, holdId, parsed.data.note));
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
   revalidatePath("/reviews");
   return { ok: true, message: `Hold cleared. ${told.length ? `E-mailed your note to ${told.join(", ")}.` : "Nobody else was on this revision to e-mail."} The note shows on the field spec and in the as-built log.` };
