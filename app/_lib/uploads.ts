@@ -1,5 +1,5 @@
 import crypto from "node:crypto";
-import { ZodError } from "zod";
+import { ValidationError } from "./errors";
 
 /**
  * The one upload policy for every file a user sends (project files, as-built photos, the engineer's
@@ -42,7 +42,7 @@ export function sniffType(bytes: Uint8Array): SniffedType | null {
   return null;
 }
 
-const refuse = (path: string, message: string) => new ZodError([{ code: "custom", path: [path], message, input: undefined }]);
+const refuse = ValidationError.field;
 
 export interface AcceptedUpload {
   bytes: Uint8Array;
@@ -52,7 +52,7 @@ export interface AcceptedUpload {
 
 /**
  * Checks one uploaded file against the policy of its kind and returns its bytes and sniffed type;
- * throws a ZodError on `path` whose message names the file otherwise. Images are measured from
+ * throws a ValidationError on `path` whose message names the file otherwise. Images are measured from
  * their header (sharp reads no pixels for that) so a decompression bomb is refused unread.
  */
 export async function acceptUpload(file: File, kind: UploadKind, path: string): Promise<AcceptedUpload> {

@@ -9,6 +9,7 @@ import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";
 import { db } from "@/db/client";
 import { DEFER_TO_CODE } from "@/engine";
+import { DEMO_PASSWORD } from "../support/review-fixtures";
 import { actAs, jsonRequest, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, INSTALLER, OUTSIDER, makeDesign, userId } from "../support/review-fixtures";
 
@@ -31,7 +32,7 @@ describe("GET /api/revisions/:id/report.pdf", () => {
     await actAs(DESIGNER);
     await submit(jsonRequest("POST", "/x", { engineerId: await userId(ENGINEER) }), params({ revisionId }));
     await actAs(ENGINEER);
-    await review(jsonRequest("POST", "/x", { decision: "approve", comments: [{ fieldPath: "site.exposure", body: "Exposure C confirmed on site visit." }] }), params({ revisionId }));
+    await review(jsonRequest("POST", "/x", { decision: "approve", password: DEMO_PASSWORD, comments: [{ fieldPath: "site.exposure", body: "Exposure C confirmed on site visit." }] }), params({ revisionId }));
 
     const res = await download(INSTALLER, revisionId);
     expect(res.status).toBe(200);

@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { clearHold, clearHoldSchema } from "@/app/_lib/review/holds";
 import { reviewSchema } from "@/app/_lib/review/schemas";
 import { decideRevision, ownedRevision, submitRevision } from "@/app/_lib/review/workflow";
@@ -30,7 +30,7 @@ export async function submitForReviewAction(_prev: ActionState, form: FormData):
   try {
     await submitRevision(user, revisionId, z.string().uuid({ error: "Choose the reviewing engineer" }).parse(text(form, "engineerId")));
   } catch (error) {
-    const state = actionFailure(error, values);
+    const state = actionState(error, values);
     if (state.fieldErrors?.["form"]) state.fieldErrors.engineerId = state.fieldErrors.form;
     return state;
   }
@@ -56,8 +56,12 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     const body = text(form, `comment.${i}.body`).trim();
     if (body) comments.push({ body, fieldPath: text(form, `comment.${i}.fieldPath`) || null });
   }
-  const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  // One reason per failing check, in the order the form lists them (override.N.checkId / .reason).
+  const overrides: { checkId: string; reason: string }[] = [];
+  for (let i = 0; i < 20 && form.has(`override.${i}.checkId`); i++) overrides.push({ checkId: text(form, `override.${i}.checkId`), reason: text(form, `override.${i}.reason`) });
+  const approving = text(form, "decision") === "approve";
+  const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] });
+  if (!parsed.success) return actionState(parsed.error, values);
   const letter = form.get("letter");
   let letterKey: string | null = null;
   let decided = false;
@@ -77,7 +81,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     // A letter stored for a decision that was never recorded is removed again; the letter of a
     // recorded decision (a later step failed) is kept.
     if (letterKey && !decided && !(await letterIsRecorded(letterKey))) await deleteObject(letterKey).catch(() => undefined);
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
 }
 
@@ -91,13 +95,14 @@ export async function clearHoldAction(_prev: ActionState, form: FormData): Promi
     assertRole(user, "engineer");
     return user;
   });
-  const parsed = clearHoldSchema.safeParse({ note: text(form, "note") });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  const parsed = clearHoldSchema.safeParse({ note: text(form, "note"), confirm: form.get("confirm") === "yes" });
+  if (!parsed.success) return actionState(parsed.error, values);
+  let told: string[];
   try {
-    await clearHold(user, holdId, parsed.data.note);
+    ({ told } = await clearHold(user, holdId, parsed.data.note));
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
   revalidatePath("/reviews");
-  return { ok: true, message: "Hold cleared." };
+  return { ok: true, message: `Hold cleared. ${told.length ? `E-mailed your note to ${told.join(", ")}.` : "Nobody else was on this revision to e-mail."} The note shows on the field spec and in the as-built log.` };
 }
