@@ -9,7 +9,7 @@ import { env } from "./env";
  *   clients, curl) are not browsers acting for someone else and keep working.
  * - A write with a body sends JSON (`application/json`); anything else is 415, so a cross-site
  *   form or a `text/plain` fetch (which browsers send without asking first) is never parsed.
- *   The one upload route declares multipart instead.
+ *   The one upload route declares multipart instead and checks its form itself.
  * - A JSON body is at most MAX_JSON_BYTES: a larger declared length is refused with 413 before a
  *   byte is read, and a body without a declared length stops being read at the limit.
  */
@@ -58,10 +58,8 @@ export function guardRequest(request: Request, options: GuardOptions = {}): void
   const hasBody = Number(request.headers.get("content-length") ?? 0) > 0 || request.headers.has("transfer-encoding") || (request.body !== null && !request.headers.has("content-length"));
   if (!hasBody) return;
   const type = (request.headers.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
-  if (options.body === "multipart") {
-    if (type !== "multipart/form-data") throw new RequestError(415, "Send the upload as multipart/form-data with the file in the field named file.", "file");
-    return;
-  }
+  // The upload route reads multipart itself, after its access checks, and names the field when the body is not a form.
+  if (options.body === "multipart") return;
   if (type !== "application/json" && !/^application\/[a-z0-9.+-]+\+json$/.test(type)) {
     throw new RequestError(415, "Send the request body as JSON, with Content-Type: application/json.");
   }
