@@ -7,6 +7,8 @@ export interface SessionData {
   userId?: string;
   organisationId?: string;
   signedInAt?: number;
+  /** The user_sessions row this cookie belongs to; a cookie without an open row is signed out. */
+  sessionId?: string;
 }
 
 export function sessionOptions(): SessionOptions {

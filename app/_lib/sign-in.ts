@@ -5,6 +5,8 @@ import { hashPassword, verifyPassword } from "./password";
 import { requestIp } from "./request-ip";
 import type { SignInInput } from "./schemas/account";
 import { getSession } from "./session";
+import { startSession } from "./start-session";
+import { endSession } from "@/db/queries/sessions";
 
 export type SignInOutcome = { ok: true; userId: string } | { ok: false; status: 401 | 429; message: string };
 
@@ -30,12 +32,7 @@ export async function signIn(input: SignInInput): Promise<SignInOutcome> {
     return { ok: false, status: 401, message: BAD_CREDENTIALS };
   }
   await clearFailures(input.email);
-  const session = await getSession();
-  session.destroy();
-  session.userId = candidate.userId;
-  session.organisationId = candidate.organisationId;
-  session.signedInAt = Date.now();
-  await session.save();
+  await startSession(candidate.userId, candidate.organisationId);
   await recordAudit({ organisationId: candidate.organisationId, actorUserId: candidate.userId, action: "sign-in", ip });
   return { ok: true, userId: candidate.userId };
 }
@@ -45,5 +42,7 @@ export async function signOut(): Promise<void> {
   if (session.userId) {
     await recordAudit({ organisationId: session.organisationId, actorUserId: session.userId, action: "sign-out", ip: await requestIp() });
   }
+  // The record ends too, so a copy of the cookie is worthless from now on.
+  if (session.sessionId) await endSession(session.sessionId);
   session.destroy();
 }
