@@ -12,6 +12,7 @@ import { sessionOptions } from "@/app/_lib/session";
 import { db } from "@/db/client";
 import { changeMembership } from "@/db/queries/members";
 import { consumePasswordReset } from "@/db/queries/password-resets";
+import { hashPassword } from "@/app/_lib/password";
 import { hashToken } from "@/app/_lib/tokens";
 import { FRESH_PASSWORD, freshMember, freshReset } from "../support/accounts";
 import { jsonRequest, outcomeOf, resetRequest, sessionCookie } from "../support/next-context";
@@ -71,7 +72,7 @@ describe("sessions that end", () => {
     const reset = await freshMember({ roles: ["designer"] });
     const before = await signInAs(reset.email);
     const token = await freshReset(reset.userId);
-    expect((await consumePasswordReset(hashToken(token), "irrelevant-hash-for-this-test")).ok).toBe(true);
+    expect((await consumePasswordReset(hashToken(token), await hashPassword("a-new-password-after-reset"))).ok).toBe(true);
     expect(await db("user_sessions").where({ user_id: reset.userId }).whereNull("ended_at")).toEqual([]);
     await replay(before);
     expect(await whoAmI()).toBe(401);

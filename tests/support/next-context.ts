@@ -42,6 +42,8 @@ export function resetRequest(options: { ip?: string } = {}): void {
   jar.clear();
   requestHeaders.clear();
   requestHeaders.set("x-forwarded-for", options.ip ?? "203.0.113.10");
+  // The socket address the server's preload would stamp (db/lib/peer-address.cjs): the address requestIp() trusts.
+  requestHeaders.set("x-pierwise-peer-address", options.ip ?? "203.0.113.10");
 }
 resetRequest();
 
