@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "../client";
+import { isUuid } from "../ids";
 
 /** Server-side session records (see the user_sessions migration). */
 export interface SessionRow {
@@ -25,7 +26,7 @@ export async function openSession(s: { userId: string; organisationId: string; t
  * minute of the last one, so a page that makes several requests writes at most once.
  */
 export async function sessionIsOpen(sessionId: string, userId: string): Promise<boolean> {
-  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(sessionId)) return false;
+  if (!isUuid(sessionId)) return false;
   const row = await db("user_sessions")
     .where({ id: sessionId, user_id: userId })
     .whereNull("ended_at")
@@ -37,7 +38,7 @@ export async function sessionIsOpen(sessionId: string, userId: string): Promise<
 }
 
 export async function endSession(sessionId: string): Promise<void> {
-  if (!/^[0-9a-f-]{36}$/i.test(sessionId)) return;
+  if (!isUuid(sessionId)) return;
   await db("user_sessions").where({ id: sessionId }).whereNull("ended_at").update({ ended_at: db.fn.now() });
 }
 
