@@ -1,4 +1,4 @@
-import { assertOwned, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwned, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
@@ -26,12 +26,12 @@ export function reviewUrl(revisionId: string): string {
 }
 
 /**
- * A designer sends a draft (or a revision with changes requested) to one of the organisation's
- * engineers. The revision must be the design's newest; the engineer must be able to decide it.
+ * The steps of submitting after the access checks (app/_lib/services/review.ts): a draft (or a
+ * revision with changes requested) goes to one of the organisation's engineers. The revision must
+ * be the design's newest; the engineer must be able to decide it.
  */
-export async function submitRevision(user: CurrentUser, revisionId: string, engineerId: string): Promise<{ reviewId: string }> {
-  const revision = await ownedRevision(user, revisionId);
-  assertRole(user, "designer");
+export async function submitRevision(user: CurrentUser, revision: RevisionContext, engineerId: string): Promise<{ reviewId: string }> {
+  const revisionId = revision.id;
   const engineer = await activeMember(user.organisationId, engineerId);
   if (!engineer || !engineer.roles.includes("engineer")) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation");
   if (engineer.userId === user.userId) throw invalid("engineerId", "Choose another engineer: nobody can review their own design");
@@ -67,18 +67,17 @@ export async function submitRevision(user: CurrentUser, revisionId: string, engi
 }
 
 /**
- * The engineer's decision on a revision in review. Both decisions need an engineer licensed in
+ * The steps of an engineer's decision after ownership and role (app/_lib/services/review.ts). Both decisions need an engineer licensed in
  * the project's state who authored no revision of the design. Approval records name, licence
  * number, state and time; from then on the database refuses any change to the revision.
  */
 export async function decideRevision(
   user: CurrentUser,
-  revisionId: string,
+  revision: RevisionContext,
   body: ReviewBody,
   letterFileKey: string | null = null,
 ): Promise<{ status: "approved" | "changes_requested" }> {
-  const revision = await ownedRevision(user, revisionId);
-  assertRole(user, "engineer");
+  const revisionId = revision.id;
   if ((await designAuthorIds(revision.designId)).includes(user.userId)) {
     throw new AccessError(403, body.decision === "approve" ? "You cannot approve a design you authored." : "You cannot review a design you authored.", true);
   }
