@@ -4,13 +4,9 @@
  */
 import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
+import type { Table } from "@/components/review/plain-table";
 
-export interface Table {
-  title: string;
-  columns: string[];
-  rows: string[][];
-  note?: string;
-}
+export type { Table };
 
 export function fmt(n: number | null | undefined, digits = 1): string {
   if (n === null || n === undefined || !Number.isFinite(n)) return "—";

@@ -3,6 +3,7 @@ import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { db } from "@/db/client";
+import { STATUS_PHRASES } from "@/db/revision-status";
 import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
 import {
@@ -12,7 +13,6 @@ import {
 import { engineerEligibility, licenceEligibility } from "./eligibility";
 import type { ReviewBody } from "./schemas";
 
-const STATUS_WORDS = { draft: "a draft", in_review: "in review", approved: "approved", changes_requested: "marked changes requested" } as const;
 
 const invalid = ValidationError.field;
 
@@ -44,7 +44,7 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
   const reviewId = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "draft" && status !== "changes_requested") {
-      throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+      throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     }
     const latest = await latestRevisionNumber(revision.designId, trx);
     if (latest !== revision.number) throw new ConflictError(`Revision ${revision.number} is not the newest (revision ${latest} is); submit the newest revision.`);
@@ -91,7 +91,7 @@ export async function decideRevision(
   const to = body.decision === "approve" ? "approved" : "changes_requested";
   const submittedBy = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
-    if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+    if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
     if (!open) throw new ConflictError("This revision has no open review to decide.");
     await recordDecision(trx, open.id, {

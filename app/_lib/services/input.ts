@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * What a service receives as its input: a thunk, so the service reads the body only after its
  * access checks (a wrong role is a 403 whatever was sent, even a body that is not JSON). Route

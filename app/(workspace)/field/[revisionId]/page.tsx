@@ -9,6 +9,7 @@ import { fmt } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { HoldBanner } from "@/components/review/hold-banner";
+import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { SITE_CAUTIONS } from "@/engine/notices";
@@ -74,7 +75,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} />
+      <HoldBanner holds={standing.holds} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
       <header className="flex items-start justify-between gap-4">
         <div>

@@ -9,6 +9,7 @@ import { ownedRevision } from "@/app/_lib/review/workflow";
 import { fieldLabel } from "@/components/design/fields";
 import { inputChanges } from "@/components/design/revision-diff";
 import { HoldBanner } from "@/components/review/hold-banner";
+import { clearHoldAction } from "./actions";
 import { PlainTable } from "@/components/review/plain-table";
 import { ReviewPreview } from "@/components/review/review-preview";
 import { StatusBadge } from "@/components/review/status-badge";
@@ -73,7 +74,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </header>
-      <HoldBanner holds={standing.holds} canClear={isEngineer} />
+      <HoldBanner holds={standing.holds} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">

@@ -3,7 +3,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
-import { StatusBadge } from "@/components/design/status-badge";
+import { StatusBadge } from "@/components/review/status-badge";
 import type { DesignRow } from "@/db/queries/designs";
 
 const col = createColumnHelper<DesignRow>();

@@ -3,7 +3,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
-import { StatusBadge } from "@/components/design/status-badge";
+import { StatusBadge } from "@/components/review/status-badge";
 import type { RevisionRow } from "@/db/queries/revisions";
 
 const col = createColumnHelper<RevisionRow>();
