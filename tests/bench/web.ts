@@ -8,7 +8,8 @@
  * beside the figures. The machine is shared, so run it when it is quiet and repeat when noisy.
  *
  * Options (environment): BENCH_KEYSTROKES (default 16), BENCH_HTTP_SECONDS (per round, default 3),
- * BENCH_ROUNDS (default 3), BENCH_EDITOR_RUNS (default 2), PIERWISE_BENCH_DIST_DIR (default .next-bench).
+ * BENCH_ROUNDS (default 3), BENCH_EDITOR_RUNS (default 2), PIERWISE_BENCH_DIST_DIR (default .next-bench),
+ * BENCH_SKIP_BUILD=1 (serve the build already in that folder, e.g. a copy of an earlier build to compare).
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import crypto from "node:crypto";
@@ -87,7 +88,7 @@ async function main(): Promise<void> {
     PIERWISE_DIST_DIR: distDir,
     PIERWISE_BENCH_BUILD: "1",
   };
-  if (buildIsStale(root, distDir)) buildApp(root, env);
+  if (process.env.BENCH_SKIP_BUILD !== "1" && buildIsStale(root, distDir)) buildApp(root, env);
   server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], { cwd: root, env, stdio: ["ignore", "ignore", "inherit"] });
   const base = `http://127.0.0.1:${ports.app}`;
   await waitForHttp(`${base}/api/health`, 60_000);
@@ -149,7 +150,7 @@ async function main(): Promise<void> {
   for (const w of weights) out(`  ${pad(w.name, 18)}${lpad(f(w.gzipKb, 1), 8)}${lpad(f(w.gzipKb / signInKb, 2), 11)}${lpad(String(w.scripts), 9)}`);
   out(`  targets: editor ≤ 240 kB; every other page ≤ 1.25 × sign-in (${f(signInKb * 1.25, 1)} kB)`);
   out();
-  out(`Editor (WebGL on, software rendering; ${KEYSTROKES} keystrokes per run, each flipping 115 ↔ 175 mph)`);
+  out(`Editor (WebGL on, software rendering; ${KEYSTROKES} keystrokes per run, each flipping 125 ↔ 175 mph)`);
   const row = (label: string, get: (e: EditorFigures) => number | null, d: number, target: string) =>
     out(`  ${pad(label, 44)}${editorRuns.map((e) => lpad(f(get(e), d), 9)).join("")}   ${target}`);
   out(`  ${pad("", 44)}${editorRuns.map((_, i) => lpad(`run ${i + 1}`, 9)).join("")}`);

@@ -16,7 +16,7 @@ const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 
 /** The default design with one input set, and the section switched to the variant that has the input. */
 function designWith(inputPath: string, value: number): unknown {
-  const design = structuredClone(defaultDesignInput) as Record<string, Record<string, unknown>>;
+  const design = structuredClone(defaultDesignInput) as unknown as Record<string, Record<string, unknown>>;
   if (inputPath.startsWith("site.topography.")) design.site.topography = inputPath.endsWith("kzt") ? { method: "kzt", kzt: 1 } : { method: "hill", k1: 0.5, k2: 0.5, k3: 0.5 };
   if (/^site\.soil\.(allowable|lateral)/.test(inputPath)) design.site.soil = { method: "custom", allowableBearingPsf: 1500, lateralBearingPsfPerFt: 100 };
   const keys = inputPath.split(".");

@@ -14,10 +14,10 @@ export async function recordAsBuilt(user: CurrentUser, revisionId: string, body:
   return recordHole(user, revision, input, photos);
 }
 
-/** An engineer clears a hold, saying how it was resolved (e.g. deepened hole inspected). */
-export async function clearHold(user: CurrentUser, holdId: string, body: Body): Promise<void> {
+/** An engineer clears a hold, saying how it was resolved and confirming work may go on; those on the revision are e-mailed. */
+export async function clearHold(user: CurrentUser, holdId: string, body: Body): Promise<{ told: string[] }> {
   const hold = assertOwned(user, await getHold(holdId), "That hold");
   assertRole(user, "engineer");
   const { note } = clearHoldSchema.parse(await body());
-  await clearHoldRow(user, hold, note);
+  return clearHoldRow(user, hold, note);
 }

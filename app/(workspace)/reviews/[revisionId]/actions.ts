@@ -27,7 +27,11 @@ function decisionFrom(form: FormData) {
     const body = text(form, `comment.${i}.body`).trim();
     if (body) comments.push({ body, fieldPath: text(form, `comment.${i}.fieldPath`) || null });
   }
-  return { decision: text(form, "decision"), comments };
+  // One reason per failing check, in the order the form lists them (override.N.checkId / .reason).
+  const overrides: { checkId: string; reason: string }[] = [];
+  for (let i = 0; i < 20 && form.has(`override.${i}.checkId`); i++) overrides.push({ checkId: text(form, `override.${i}.checkId`), reason: text(form, `override.${i}.reason`) });
+  const approving = text(form, "decision") === "approve";
+  return { decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] };
 }
 
 /** The engineer's decision; a signed letter (PDF or image) may be attached to an approval. */
@@ -44,8 +48,9 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
 /** An engineer clears a hold, saying how it was resolved. */
 export async function clearHoldAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const user = await forPage(() => requireUser());
-  const cleared = await forAction(() => clearHold(user, text(form, "holdId"), () => ({ note: text(form, "note") })), typedValues(form));
+  const cleared = await forAction(() => clearHold(user, text(form, "holdId"), () => ({ note: text(form, "note"), confirm: form.get("confirm") === "yes" })), typedValues(form));
   if (!cleared.ok) return cleared.state;
+  const { told } = cleared.value;
   revalidatePath("/reviews");
-  return { ok: true, message: "Hold cleared." };
+  return { ok: true, message: `Hold cleared. ${told.length ? `E-mailed your note to ${told.join(", ")}.` : "Nobody else was on this revision to e-mail."} The note shows on the field spec and in the as-built log.` };
 }
