@@ -1,11 +1,12 @@
 import type { HoldRecord } from "@/db/queries/holds";
 import { ClearHoldForm, type ClearHoldAction } from "./clear-hold-form";
+import { shortDateTime } from "@/components/ui/dates";
 
 /**
  * A design on hold, shown at the top of every screen of that design until an engineer clears it.
  * Engineers get the clear form beside each hold: the page passes `clearAction` only to them.
  */
-export function HoldBanner({ holds, clearAction }: { holds: HoldRecord[]; clearAction?: ClearHoldAction }) {
+export function HoldBanner({ holds, clearAction, timeZone }: { holds: HoldRecord[]; clearAction?: ClearHoldAction; timeZone?: string }) {
   if (holds.length === 0) return null;
   return (
     <section role="alert" aria-label="Design on hold" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
@@ -15,7 +16,7 @@ export function HoldBanner({ holds, clearAction }: { holds: HoldRecord[]; clearA
         {holds.map((h) => (
           <li key={h.id} className="text-sm">
             <p className="font-semibold">{h.reason}</p>
-            <p className="text-xs">Raised by {h.raisedByName} on {h.raisedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
+            <p className="text-xs">Raised by {h.raisedByName} on {shortDateTime(h.raisedAt, timeZone)}</p>
             {clearAction ? <ClearHoldForm holdId={h.id} clearAction={clearAction} /> : null}
           </li>
         ))}

@@ -14,6 +14,7 @@ import { POST as projectsRoute } from "@/app/api/projects/route";
 import { POST as reviewRoute } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submitRoute } from "@/app/api/revisions/[revisionId]/submit/route";
 import { db } from "@/db/client";
+import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 import { DEMO_CARD_ID } from "@/db/seeds/02_demo_projects";
 import { toFormData } from "../support/access-matrix";
 import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
@@ -73,7 +74,7 @@ const CASES: { useCase: keyof typeof USE_CASES; who: string | null; fields: () =
   { useCase: "submit", who: DESIGNER, fields: () => ({ engineerId: "" }), expected: "invalid:engineerId" },
   { useCase: "submit", who: INSTALLER, fields: () => ({ engineerId }), expected: "forbidden" },
   { useCase: "submit", who: OUTSIDER, fields: () => ({ engineerId }), expected: "not-found" },
-  { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "approve" }), expected: "done" },
+  { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "approve", password: DEMO_PASSWORD }), expected: "done" },
   { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "maybe" }), expected: "invalid:decision" },
   { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "request-changes" }), expected: "invalid:comments" },
   { useCase: "decide", who: DESIGNER, fields: () => ({ decision: "approve" }), expected: "forbidden" },
@@ -130,7 +131,7 @@ describe("each API route and its server action give the same outcome", () => {
       const id = await USE_CASES.decide.setup();
       await db("revisions").where({ id }).update({ status: "changes_requested" });
       await actAs(ENGINEER);
-      outcomes.push(await door(USE_CASES.decide, id, { decision: "approve" }));
+      outcomes.push(await door(USE_CASES.decide, id, { decision: "approve", password: DEMO_PASSWORD }));
     }
     expect(outcomes[0]).toMatch(/^refused:Only a revision in review can be decided/);
     expect(outcomes[1]).toBe(outcomes[0]);

@@ -13,7 +13,7 @@ import { DEFER_TO_CODE, SITE_CAUTIONS } from "@/engine";
 import { fieldLabel } from "@/engine/field-labels";
 import type { RevisionContext } from "@/db/queries/reviews";
 import { checkOutcome, ratioText } from "@/components/review/check-outcome";
-import { calendarDateInWords, dateInWords, dateTimeInWords } from "./dates";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { drawElevation } from "./report-drawing";
 import { methodSteps } from "./report-method";
 import { checksTable, concreteLines, fmt, governingLines, loadsTable, windTable, type Table } from "./report-model";

@@ -6,7 +6,7 @@ import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
 import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
 import { checkOutcome } from "@/components/review/check-outcome";
-import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { fmt } from "@/app/_lib/review/report-model";
 import { verifyUrl } from "@/app/_lib/review/verify";
 import { CheckSummary } from "@/components/review/check-summary";
@@ -83,7 +83,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
       <header className="flex items-start justify-between gap-4">
         <div>

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { checkOutcome } from "@/components/review/check-outcome";
-import { dateInWords } from "@/app/_lib/review/dates";
+import { dateInWords } from "@/components/ui/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
 import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputRows, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
@@ -81,7 +81,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </header>
-      <HoldBanner holds={standing.holds} clearAction={isEngineer ? clearHoldAction : undefined} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
