@@ -1,6 +1,7 @@
 /**
  * Unit conversion at the edges. The engine works in US customary units (ft, in, lb, psf, mph);
- * the app converts to metric for display with `convert`. Factors are derived once from mathjs
+ * the app converts to metric for display with `toMetric` and back with `fromMetric`
+ * (components/design/units.ts). Factors are derived once from mathjs
  * (so they carry its exact definitions) and applied with plain multiplication, keeping mathjs
  * out of the hot path. An unknown unit throws, naming it.
  */

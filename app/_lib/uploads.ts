@@ -45,9 +45,3 @@ export async function photoThumbnail(bytes: Uint8Array): Promise<Uint8Array> {
   const sharp = (await import("sharp")).default;
   return new Uint8Array(await sharp(bytes, { limitInputPixels: 100_000_000 }).rotate().resize({ width: THUMBNAIL_WIDTH_PX, withoutEnlargement: true }).webp({ quality: 75 }).toBuffer());
 }
-
-export function formatBytes(n: number): string {
-  if (n < 1024) return `${n} B`;
-  if (n < 1024 * 1024) return `${(n / 1024).toFixed(0)} KB`;
-  return `${(n / 1024 / 1024).toFixed(1)} MB`;
-}
