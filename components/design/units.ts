@@ -30,6 +30,7 @@ export const DISPLAY_UNITS = {
   psfPerFt: u("psf/ft", "kPa/m", "psfPerFt", 1, 0, 1),
   pcf: u("pcf", "kN/m³", "pcf", 1, 0, 1),
   ksi: u("ksi", "MPa", "ksi", 1, 0, 0),
+  psi: u("psi", "MPa", "ksi", 1 / 1000, 0, 1),
   mph: u("mph", "m/s", "mph", 1, 0, 1),
   ft3: u("ft³", "m³", "ft3", 1, 2, 3),
   yd3: u("yd³", "m³", "yd3", 1, 2, 2),
