@@ -12,6 +12,7 @@ import { getObject } from "@/app/_lib/storage";
 import { db } from "@/db/client";
 import { openHolds } from "@/db/queries/holds";
 import { mailTo } from "../support/mailbox";
+import { DEMO_PASSWORD } from "../support/review-fixtures";
 import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
 
@@ -20,7 +21,7 @@ async function approved() {
   await actAs(DESIGNER);
   await submit(jsonRequest("POST", "/x", { engineerId: await userId(ENGINEER) }), params({ revisionId: d.revisionId }));
   await actAs(ENGINEER);
-  await review(jsonRequest("POST", "/x", { decision: "approve" }), params({ revisionId: d.revisionId }));
+  await review(jsonRequest("POST", "/x", { decision: "approve", password: DEMO_PASSWORD }), params({ revisionId: d.revisionId }));
   const result = (await db("revisions").where({ id: d.revisionId }).first("result")).result;
   return { ...d, depthIn: result.footing.depthIn as number, diameterIn: result.footing.diameterIn as number };
 }
@@ -105,8 +106,8 @@ describe("as-built entries and holds", () => {
     }
     await actAs(ENGINEER);
     expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "" })))).toMatchObject({ value: { fieldErrors: { note: [expect.stringMatching(/how the hold was resolved/)] } } });
-    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "Hole re-bored to 30 in and inspected." })))).toMatchObject({ value: { ok: true } });
+    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "Hole re-bored to 30 in and inspected.", confirm: "yes" })))).toMatchObject({ value: { ok: true } });
     expect(await openHolds(d.designId)).toEqual([]);
-    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "again" })))).toMatchObject({ value: { message: "This hold was already cleared." } });
+    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "again", confirm: "yes" })))).toMatchObject({ value: { message: "This hold was already cleared." } });
   });
 });

@@ -57,7 +57,11 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     const body = text(form, `comment.${i}.body`).trim();
     if (body) comments.push({ body, fieldPath: text(form, `comment.${i}.fieldPath`) || null });
   }
-  const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments });
+  // One reason per failing check, in the order the form lists them (override.N.checkId / .reason).
+  const overrides: { checkId: string; reason: string }[] = [];
+  for (let i = 0; i < 20 && form.has(`override.${i}.checkId`); i++) overrides.push({ checkId: text(form, `override.${i}.checkId`), reason: text(form, `override.${i}.reason`) });
+  const approving = text(form, "decision") === "approve";
+  const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] });
   if (!parsed.success) return actionState(parsed.error, values);
   const letter = form.get("letter");
   let letterKey: string | null = null;
@@ -88,13 +92,14 @@ export async function clearHoldAction(_prev: ActionState, form: FormData): Promi
     assertRole(user, "engineer");
     return user;
   });
-  const parsed = clearHoldSchema.safeParse({ note: text(form, "note") });
+  const parsed = clearHoldSchema.safeParse({ note: text(form, "note"), confirm: form.get("confirm") === "yes" });
   if (!parsed.success) return actionState(parsed.error, values);
+  let told: string[];
   try {
-    await clearHold(user, holdId, parsed.data.note);
+    ({ told } = await clearHold(user, holdId, parsed.data.note));
   } catch (error) {
     return actionState(error, values);
   }
   revalidatePath("/reviews");
-  return { ok: true, message: "Hold cleared." };
+  return { ok: true, message: `Hold cleared. ${told.length ? `E-mailed your note to ${told.join(", ")}.` : "Nobody else was on this revision to e-mail."} The note shows on the field spec and in the as-built log.` };
 }
