@@ -190,7 +190,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   if (standing.reviews.length === 0) line("Not submitted for review.");
   for (const rv of standing.reviews) {
     const what = rv.decision === "approve" ? "approved" : rv.decision === "request_changes" ? "requested changes" : "not yet decided";
-    line(`Submitted ${dateInWords(rv.submittedAt, tz)} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${dateInWords(rv.decidedAt, tz)} by ${rv.engineerName}` : ""}.`);
+    line(`Submitted ${dateInWords(rv.submittedAt, tz)} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${dateInWords(rv.decidedAt, tz)} by ${rv.engineerName}` : ""}.`.replace(/\.\.$/, "."));
     for (const c of rv.comments) line(`Comment${c.fieldPath ? ` on ${fieldLabel(c.fieldPath)}` : ""}: ${c.body}`, { indent: 10 });
   }
   heading("Cautions");
