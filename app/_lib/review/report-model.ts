@@ -68,6 +68,8 @@ export function loadsTable(r: DesignResult): Table {
   return {
     title: `Loads per post at grade (ASD combinations, tilt ${fmt(r.geometry.tiltDeg)}°)`,
     columns: ["Post", "Combination", "Shear (lb)", "Moment (lb-ft)", "Downward (lb)", "Wind uplift (lb)"],
+    // Beam reaction factors (continuous-beam share ÷ tributary share), when the result has them.
+    note: r.geometry.postLoadSharing ? `${r.geometry.postLoadSharing} Factors: ${r.geometry.posts.map((p) => `${p.id} ${fmt(p.reactionFactor, 3)}`).join(", ")}.` : undefined,
     rows: r.postLoads.flatMap((p) => p.combinations.map((c) => [p.postId, c.combination, fmt(c.shearLb, 0), fmt(c.momentAtGradeLbFt, 0), fmt(c.downwardLb, 0), fmt(c.windUpliftLb, 0)])),
   };
 }
