@@ -48,10 +48,14 @@ function CompileThenDraw({ onReady }: { onReady: () => void }) {
   return null;
 }
 
-/** Draws the first frame once `frameloop` leaves "never". */
+/** Draws the first frame once `frameloop` leaves "never" (and once more on the next frame, in case the switch lands after this effect). */
 function FirstFrame() {
   const invalidate = useThree((s) => s.invalidate);
-  useLayoutEffect(() => invalidate(), [invalidate]);
+  useLayoutEffect(() => {
+    invalidate();
+    const next = requestAnimationFrame(() => invalidate());
+    return () => cancelAnimationFrame(next);
+  }, [invalidate]);
   return null;
 }
 
