@@ -1,5 +1,5 @@
-import { ZodError } from "zod";
 import type { DesignResult } from "@/engine";
+import { ValidationError } from "./errors";
 
 /**
  * `POST /api/calc?sections=footing,concrete`: API callers that need only part of the result name
@@ -24,7 +24,7 @@ export function sectionsFrom(url: URL): Set<ResultSection> | null {
   const unknown = raw.filter((s) => !known.has(s));
   if (unknown.length > 0 || raw.length === 0) {
     const what = raw.length === 0 ? "No section named" : `Unknown section${unknown.length > 1 ? "s" : ""} ${unknown.map((s) => `"${s.slice(0, 40)}"`).join(", ")}`;
-    throw new ZodError([{ code: "custom", path: ["sections"], message: `${what}; name one or more of: ${RESULT_SECTIONS.join(", ")}.`, input: undefined }]);
+    throw ValidationError.field("sections", `${what}; name one or more of: ${RESULT_SECTIONS.join(", ")}.`);
   }
   return new Set(raw.filter((s): s is ResultSection => (RESULT_SECTIONS as readonly string[]).includes(s)));
 }

@@ -1,5 +1,6 @@
 import { db } from "../client";
 import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { isUuid } from "../ids";
 
 /** A customer site. */
 export interface Project {
@@ -35,6 +36,7 @@ const columns = [
 ];
 
 export async function getProject(id: string): Promise<Project | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("projects").where({ id }).first(columns);
 }
 
