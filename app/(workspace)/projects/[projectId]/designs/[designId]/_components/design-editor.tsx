@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useDeferredValue, useEffect, useState } from "react";
+import { memo, useEffect, useMemo, useState } from "react";
 import { FormProvider, useForm, useWatch, type FieldValues } from "react-hook-form";
 import { applyCriteriaCard } from "@/app/_lib/design-defaults";
 import { formatQuantity, type UnitSystem } from "@/components/design/units";
@@ -15,6 +15,7 @@ import { designInputSchema, type DesignInput, type DesignInputDraft } from "@/en
 import type { DesignResult } from "@/engine/types";
 import { ArrayGroup, PostsGroup, SiteGroup } from "./input-groups";
 import { FootingHeadline, ResultsPanel } from "./results-panel";
+import { useAfterPaint } from "./use-after-paint";
 import { useLiveResult, type LiveStatus } from "./use-live-result";
 
 /**
@@ -31,6 +32,11 @@ export interface EditorProps {
   readOnly: boolean;
   card: { label: string; values: CriteriaCardValues } | null;
 }
+
+// Each field follows its own value (useController), so the groups need not re-render at every keystroke.
+const SiteInputs = memo(SiteGroup);
+const ArrayInputs = memo(ArrayGroup);
+const PostsInputs = memo(PostsGroup);
 
 type Conflict = { message: string; latestRevisionId: string | null; latestNumber: number | null };
 const UNITS_KEY = "pierwise-units";
@@ -103,15 +109,20 @@ export function DesignEditor(props: EditorProps) {
   }
 
   const onSubmit = form.handleSubmit((input) => save(input), () => setSaveMessage({ ok: false, text: "Not saved: fix the fields marked in red first." }));
-  const applyCard = props.card ? () => {
-    const next = applyCriteriaCard(form.getValues(), props.card!.values);
-    form.setValue("site", next.site, { shouldValidate: true, shouldDirty: true });
-  } : null;
+  // Stable across keystrokes, so the memoised input groups do not re-render with every change
+  // (each field follows its own value).
+  const cardOffer = useMemo(() => props.card ? {
+    label: props.card.label,
+    apply: () => {
+      const next = applyCriteriaCard(form.getValues(), props.card!.values);
+      form.setValue("site", next.site, { shouldValidate: true, shouldDirty: true });
+    },
+  } : null, [props.card, form]);
 
   // A read-only revision shows what was saved (the record) even where today's engine differs.
   const result = props.readOnly && live.savedDiffers ? saved.result : live.result;
-  // The 3D preview follows one step behind when typing is fast, so a keystroke paints first.
-  const previewResult = useDeferredValue(result);
+  // The 3D preview follows once the numbers are painted, so a keystroke never waits for a redraw.
+  const previewResult = useAfterPaint(result);
   const stale = live.status === "invalid";
   const statusLine = stale ? live.message : STATUS_TEXT[live.status];
 
@@ -131,9 +142,9 @@ export function DesignEditor(props: EditorProps) {
           </div>
 
           <fieldset disabled={props.readOnly} className="space-y-4">
-            <SiteGroup units={units} card={props.card && applyCard ? { label: props.card.label, apply: applyCard } : null} />
-            <ArrayGroup units={units} />
-            <PostsGroup units={units} />
+            <SiteInputs units={units} card={cardOffer} />
+            <ArrayInputs units={units} />
+            <PostsInputs units={units} />
           </fieldset>
 
           {!props.readOnly ? (
