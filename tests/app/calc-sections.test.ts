@@ -52,3 +52,20 @@ describe("POST /api/calc?sections=", () => {
     expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(401);
   });
 });
+
+describe("the cheaper signed-in check of POST /api/calc", () => {
+  it("passes a member who passed the full check moments ago, and still refuses a cookie that never did", async () => {
+    await actAs("designer@demo.pierwise.test");
+    expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(200);
+    expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(200);
+    // A cookie sealed for a user id that is no member anywhere never passes (db/seeds: no such id).
+    const { sealData } = await import("iron-session");
+    const { sessionOptions } = await import("@/app/_lib/session");
+    const { cookies } = await import("next/headers");
+    const options = sessionOptions();
+    const seal = await sealData({ userId: "00000000-0000-4000-8000-00000000dead", organisationId: "00000000-0000-4000-8000-00000000beef", signedInAt: Date.now() }, { password: options.password, ttl: options.ttl });
+    (await cookies()).set(options.cookieName, seal);
+    expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(401);
+    expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(401);
+  });
+});

@@ -1,7 +1,7 @@
 import { apiRoute, readJson } from "@/app/_lib/api";
-import { requireUser } from "@/app/_lib/auth";
 import { pickSections, sectionsFrom } from "@/app/_lib/calc-sections";
 import { computeResult } from "@/app/_lib/designs";
+import { requireSignedInForCalculation } from "@/app/_lib/signed-in";
 import { designInputSchema } from "@/engine";
 
 export const dynamic = "force-dynamic";
@@ -12,7 +12,8 @@ export const dynamic = "force-dynamic";
  * (with the engine version and cautions). Bad input is a 422 naming each field, e.g. `site.windSpeedMph`.
  */
 export const POST = apiRoute(async (request) => {
-  await requireUser();
+  // A pure calculation reads no organisation data: the cheaper signed-in check (app/_lib/signed-in.ts).
+  await requireSignedInForCalculation();
   const sections = sectionsFrom(new URL(request.url));
   const input = designInputSchema.parse(await readJson(request));
   return Response.json({ result: pickSections(computeResult(input), sections) });
