@@ -1,9 +1,9 @@
-import { toMetric, fromMetric, type CustomaryUnit } from "@/engine";
+import { toMetric, fromMetric, type CustomaryUnit } from "@/engine/units";
 
 /**
  * Imperial/metric display at the edges. The engine and the saved revisions stay in US customary
  * units; these helpers convert only what is shown and what is typed, with the engine's factors
- * (engine/units.ts, from mathjs).
+ * (engine/units.ts: exact constants, checked against mathjs in tests).
  */
 export type UnitSystem = "imperial" | "metric";
 

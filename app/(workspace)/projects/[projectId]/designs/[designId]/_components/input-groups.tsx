@@ -2,7 +2,7 @@
 
 import { useFormContext, useWatch } from "react-hook-form";
 import type { UnitSystem } from "@/components/design/units";
-import { PIPE_SIZES } from "@/engine";
+import { PIPE_SIZES } from "@/engine/footing/pipe";
 import { CheckField, ListField, NumberField, SelectField } from "./editor-fields";
 
 /** The three input groups of the editor: Site, Array, Posts and footings. */
