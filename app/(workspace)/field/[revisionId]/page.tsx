@@ -82,7 +82,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} />
+      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} timeZone={ctx.timeZone} />
 
       <header className="flex items-start justify-between gap-4">
         <div>

@@ -80,7 +80,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </header>
-      <HoldBanner holds={standing.holds} canClear={isEngineer} />
+      <HoldBanner holds={standing.holds} canClear={isEngineer} timeZone={ctx.timeZone} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
