@@ -1,6 +1,6 @@
 import type { HoldRecord } from "@/db/queries/holds";
 import { ClearHoldForm, type ClearHoldAction } from "./clear-hold-form";
-import { shortDateTime } from "@/components/ui/dates";
+import { dateTimeInWords } from "@/components/ui/dates";
 
 /**
  * A design on hold, shown at the top of every screen of that design until an engineer clears it.
@@ -16,7 +16,7 @@ export function HoldBanner({ holds, clearAction, timeZone }: { holds: HoldRecord
         {holds.map((h) => (
           <li key={h.id} className="text-sm">
             <p className="font-semibold">{h.reason}</p>
-            <p className="text-xs">Raised by {h.raisedByName} on {shortDateTime(h.raisedAt, timeZone)}</p>
+            <p className="text-xs">Raised by {h.raisedByName} on {dateTimeInWords(h.raisedAt, timeZone)}</p>
             {clearAction ? <ClearHoldForm holdId={h.id} clearAction={clearAction} /> : null}
           </li>
         ))}

@@ -190,3 +190,8 @@ export async function recordDecision(
       : {}),
   });
 }
+
+/** Whether a decision that names this stored letter was committed (its file must then be kept). */
+export async function letterIsRecorded(letterFileKey: string): Promise<boolean> {
+  return Boolean(await db("reviews").where({ letter_file_key: letterFileKey }).first("id"));
+}

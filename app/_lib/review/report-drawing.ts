@@ -66,7 +66,7 @@ export function drawElevation(doc: PDFKit.PDFDocument, r: DesignResult, box: { x
     doc.fillColor("#1e3a8a").text(`Tilt ${Number(r.geometry.tiltDeg.toFixed(1))}°`, lo[0] + 8, lo[1] + 3, { width: 80 });
   }
   doc.fillColor("#44403c").text("Grade", g1[0] - 60, g1[1] - 12, { width: 56, align: "right" });
-  doc.text("Front (low edge)", g0[0], g0[1] + 20, { width: 100 });
+  doc.text("Front (low edge)", g0[0] + 4, oy + vh * k - 12, { width: 100 });
 
   // Scale bar: 5 ft (or 10 ft at small scales).
   const barFt = ftPerIn >= 10 ? 10 : 5;

@@ -5,6 +5,7 @@
 import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
 import type { Table } from "@/components/review/plain-table";
+import { userText } from "./report-text";
 
 export type { Table };
 
@@ -28,7 +29,7 @@ export function criteriaTable(ctx: RevisionContext): Table {
   if (!ctx.criteria) return { title: "Design criteria card", columns: ["Criterion", "Value", "Source", "Checked on"], rows: [], note: "No criteria card is applied to this project: the inputs below were entered by the designer." };
   const rows = Object.entries(ctx.criteria.values).map(([key, value]) => {
     const src = (ctx.criteria!.sources[key] ?? {}) as { source?: string; checkedOn?: string };
-    return [CRITERIA_LABELS[key] ?? key, String(value), src.source ?? "no source given", src.checkedOn ?? "—"];
+    return [CRITERIA_LABELS[key] ?? key, String(value), userText(src.source ?? "no source given"), src.checkedOn ?? "—"];
   });
   return { title: `Design criteria card: ${ctx.criteria.jurisdiction} (${ctx.criteria.state})`, columns: ["Criterion", "Value", "Source", "Checked on"], rows };
 }
@@ -83,7 +84,7 @@ export function checksTable(r: DesignResult): Table {
   return {
     title: `Footing checks: ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep, ${r.footing.post.size} in pipe post (controlled by ${r.footing.controllingCheck})`,
     columns: ["Check", "Demand", "Capacity", "Unit", "Ratio", "Result", "Source"],
-    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", c.source]),
+    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", userText(c.source)]),
   };
 }
 

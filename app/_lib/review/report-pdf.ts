@@ -6,7 +6,6 @@
  * and short link of the public approval check; an unapproved revision says NOT APPROVED across
  * every page.
  */
-import path from "node:path";
 import PDFDocument from "pdfkit";
 import QRCode from "qrcode";
 import { DEFER_TO_CODE, SITE_CAUTIONS } from "@/engine";
@@ -15,15 +14,13 @@ import type { RevisionContext } from "@/db/queries/reviews";
 import { checkOutcome, ratioText } from "@/components/review/check-outcome";
 import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { drawElevation } from "./report-drawing";
+import { reportFont } from "./report-fonts";
 import { methodSteps } from "./report-method";
 import { checksTable, concreteLines, fmt, governingLines, loadsTable, windTable, type Table } from "./report-model";
 import { inputGroups, userText } from "./report-text";
 import type { Standing } from "./standing";
 import { verifyUrl } from "./verify";
 
-// Inter 3.19 (npm package inter-ui, SIL OFL 1.1): the full character set as .woff, which pdfkit
-// embeds (it cannot embed .woff2; the @fontsource files are split into subsets without ≤).
-const FONT_DIR = path.join(process.cwd(), "node_modules", "inter-ui", "Inter (web)");
 const F = { regular: "Inter", bold: "Inter-SemiBold" };
 
 const MARGIN = 48;
@@ -43,8 +40,8 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
     bufferPages: true,
     info: { Title: `Calculation report: ${ctx.projectName}, ${ctx.designName}, revision ${ctx.number}`, Author: "Pierwise" },
   });
-  doc.registerFont(F.regular, path.join(FONT_DIR, "Inter-Regular.woff"));
-  doc.registerFont(F.bold, path.join(FONT_DIR, "Inter-SemiBold.woff"));
+  doc.registerFont(F.regular, reportFont("Inter-Regular"));
+  doc.registerFont(F.bold, reportFont("Inter-SemiBold"));
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<void>((resolve) => doc.on("end", () => resolve()));
@@ -193,7 +190,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   if (standing.reviews.length === 0) line("Not submitted for review.");
   for (const rv of standing.reviews) {
     const what = rv.decision === "approve" ? "approved" : rv.decision === "request_changes" ? "requested changes" : "not yet decided";
-    line(`Submitted ${dateInWords(rv.submittedAt, tz)} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${dateInWords(rv.decidedAt, tz)} by ${rv.engineerName}` : ""}.`);
+    line(`Submitted ${dateInWords(rv.submittedAt, tz)} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${dateInWords(rv.decidedAt, tz)} by ${rv.engineerName}` : ""}.`.replace(/\.\.$/, "."));
     for (const c of rv.comments) line(`Comment${c.fieldPath ? ` on ${fieldLabel(c.fieldPath)}` : ""}: ${c.body}`, { indent: 10 });
   }
   heading("Cautions");

@@ -1,8 +1,8 @@
 import "server-only";
 import { createDesignWithRevision, getDesign, type Design } from "@/db/queries/designs";
 import { getRevision } from "@/db/queries/revisions";
-import { designInputSchema, ENGINE_VERSION, type DesignResult } from "@/engine";
-import { requireUser, type CurrentUser } from "../auth";
+import { designInputSchema, ENGINE_VERSION } from "@/engine";
+import type { CurrentUser } from "../auth";
 import { startingInput } from "../design-defaults";
 import { assertCanWrite, cardFor, computeResult, designFor, projectFor, saveRevision as insertRevision, type DesignRevision } from "../designs";
 import { designCreateSchema, revisionCreateSchema } from "../schemas/project";
@@ -34,10 +34,4 @@ export async function saveRevision(user: CurrentUser, designId: string, body: Bo
   const fields = revisionCreateSchema.parse(await body());
   const saved = await insertRevision(user, design, fields);
   return (await getRevision(saved.id))! as DesignRevision;
-}
-
-/** Live results for the editor (nothing saved): any signed-in member. */
-export async function calculate(body: Body): Promise<DesignResult> {
-  await requireUser();
-  return computeResult(designInputSchema.parse(await body()));
 }

@@ -4,7 +4,7 @@ import type { CurrentUser } from "../auth";
 import { assertCanWrite, projectFor } from "../designs";
 import { ValidationError } from "../errors";
 import { deleteObject, putObject } from "../storage";
-import { displayName, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, objectKeys, photoThumbnail, sniffType } from "../uploads";
+import { acceptUpload, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, objectKeys, photoThumbnail } from "../uploads";
 
 const refuse = ValidationError.field;
 
@@ -22,9 +22,8 @@ export interface UploadRequest {
 export async function uploadProjectFile(user: CurrentUser, projectId: string, upload: UploadRequest) {
   const project = await projectFor(user, projectId);
   assertCanWrite(user);
-  const tooLarge = `File must be at most ${MAX_UPLOAD_LABEL}`;
   // Refuse an oversized body from its declared length before reading it (multipart adds a little).
-  if (upload.declaredBytes > MAX_UPLOAD_BYTES + 64 * 1024) throw refuse("file", tooLarge);
+  if (upload.declaredBytes > MAX_UPLOAD_BYTES + 64 * 1024) throw refuse("file", `File must be at most ${MAX_UPLOAD_LABEL}`);
   let form: FormData;
   try {
     form = await upload.form();
@@ -33,19 +32,17 @@ export async function uploadProjectFile(user: CurrentUser, projectId: string, up
   }
   const file = form.get("file");
   if (!(file instanceof File) || file.size === 0) throw refuse("file", "Choose a file to upload (JPEG, PNG, WebP or PDF)");
-  if (file.size > MAX_UPLOAD_BYTES) throw refuse("file", tooLarge);
   const description = String(form.get("description") ?? "").trim();
   if (description.length > 300) throw refuse("description", "Description must be at most 300 characters");
 
-  const bytes = new Uint8Array(await file.arrayBuffer());
-  const type = sniffType(bytes);
-  if (!type) throw refuse("file", "File must be a JPEG, PNG or WebP photo or a PDF; this file's content is none of those (its name does not count)");
+  // The one upload policy (app/_lib/uploads.ts): type by content against the allow-list, size per kind.
+  const { bytes, type, name } = await acceptUpload(file, "projectFile", "file");
   let thumbnail: Uint8Array | null = null;
   if (type.kind === "photo") {
     try {
       thumbnail = await photoThumbnail(bytes);
     } catch {
-      throw refuse("file", `This ${type.label} could not be read; it may be damaged. Export it again and upload the copy`);
+      throw refuse("file", `${name} could not be read as a ${type.label}; it may be damaged. Export it again and upload the copy`);
     }
   }
 
@@ -54,7 +51,7 @@ export async function uploadProjectFile(user: CurrentUser, projectId: string, up
   try {
     if (thumbnail) await putObject(keys.thumbnail, thumbnail, "image/webp");
     await insertProjectFile({
-      id: keys.fileId, projectId: project.id, organisationId: user.organisationId, kind: type.kind, originalName: displayName(file.name),
+      id: keys.fileId, projectId: project.id, organisationId: user.organisationId, kind: type.kind, originalName: name,
       contentType: type.contentType, sizeBytes: bytes.byteLength, objectKey: keys.original, thumbnailKey: thumbnail ? keys.thumbnail : null,
       description, uploadedBy: user.userId,
     });

@@ -1,10 +1,11 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import { assertRole, type CurrentUser } from "../auth";
 import { ValidationError } from "../errors";
 import { reviewSchema, submitSchema } from "../review/schemas";
 import { decideRevision, ownedRevision, submitRevision } from "../review/workflow";
+import { letterIsRecorded } from "@/db/queries/reviews";
 import { deleteObject, putObject } from "../storage";
+import { acceptUpload, revisionObjectKey } from "../uploads";
 import type { Body } from "./input";
 
 /** A designer sends a revision to one of the organisation's engineers (`{ engineerId }`); the engineer is e-mailed. */
@@ -14,8 +15,6 @@ export async function submitForReview(user: CurrentUser, revisionId: string, bod
   const { engineerId } = submitSchema.parse(await body());
   return submitRevision(user, revision, engineerId);
 }
-
-const LETTER_LIMIT_BYTES = 10 * 1024 * 1024;
 
 /**
  * An engineer decides a revision in review (`{ decision, comments }`), optionally attaching the
@@ -28,16 +27,17 @@ export async function decideReview(user: CurrentUser, revisionId: string, body: 
   let letterKey: string | null = null;
   if (letter && letter.size > 0) {
     if (decision.decision !== "approve") throw ValidationError.field("letter", "Attach the letter only when approving");
-    if (!/^(application\/pdf|image\/)/.test(letter.type) || letter.size > LETTER_LIMIT_BYTES) {
-      throw ValidationError.field("letter", "The signed letter must be a PDF or an image of at most 10 MB");
-    }
-    letterKey = `orgs/${user.organisationId}/revisions/${revisionId}/letter-${randomUUID()}`;
-    await putObject(letterKey, new Uint8Array(await letter.arrayBuffer()), letter.type);
+    // The one upload policy: a PDF or photo by content, at most 10 MB, never SVG or HTML.
+    const accepted = await acceptUpload(letter, "signedLetter", "letter");
+    letterKey = revisionObjectKey(user.organisationId, revisionId, "letter");
+    await putObject(letterKey, accepted.bytes, accepted.type.contentType);
   }
   try {
     return await decideRevision(user, revision, decision, letterKey);
   } catch (error) {
-    if (letterKey) await deleteObject(letterKey).catch(() => undefined);
+    // A letter stored for a decision that was never recorded is removed again; the letter of a
+    // recorded decision (a later step failed) is kept.
+    if (letterKey && !(await letterIsRecorded(letterKey))) await deleteObject(letterKey).catch(() => undefined);
     throw error;
   }
 }

@@ -26,4 +26,4 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
     form: () => request.formData(),
   });
   return Response.json({ file }, { status: 201 });
-});
+}, { body: "multipart" });
