@@ -7,12 +7,13 @@
  */
 import { concreteForHole } from "./concrete/concrete-for-hole";
 import { concreteOrder } from "./concrete/concrete-order";
+import { concreteSpecification } from "./concrete/concrete-spec";
 import { designContext } from "./design-context";
 import type { CheckId, FootingCheck } from "./footing/checks";
 import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
 import { smallestPipeFor } from "./footing/pipe";
 import { previewGeometry } from "./geometry/preview";
-import { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
+import { BEAM_SHARING_CONTINUOUS, BEAM_SHARING_TWO_POSTS, DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
 import { autoDiameter } from "./options/auto-diameter";
 import { diameterSweep } from "./options/diameter-sweep";
 import { tiltEnvelope } from "./options/tilt-envelope";
@@ -74,7 +75,8 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       surfaceAreaFt2: dims.surfaceAreaFt2, lowestEdgeFt: heights.lowestEdgeFt, highestEdgeFt: heights.highestEdgeFt,
       meanHeightFt: heights.meanHeightFt, hOverL: main.hOverL, minClearanceIn: heights.minClearanceIn, postTopFt: heights.postTopFt,
       spacingFt: layout.spacingFt, overhangFt: layout.overhangFt,
-      posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt })),
+      posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt, loadShare: p.share, reactionFactor: p.reactionFactor })),
+      postLoadSharing: main.posts.length > 2 ? BEAM_SHARING_CONTINUOUS : BEAM_SHARING_TWO_POSTS,
     },
     wind: { edition: input.site.edition, heightFt: heights.meanHeightFt, gustFactor: main.gustFactor, velocity: main.velocity, cases: windCaseRows(main), method: WIND_METHOD_NOTE },
     // Written out rather than spread (a spread is slow on this hot path); TypeScript insists every
@@ -92,11 +94,16 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
       suggestedPipeSize: smallestPipeFor(checkById(ev.checks, "postBending").demand, posts.yieldKsi),
     },
-    concrete: { perHole: hole, job },
+    concrete: {
+      perHole: hole, job,
+      specification: concreteSpecification({ strengthPsi: posts.concreteStrengthPsi, maxAggregateIn: posts.maxAggregateIn, slumpIn: posts.slumpIn, frostDepthIn: input.site.frostDepthIn }),
+    },
     options: { diameterSweep: sweep, tiltEnvelope: envelope },
     field: {
       posts: main.posts.map((p) => ({ id: p.id, heightAboveGradeIn: p.heightAboveGradeFt * 12, embedmentIn: ev.depthIn, postLengthIn: p.heightAboveGradeFt * 12 + ev.depthIn })),
       note: "Post length = height above its own grade + embedment, post standing on the hole bottom. Set posts level with a laser and use the cut list to trim or shim.",
+      // Each tilt setting the rack will be used at (posts set for the steepest), lowest edge above grade.
+      tiltSettings: ctx.states.map((s) => ({ tiltDeg: s.tiltDeg, lowestEdgeIn: s.heights.lowestEdgeFt * 12, minClearanceIn: s.heights.minClearanceIn, highestEdgeIn: s.heights.highestEdgeFt * 12 })),
     },
     warnings: collectWarnings(input, ctx.states, ev, extra),
     geometryPreview: previewGeometry(drawState, {

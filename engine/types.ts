@@ -2,6 +2,7 @@
  * The shape of a whole design result. Every length, force and pressure names its unit.
  */
 import type { ConcreteOrder } from "./concrete/concrete-order";
+import type { ConcreteSpecification } from "./concrete/concrete-spec";
 import type { HoleConcrete } from "./concrete/concrete-for-hole";
 import type { DepthCheckId, FootingCheck, Governing } from "./footing/checks";
 import type { PipeMoment } from "./footing/pipe";
@@ -62,7 +63,13 @@ export interface DesignResult {
     postTopFt: number;
     spacingFt: number;
     overhangFt: number;
-    posts: { id: string; xFt: number; yFt: number; tributaryWidthFt: number; gradeFt: number; heightAboveGradeFt: number }[];
+    /**
+     * Each post: `loadShare` is its fraction of every array load (continuous-beam reaction);
+     * `reactionFactor` = loadShare ÷ (tributary width ÷ array width), 1 for two posts.
+     */
+    posts: { id: string; xFt: number; yFt: number; tributaryWidthFt: number; gradeFt: number; heightAboveGradeFt: number; loadShare: number; reactionFactor: number }[];
+    /** How the posts share the load, in words. */
+    postLoadSharing: string;
   };
   wind: { edition: "7-16" | "7-22"; heightFt: number; gustFactor: number; velocity: VelocityPressure; cases: WindCaseResult[]; method: string };
   snow: SnowLoad & { totalLb: number };
@@ -84,9 +91,18 @@ export interface DesignResult {
     /** Smallest standard pipe whose allowable moment covers the bending demand (null: none listed does). */
     suggestedPipeSize: PipeMoment["size"] | null;
   };
-  concrete: { perHole: HoleConcrete; job: ConcreteOrder };
+  concrete: { perHole: HoleConcrete; job: ConcreteOrder; specification: ConcreteSpecification };
   options: { diameterSweep: SweepRow[]; tiltEnvelope: { rows: TiltEnvelopeRow[]; governingTiltDeg: number } | null };
-  field: { posts: { id: string; heightAboveGradeIn: number; embedmentIn: number; postLengthIn: number }[]; note: string };
+  field: {
+    posts: { id: string; heightAboveGradeIn: number; embedmentIn: number; postLengthIn: number }[];
+    note: string;
+    /**
+     * Every tilt setting used (the design tilt and the rack's seasonal settings, ascending): its lowest
+     * and highest edge above grade under the array centre and the smallest gap to the ground anywhere
+     * under it (in). The posts are set so the steepest setting keeps the clearance asked for.
+     */
+    tiltSettings: { tiltDeg: number; lowestEdgeIn: number; minClearanceIn: number; highestEdgeIn: number }[];
+  };
   warnings: DesignWarning[];
   /** The 3D preview's drawing data (ft). */
   geometryPreview: PreviewGeometry;

@@ -1,5 +1,5 @@
 import { db } from "../client";
-import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { likePattern, listPage, type ListPage, type ListQuery } from "./list-page";
 import { isUuid } from "../ids";
 
 /** A customer site. */
@@ -40,19 +40,33 @@ export async function getProject(id: string): Promise<Project | undefined> {
   return db("projects").where({ id }).first(columns);
 }
 
-export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "\"designCount\"", updatedAt: "p.updated_at" } as const;
+export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
 
-/** One page of the organisation's projects with their criteria card and design count. */
+/**
+ * One page of the organisation's projects with their criteria card and design count. The design
+ * count is a column kept by a trigger (so sorting by it reads no designs); `q` goes through the
+ * trigram index over name, address and state, and matches a criteria card through its id.
+ */
 export async function listProjects(organisationId: string, query: ListQuery): Promise<ListPage<ProjectRow>> {
   const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").where("p.organisation_id", organisationId);
+  // Cards whose jurisdiction matches, looked up first (a few rows, trigram index): projects then
+  // match by card id through their own index, which the planner can OR with the trigram index.
+  const q = (query.q ?? "").trim().slice(0, 200);
+  const cardIds: string[] = q
+    ? await db("criteria_cards").where("organisation_id", organisationId).whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [likePattern(q)]).pluck("id")
+    : [];
   const page = await listPage<ProjectRow>(base, query, {
     sortable: PROJECT_SORTS,
     defaultSort: "updatedAt",
     defaultDir: "desc",
+    notNull: ["name", "state", "designCount", "updatedAt"],
     search: ["p.name", "p.address", "p.state", "c.jurisdiction"],
+    // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
+    match: (w, pattern) =>
+      w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
+        .orWhereIn("p.criteria_card_id", cardIds),
     select: (qb) =>
-      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt",
-        db.raw("(select count(*)::int from designs d where d.project_id = p.id) as \"designCount\"")),
+      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "p.design_count as designCount"),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
 }

@@ -5,7 +5,12 @@ import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
 import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
+import { checkOutcome } from "@/app/_lib/review/check-outcome";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
 import { fmt } from "@/app/_lib/review/report-model";
+import { verifyUrl } from "@/app/_lib/review/verify";
+import { CheckSummary } from "@/components/review/check-summary";
+import { holdsOfRevision } from "@/db/queries/holds";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { HoldBanner } from "@/components/review/hold-banner";
@@ -13,6 +18,7 @@ import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { SITE_CAUTIONS } from "@/engine/notices";
 import { asBuiltEntries } from "@/db/queries/as-built";
+import { pourFromAsBuilt } from "@/app/_lib/review/as-dug";
 import { AsBuiltForm } from "./_components/as-built-form";
 import { AsBuiltLog } from "./_components/as-built-log";
 import { Checklist } from "./_components/checklist";
@@ -54,16 +60,23 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
   }
 
   const r = ctx.result;
-  const url = `${env.appUrl}/field/${ctx.id}`;
+  const a = standing.approval;
+  // The QR code and short link open the public approval check, so an inspector can confirm on the
+  // spot that this is the approved, current revision.
+  const url = a?.verifyCode ? verifyUrl(a.verifyCode) : `${env.appUrl}/field/${ctx.id}`;
   const qr = await QRCode.toString(url, { type: "svg", margin: 0, errorCorrectionLevel: "M" });
-  const entries = await asBuiltEntries(ctx.id);
+  const [entries, holds] = await Promise.all([asBuiltEntries(ctx.id), holdsOfRevision(ctx.id)]);
+  const cleared = holds.filter((h) => h.clearedAt);
   const x0 = r.geometry.posts[0]?.xFt ?? 0;
   const positions = new Map(r.geometry.posts.map((p) => [p.id, (p.xFt - x0) * 12]));
-  const a = standing.approval;
   const tilts = ctx.result.input.array.tiltSettingsDeg;
   // Revisions saved before the azimuth input carry none: say nothing rather than guess.
   const azimuthDeg = ctx.result.input.array.azimuthDeg as number | undefined;
   const big = "text-2xl font-bold tabular-nums";
+  // Results saved before these were added carry none: show nothing rather than guess.
+  const tiltSettings = (r.field.tiltSettings ?? []) as NonNullable<typeof r.field.tiltSettings>;
+  const spec = r.concrete.specification as typeof r.concrete.specification | undefined;
+  const asDug = pourFromAsBuilt(r, entries);
 
   return (
     <div className="field-spec mx-auto max-w-3xl space-y-4">
@@ -74,20 +87,35 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} />
+      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} timeZone={ctx.timeZone} />
 
       <header className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
           <h1 className="text-2xl font-semibold">{ctx.designName}</h1>
           <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">Revision {ctx.number} <StatusBadge status={standing.status} onHold={standing.holds.length > 0} /></p>
-          {a ? <p className="text-sm text-slate-700">Approved for construction by {a.engineerName}, licence {a.licenceNumber} ({a.licenceState}), {a.decidedAt?.toISOString().slice(0, 10)}</p> : null}
+          {a ? <p className="text-sm text-slate-700">Approved for construction by {a.engineerName}, licence {a.licenceNumber} ({a.licenceState}, valid through {calendarDateInWords(a.licenceExpiresOn)}), {dateInWords(a.decidedAt, ctx.timeZone)}</p> : null}
         </div>
-        <figure className="hidden w-24 shrink-0 text-center print:block">
+        <figure className="w-24 shrink-0 text-center">
           <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: qr }} />
-          <figcaption className="mt-1 text-[9px] leading-tight">Scan to open this spec online</figcaption>
+          <figcaption className="mt-1 text-[10px] leading-tight">Inspector: scan to check this approval</figcaption>
         </figure>
       </header>
+      {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
+      <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
+      {cleared.length ? (
+        <section aria-labelledby="cleared-h" className="rounded-lg border-2 border-sky-600 bg-sky-50 p-4 text-sky-950">
+          <h2 id="cleared-h" className="text-lg font-semibold">Engineer&apos;s instructions after a hold</h2>
+          <ul className="mt-2 space-y-2 text-base">
+            {cleared.map((h) => (
+              <li key={h.id}>
+                <p className="font-semibold">{h.clearNote}</p>
+                <p className="text-sm">Hold cleared by {h.clearedByName} on {dateTimeInWords(h.clearedAt, ctx.timeZone)}. The hold was: {h.reason}</p>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       <div className="no-print flex flex-wrap gap-2">
         <PrintButton />
         <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md border border-slate-300 bg-white px-4 py-3 text-base">Calculation report (PDF)</a>
@@ -99,9 +127,23 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <div><p className="text-sm text-slate-600">Diameter</p><p className={big}>{quarterIn(r.footing.diameterIn)}</p></div>
           <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p><p className="text-sm">{ftIn(r.footing.depthIn)}</p></div>
           <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{r.footing.post.size} in std. pipe, {r.field.posts.length} posts</p></div>
-          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
+          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 && tiltSettings.length === 0 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
           <div className="col-span-2"><p className="text-sm text-slate-600">Lowest panel edge above grade (hold at least)</p><p className={big}>{quarterIn(r.geometry.minClearanceIn)}</p></div>
         </div>
+        {tiltSettings.length > 1 ? (
+          <div className="mt-3">
+            <h3 className="text-base font-semibold">Tilt settings the rack is used at</h3>
+            <p className="text-sm text-slate-600">Posts are set for the steepest setting ({fmt(tiltSettings[tiltSettings.length - 1].tiltDeg)}°); the footing is sized for the worst of them.</p>
+            <table className="mt-1 w-full text-base">
+              <thead><tr className="text-left text-sm text-slate-600"><th className="py-1 pr-3 font-medium">Setting</th><th className="py-1 pr-3 font-medium">Lowest edge above grade</th><th className="py-1 font-medium">Closest to the ground</th></tr></thead>
+              <tbody>
+                {tiltSettings.map((t) => (
+                  <tr key={t.tiltDeg} className="border-t border-slate-200"><td className="py-1 pr-3 font-semibold tabular-nums">{fmt(t.tiltDeg)}°</td><td className="py-1 pr-3 tabular-nums">{ftIn(t.lowestEdgeIn)}</td><td className="py-1 tabular-nums">{ftIn(t.minClearanceIn)}</td></tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : null}
       </section>
 
       <section aria-labelledby="posts-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -129,6 +171,39 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (the holes take {fmt(r.concrete.job.totalYd3, 2)} yd³; with {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste {fmt(r.concrete.job.withWasteYd3, 2)} yd³, ordered up to the next ¼ yd³)</p>
         <p className="text-base">or <strong>{r.concrete.job.bags80Lb} bags of 80 lb</strong> premix ({r.concrete.job.bags60Lb} × 60 lb)</p>
         <p className="text-sm text-slate-600">About {fmt(r.concrete.perHole.volumeFt3, 1)} ft³ and {r.concrete.perHole.bags80Lb} × 80 lb bags per hole.</p>
+        {asDug ? (
+          <div className="mt-3 rounded-md border-2 border-accent-700 p-3">
+            <h3 className="text-base font-semibold">For the holes as dug</h3>
+            <p className="text-base"><strong className="text-xl">{fmt(asDug.concrete.orderYd3, 2)} yd³</strong> ready-mix (designed: {fmt(r.concrete.job.orderYd3, 2)} yd³), or <strong>{asDug.concrete.bags80Lb} bags of 80 lb</strong> (designed: {r.concrete.job.bags80Lb})</p>
+            <p className="text-sm text-slate-600">The holes take {fmt(asDug.concrete.totalYd3, 2)} yd³ less the posts; with {fmt(asDug.concrete.wasteAllowancePct, 0)}% waste {fmt(asDug.concrete.withWasteYd3, 2)} yd³. {asDug.loggedPostIds.length} of {r.field.posts.length} holes from the as-built log; the rest at the designed size.</p>
+            <table className="mt-1 w-full text-sm">
+              <thead><tr className="text-left text-slate-600"><th className="py-1 pr-2 font-medium">Hole</th><th className="py-1 pr-2 font-medium">As dug</th><th className="py-1 pr-2 font-medium">Concrete</th><th className="py-1 font-medium">Weight</th></tr></thead>
+              <tbody>
+                {asDug.concrete.holes.map((h) => (
+                  <tr key={h.postId} className="border-t border-slate-200">
+                    <td className="py-1 pr-2 font-semibold">{h.postId}</td>
+                    <td className="py-1 pr-2 tabular-nums">{quarterIn(h.diameterIn)} × {quarterIn(h.depthIn)}{asDug.loggedPostIds.includes(h.postId) ? "" : " (designed)"}</td>
+                    <td className="py-1 pr-2 tabular-nums">{fmt(h.concreteFt3, 1)} ft³ ({h.bags80Lb} × 80 lb)</td>
+                    <td className="py-1 tabular-nums">{fmt(h.weightLb, 0)} lb</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : null}
+        {spec ? (
+          <div className="mt-3">
+            <h3 className="text-base font-semibold">Mix to order</h3>
+            <p className="text-base">Strength <strong>{spec.compressiveStrengthPsi.toLocaleString("en-US")} psi</strong> at 28 days · largest stone <strong>{spec.maxAggregateIn} in</strong> · slump <strong>{spec.slumpIn} in</strong></p>
+            <p className="text-sm text-slate-600">Never weaker than {spec.codeMinimumPsi.toLocaleString("en-US")} psi, the code minimum for concrete around posts.</p>
+            {spec.coldWeather.length ? (
+              <div className="mt-2 rounded-md border border-sky-300 bg-sky-50 p-2 text-sky-950">
+                <p className="font-semibold">Cold site: the ground here freezes</p>
+                <ul className="list-disc pl-5 text-sm">{spec.coldWeather.map((c) => <li key={c}>{c}</li>)}</ul>
+              </div>
+            ) : null}
+          </div>
+        ) : null}
       </section>
 
       <section aria-labelledby="check-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -149,7 +224,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         {hasRole(user, "installer", "engineer") ? (
           <div className="mt-2"><AsBuiltForm revisionId={ctx.id} postIds={r.field.posts.map((p) => p.id)} diameterIn={r.footing.diameterIn} depthIn={r.footing.depthIn} /></div>
         ) : <p className="mt-1 text-sm text-slate-600">The crew (installer role) records each hole here.</p>}
-        <AsBuiltLog entries={entries} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
+        <AsBuiltLog entries={entries} holds={holds} timeZone={ctx.timeZone} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
       </section>
     </div>
   );
