@@ -2,7 +2,7 @@ import { cache } from "react";
 import { findActiveMember, type MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
-import { getSession } from "./session";
+import { readSession } from "./session";
 import { sessionIsOpen } from "@/db/queries/sessions";
 
 /**
@@ -18,7 +18,7 @@ export { AccessError };
 
 /** The signed-in, active member for this request, or null. Cached per request. */
 export const currentUser = cache(async (): Promise<CurrentUser | null> => {
-  const session = await getSession();
+  const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
   // The cookie is only a pointer: its server-side record must still be open (sign-out ends it).
   if (!session.sessionId || !(await sessionIsOpen(session.sessionId, session.userId))) return null;

@@ -1,11 +1,12 @@
 import type { HoldRecord } from "@/db/queries/holds";
-import { ClearHoldForm } from "./clear-hold-form";
+import { ClearHoldForm, type ClearHoldAction } from "./clear-hold-form";
+import { dateTimeInWords } from "@/components/ui/dates";
 
 /**
  * A design on hold, shown at the top of every screen of that design until an engineer clears it.
- * Engineers get the clear form beside each hold.
+ * Engineers get the clear form beside each hold: the page passes `clearAction` only to them.
  */
-export function HoldBanner({ holds, canClear = false }: { holds: HoldRecord[]; canClear?: boolean }) {
+export function HoldBanner({ holds, clearAction, timeZone }: { holds: HoldRecord[]; clearAction?: ClearHoldAction; timeZone?: string }) {
   if (holds.length === 0) return null;
   return (
     <section role="alert" aria-label="Design on hold" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
@@ -15,8 +16,8 @@ export function HoldBanner({ holds, canClear = false }: { holds: HoldRecord[]; c
         {holds.map((h) => (
           <li key={h.id} className="text-sm">
             <p className="font-semibold">{h.reason}</p>
-            <p className="text-xs">Raised by {h.raisedByName} on {h.raisedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
-            {canClear ? <ClearHoldForm holdId={h.id} /> : null}
+            <p className="text-xs">Raised by {h.raisedByName} on {dateTimeInWords(h.raisedAt, timeZone)}</p>
+            {clearAction ? <ClearHoldForm holdId={h.id} clearAction={clearAction} /> : null}
           </li>
         ))}
       </ul>

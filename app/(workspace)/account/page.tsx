@@ -2,13 +2,13 @@ import type { Metadata } from "next";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { listLicences } from "@/db/queries/licences";
-import { getSession } from "@/app/_lib/session";
+import { readSession } from "@/app/_lib/session";
 import { activeSessions } from "@/db/queries/sessions";
-import { dateTimeInWords } from "@/app/_lib/review/dates";
 import { signOutEverywhereAction } from "./actions";
 import { ROLE_LABELS } from "@/db/roles";
 import { LicenceForm } from "./_components/licence-form";
 import { RemoveLicenceButton } from "./_components/remove-licence-button";
+import { dateTimeInWords, todayInZone } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Your account" };
 
@@ -16,9 +16,9 @@ export default async function AccountPage() {
   const user = await forPage(() => requireUser(), "/account");
   const isEngineer = hasRole(user, "engineer");
   const licences = isEngineer ? await listLicences(user.userId) : [];
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayInZone(user.timeZone);
   const sessions = await activeSessions(user.userId);
-  const thisSession = (await getSession()).sessionId;
+  const thisSession = (await readSession()).sessionId;
   return (
     <>
       <h1 className="text-2xl font-semibold">Your account</h1>
@@ -74,8 +74,8 @@ export default async function AccountPage() {
           {sessions.map((s) => (
             <li key={s.id} className="flex flex-wrap gap-x-4 gap-y-1 px-4 py-3 text-sm">
               <span className="font-medium">{s.id === thisSession ? "This device" : browserName(s.userAgent)}</span>
-              <span className="text-slate-600">signed in {dateTimeInWords(s.createdAt)}</span>
-              <span className="text-slate-600">last active {dateTimeInWords(s.lastSeenAt)}</span>
+              <span className="text-slate-600">signed in {dateTimeInWords(s.createdAt, user.timeZone)}</span>
+              <span className="text-slate-600">last active {dateTimeInWords(s.lastSeenAt, user.timeZone)}</span>
               {s.ip ? <span className="text-slate-600">from {s.ip}</span> : null}
             </li>
           ))}

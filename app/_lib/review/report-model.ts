@@ -4,13 +4,10 @@
  */
 import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
+import type { Table } from "@/components/review/plain-table";
+import { userText } from "./report-text";
 
-export interface Table {
-  title: string;
-  columns: string[];
-  rows: string[][];
-  note?: string;
-}
+export type { Table };
 
 export function fmt(n: number | null | undefined, digits = 1): string {
   if (n === null || n === undefined || !Number.isFinite(n)) return "—";
@@ -32,7 +29,7 @@ export function criteriaTable(ctx: RevisionContext): Table {
   if (!ctx.criteria) return { title: "Design criteria card", columns: ["Criterion", "Value", "Source", "Checked on"], rows: [], note: "No criteria card is applied to this project: the inputs below were entered by the designer." };
   const rows = Object.entries(ctx.criteria.values).map(([key, value]) => {
     const src = (ctx.criteria!.sources[key] ?? {}) as { source?: string; checkedOn?: string };
-    return [CRITERIA_LABELS[key] ?? key, String(value), src.source ?? "no source given", src.checkedOn ?? "—"];
+    return [CRITERIA_LABELS[key] ?? key, String(value), userText(src.source ?? "no source given"), src.checkedOn ?? "—"];
   });
   return { title: `Design criteria card: ${ctx.criteria.jurisdiction} (${ctx.criteria.state})`, columns: ["Criterion", "Value", "Source", "Checked on"], rows };
 }
@@ -87,7 +84,7 @@ export function checksTable(r: DesignResult): Table {
   return {
     title: `Footing checks: ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep, ${r.footing.post.size} in pipe post (controlled by ${r.footing.controllingCheck})`,
     columns: ["Check", "Demand", "Capacity", "Unit", "Ratio", "Result", "Source"],
-    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", c.source]),
+    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", userText(c.source)]),
   };
 }
 
@@ -97,5 +94,7 @@ export function concreteLines(r: DesignResult): string[] {
     `Per hole: ${fmt(r.concrete.perHole.volumeFt3, 2)} ft³ (${fmt(r.concrete.perHole.volumeYd3, 2)} yd³), about ${fmt(r.concrete.perHole.weightLb, 0)} lb`,
     `Job: ${j.holes} holes, ${fmt(j.totalYd3, 2)} yd³; with ${fmt(j.wasteAllowancePct, 0)}% waste ${fmt(j.withWasteYd3, 2)} yd³`,
     `Order ${fmt(j.orderYd3, 2)} yd³ ready-mix, or ${j.bags80Lb} × 80 lb / ${j.bags60Lb} × 60 lb / ${j.bags40Lb} × 40 lb premix bags`,
+    // The mix (results saved before it was added have none).
+    ...(r.concrete.specification ? [`Mix: ${r.concrete.specification.summary} (not below ${fmt(r.concrete.specification.codeMinimumPsi, 0)} psi, ${r.concrete.specification.codeMinimumSource})`, ...r.concrete.specification.coldWeather] : []),
   ];
 }
