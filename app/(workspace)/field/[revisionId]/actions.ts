@@ -3,7 +3,8 @@
 import { revalidatePath } from "next/cache";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionState } from "@/app/_lib/action-errors";
+import { actionState, forAction } from "@/app/_lib/action-errors";
+import { tickChecklistItem } from "@/app/_lib/services/field-checklist";
 import { asBuiltSchema, recordAsBuilt } from "@/app/_lib/review/as-built";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
@@ -35,4 +36,16 @@ export async function recordAsBuiltAction(_prev: ActionState, form: FormData): P
   } catch (error) {
     return actionState(error, values);
   }
+}
+
+/** A tick of the crew's field checklist, saved at once (the box keeps its state across reloads and devices). */
+export async function tickChecklistAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const revisionId = String(form.get("revisionId") ?? "");
+  const outcome = await forAction(async () => {
+    const user = await requireUser();
+    await tickChecklistItem(user, revisionId, { itemKey: form.get("itemKey"), ticked: form.get("ticked") === "true" });
+  }, undefined, `/field/${revisionId}`);
+  if (!outcome.ok) return outcome.state;
+  revalidatePath(`/field/${revisionId}`);
+  return { ok: true, message: "Saved." };
 }
