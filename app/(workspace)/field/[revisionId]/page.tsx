@@ -5,8 +5,8 @@ import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
 import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
-import { checkOutcome } from "@/app/_lib/review/check-outcome";
-import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
+import { checkOutcome } from "@/components/review/check-outcome";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { fmt } from "@/app/_lib/review/report-model";
 import { verifyUrl } from "@/app/_lib/review/verify";
 import { CheckSummary } from "@/components/review/check-summary";
@@ -14,6 +14,7 @@ import { holdsOfRevision } from "@/db/queries/holds";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { HoldBanner } from "@/components/review/hold-banner";
+import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { SITE_CAUTIONS } from "@/engine/notices";
@@ -87,7 +88,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} timeZone={ctx.timeZone} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
       <header className="flex items-start justify-between gap-4">
         <div>
