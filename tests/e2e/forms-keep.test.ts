@@ -8,7 +8,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DESKTOP, PHONE, baseUrl, launch, signedInContext } from "../support/browser";
-import { DESIGNER, INSTALLER, freshApproved } from "../support/review-fixtures";
+import { DESIGNER, INSTALLER, freshApproved, makeDesign } from "../support/review-fixtures";
 
 // A valid 1×1 PNG, so the upload policy (sniffed by content) would accept it.
 const PNG_1PX = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
@@ -96,5 +96,32 @@ describe("field checklist", () => {
     // The caution box sits right under the safety box; its first line must start on the first screen too.
     const caution = page.getByText(/preliminary/i).first();
     expect((await caution.boundingBox())!.y).toBeLessThan(PHONE.height);
+  });
+});
+
+describe("design editor edits", () => {
+  it("Enter never saves a revision, and a reload brings unsaved inputs back with a notice", async () => {
+    const { designId, projectId } = await makeDesign({ name: "Draft keeping array" });
+    const page = await as(DESIGNER);
+    await page.goto(`${baseUrl()}/projects/${projectId}/designs/${designId}`);
+    const wind = page.getByLabel("Basic wind speed");
+    await wind.waitFor();
+    await wind.fill("131");
+    await wind.press("Enter");
+    await page.getByLabel("What changed").press("Enter");
+    // Give a stray submit time to reach the server: none may arrive.
+    await page.waitForTimeout(1_000);
+    expect(await db("revisions").where({ design_id: designId }).count<{ count: string }[]>("id as count")).toEqual([{ count: "1" }]);
+
+    // Leaving with unsaved edits asks first (the browser's own prompt).
+    let asked = false;
+    page.once("dialog", async (dialog) => {
+      asked = dialog.type() === "beforeunload";
+      await dialog.accept();
+    });
+    await page.reload();
+    expect(asked).toBe(true);
+    await page.getByText("Your unsaved inputs from this browser were brought back.").waitFor();
+    expect(await page.getByLabel("Basic wind speed").inputValue()).toBe("131");
   });
 });
