@@ -90,6 +90,12 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
       ) : null}
       <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
+      {/* Safety and the preliminary-sizing caution come first, before the job details and any number: above the fold on a phone and on printed page 1. */}
+      <Caution />
+      <section aria-labelledby="safety-h" className="safety-box rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
+        <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+      </section>
       <header className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
@@ -103,12 +109,6 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         </figure>
       </header>
       {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
-      {/* Safety and the preliminary-sizing caution come before any number: above the fold on a phone and on printed page 1. */}
-      <section aria-labelledby="safety-h" className="safety-box rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
-        <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
-      </section>
-      <Caution />
       <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
       {cleared.length ? (
         <section aria-labelledby="cleared-h" className="rounded-lg border-2 border-sky-600 bg-sky-50 p-4 text-sky-950">
