@@ -7,7 +7,7 @@
  *
  * @example concreteSpecification({ strengthPsi: 4000, maxAggregateIn: 0.75, slumpIn: 4, frostDepthIn: 36 }).coldSite // true
  */
-import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 
 export const CODE_MINIMUM_STRENGTH_PSI = 2000;
 export const CODE_MINIMUM_SOURCE = "IBC §1807.3.3 backfill: concrete of at least 2,000 psi";
@@ -33,7 +33,7 @@ export interface ConcreteSpecification {
 }
 
 export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: number; slumpIn: number; frostDepthIn: number }): ConcreteSpecification {
-  requireRange("posts.concreteStrengthPsi", a.strengthPsi, CODE_MINIMUM_STRENGTH_PSI, 10000, "Concrete strength", "psi");
+  requireInput("posts.concreteStrengthPsi", a.strengthPsi, "psi");
   const coldSite = a.frostDepthIn > 0;
   return {
     compressiveStrengthPsi: a.strengthPsi,
