@@ -32,6 +32,13 @@ export interface ConcreteSpecification {
   summary: string;
 }
 
+/** 4000 → "4,000" (toLocaleString is slow on this per-design path). */
+function thousands(n: number): string {
+  const [whole, frac] = String(n).split(".");
+  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  return frac ? `${grouped}.${frac}` : grouped;
+}
+
 export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: number; slumpIn: number; frostDepthIn: number }): ConcreteSpecification {
   requireInput("posts.concreteStrengthPsi", a.strengthPsi, "psi");
   const coldSite = a.frostDepthIn > 0;
@@ -43,6 +50,6 @@ export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: 
     slumpIn: a.slumpIn,
     coldSite,
     coldWeather: coldSite ? COLD_WEATHER_GUIDANCE : [],
-    summary: `f'c ${a.strengthPsi.toLocaleString("en-US")} psi at 28 days, aggregate ${a.maxAggregateIn} in maximum, slump ${a.slumpIn} in`,
+    summary: `f'c ${thousands(a.strengthPsi)} psi at 28 days, aggregate ${a.maxAggregateIn} in maximum, slump ${a.slumpIn} in`,
   };
 }
