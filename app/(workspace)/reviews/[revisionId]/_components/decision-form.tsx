@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState, useState } from "react";
-import { ratioText, type CheckLine } from "@/app/_lib/review/check-outcome";
+import { ratioText, type CheckLine } from "@/components/review/check-outcome";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
 import { decideReviewAction } from "../actions";
