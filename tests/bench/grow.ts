@@ -104,13 +104,16 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
              md5('hb' || u) || md5('gb' || u), 'draft', 'Generated revision ' || (u + 1), o.designer, now() - interval '1 day' + u * interval '1 second'
       FROM ${units} JOIN bench.orgs o ON o.n = 0 CROSS JOIN bench.template t JOIN bench.results x ON x.depth = u % 48`,
     `INSERT INTO reviews (id, revision_id, organisation_id, engineer_id, submitted_by, submitted_at, decision, decided_by, decided_at,
-                          engineer_name, licence_number, licence_state, licence_expires_on)
+                          engineer_name, licence_number, licence_state, licence_expires_on, verify_code, facts_snapshot)
       SELECT md5('v' || u || '-' || k || '-' || j)::uuid, md5('r' || u || '-' || k || '-' || j || '-' || (CASE WHEN j = 0 THEN 5 ELSE 10 END))::uuid,
              o.id, o.engineer, o.designer, now() - (u * 22 + k) * interval '7 minutes' + interval '2 minutes',
              (CASE j WHEN 0 THEN 'approve' WHEN 1 THEN 'request_changes' END)::review_decision,
              CASE WHEN j < 2 THEN o.engineer END, CASE WHEN j < 2 THEN now() - (u * 22 + k) * interval '7 minutes' + interval '4 minutes' END,
              CASE WHEN j < 2 THEN 'Generated Engineer, P.E.' END, CASE WHEN j = 0 THEN 'PE-BENCH' END, CASE WHEN j = 0 THEN 'CO' END,
-             CASE WHEN j = 0 THEN date '2030-12-31' END
+             CASE WHEN j = 0 THEN date '2030-12-31' END,
+             -- an approval carries its verify code and pinned facts (migration 20261202700000)
+             CASE WHEN j = 0 THEN md5('code' || u || '-' || k) END,
+             CASE WHEN j = 0 THEN jsonb_build_object('projectName', 'Generated project', 'projectAddress', '', 'projectState', 'CO', 'criteria', null) END
       FROM ${units} CROSS JOIN generate_series(0, 21) k CROSS JOIN generate_series(0, 2) j ${org}`,
     `INSERT INTO review_comments (review_id, field_path, body, author_id)
       SELECT md5('v' || u || '-' || k || '-1')::uuid, 'site.windSpeedMph', 'Confirm the wind speed against the county table.', o.engineer
