@@ -46,8 +46,12 @@ let stopping = false;
 let lockHeld = false;
 let startedCluster = false;
 
-async function shutdown(code: number): Promise<never> {
-  if (!stopping) {
+async function shutdown(code: number): Promise<void> {
+  // A repeated Ctrl-C must not cut the stop short and leave PostgreSQL running and the lock behind.
+  // (package.json runs this with `node --import tsx`, not the tsx command: that one relays Ctrl-C to
+  // its child and SIGKILLs it when the child is slow to acknowledge, as on a busy machine.)
+  if (stopping) return;
+  {
     stopping = true;
     console.log("\npierwise: stopping…");
     server?.kill("SIGTERM");
@@ -112,6 +116,7 @@ async function main(): Promise<void> {
     mailWebPort: ports.mailWeb,
     s3Port: ports.s3,
     s3Directory: path.join(dataDir, "files"),
+    mailDirectory: path.join(dataDir, "mail"),
     bucket: "pierwise-uploads",
   });
 

@@ -1,6 +1,6 @@
 /**
  * Pierwise calculation engine: preliminary wind-load and concrete-footing sizing for ground-mounted
- * fixed-tilt solar arrays. Pure TypeScript (zod and mathjs only). See engine/README.md.
+ * fixed-tilt solar arrays. Pure TypeScript (zod only; unit factors are constants). See engine/README.md.
  */
 export { ENGINE_VERSION } from "./version";
 export { sizeDesign, sizeParsedDesign } from "./size-design";
@@ -37,3 +37,6 @@ export { previewGeometry, type PreviewGeometry, type Point3Ft } from "./geometry
 export { levelingCuts, type LevelingCuts } from "./field/leveling-cuts";
 export { UNIT_TABLE, toMetric, fromMetric, isCustomaryUnit, type CustomaryUnit } from "./units";
 export { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE } from "./notices";
+export { concreteFromHolesAsDug, type ConcreteAsDug, type HoleAsDug, type HoleAsDugConcrete } from "./concrete/as-dug";
+export { concreteSpecification, CODE_MINIMUM_STRENGTH_PSI, COLD_WEATHER_GUIDANCE, type ConcreteSpecification } from "./concrete/concrete-spec";
+export { continuousBeamShares } from "./geometry/continuous-beam";

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { messageName } from "./field-labels";
+import { arrayWidthFt } from "./geometry/array-dimensions";
 import { choice, flag, num } from "./schema-helpers";
 import { PIPE_SIZES } from "./footing/pipe";
 
@@ -115,13 +116,18 @@ export const postsSchema = z.object({
   subtractPostDisplacement: flag(messageName("posts.subtractPostDisplacement")).default(false),
   depthIncrementIn: num(messageName("posts.depthIncrementIn"), 1, 12, "in").default(6),
   sideFrictionPsf: num(messageName("posts.sideFrictionPsf"), 0, 2000, "psf").optional(),
+  // Added later: each has a default so revisions saved before them still parse.
+  bearingPressure: choice(messageName("posts.bearingPressure"), ["gross", "net"]).default("gross"),
+  soilUnitWeightPcf: num(messageName("posts.soilUnitWeightPcf"), 60, 150, "pcf").default(110),
+  concreteStrengthPsi: num(messageName("posts.concreteStrengthPsi"), 2000, 10000, "psi").default(4000),
+  maxAggregateIn: num(messageName("posts.maxAggregateIn"), 0.25, 1.5, "in").default(0.75),
+  slumpIn: num(messageName("posts.slumpIn"), 1, 9, "in").default(4),
 }, { error: "Posts must be given: number of posts, pipe size and hole" });
 
 export const designInputSchema = z
   .object({ site: siteSchema, array: arraySchema, posts: postsSchema, projectName: z.string().max(120).optional() }, { error: "A design must be an object with site, array and posts sections" })
   .superRefine((v, ctx) => {
-    const alongWidthIn = v.array.orientation === "portrait" ? v.array.moduleWidthIn : v.array.moduleLengthIn;
-    const widthFt = (v.array.columns * alongWidthIn + (v.array.columns - 1) * v.array.gapIn) / 12;
+    const widthFt = arrayWidthFt(v.array);
     if (v.posts.spacingFt === undefined) {
       const min = Math.max(2, Math.ceil(widthFt / 40 - 1e-9));
       const max = Math.max(2, Math.floor(widthFt + 1e-9));

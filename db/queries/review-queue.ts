@@ -19,37 +19,41 @@ export interface QueueRow {
   onHold: boolean;
 }
 
-function queue(organisationId: string) {
-  return db("reviews as v")
+/**
+ * A queue's reviews are picked first (filter, order and limit on reviews alone, served by one of
+ * the queue indexes), and only those rows are joined to their revision, design, project and people.
+ */
+function queue(organisationId: string, pick: (reviews: Knex.QueryBuilder) => Knex.QueryBuilder, order: { column: string; order: "asc" | "desc" }) {
+  const picked = pick(db("reviews").where("organisation_id", organisationId).select("*"));
+  return db
+    .from(picked.as("v"))
     .join("revisions as r", "r.id", "v.revision_id")
     .join("designs as d", "d.id", "r.design_id")
     .join("projects as p", "p.id", "d.project_id")
     .join("users as e", "e.id", "v.engineer_id")
     .join("users as s", "s.id", "v.submitted_by")
-    .where("v.organisation_id", organisationId)
     .select(
       "r.id as revisionId", "r.number", "r.status", "d.id as designId", "d.name as designName", "p.name as projectName", "p.state as projectState",
       "e.name as engineerName", "s.name as submittedByName", "v.submitted_at as submittedAt", "v.decided_at as decidedAt",
       db.raw(`exists (select 1 from revisions n where n.design_id = r.design_id and n.status = 'approved' and n.number > r.number) as superseded`),
       db.raw(`exists (select 1 from design_holds h where h.design_id = r.design_id and h.cleared_at is null) as "onHold"`),
     )
-    .orderBy("v.submitted_at", "desc")
-    .limit(100);
+    .orderBy(`v.${order.column}`, order.order);
 }
 
 /** Revisions waiting for this engineer's decision, oldest submission first. */
 export async function waitingFor(organisationId: string, engineerId: string): Promise<QueueRow[]> {
-  return queue(organisationId).where("v.engineer_id", engineerId).whereNull("v.decision").clearOrder().orderBy("v.submitted_at", "asc");
+  return queue(organisationId, (v) => v.where("engineer_id", engineerId).whereNull("decision").orderBy("submitted_at", "asc").limit(100), { column: "submitted_at", order: "asc" });
 }
 
 /** What this person submitted, newest first (each submission of each revision). */
 export async function submittedBy(organisationId: string, userId: string): Promise<QueueRow[]> {
-  return queue(organisationId).where("v.submitted_by", userId);
+  return queue(organisationId, (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(100), { column: "submitted_at", order: "desc" });
 }
 
 /** Recent decisions in the organisation. */
 export async function recentlyDecided(organisationId: string): Promise<QueueRow[]> {
-  return queue(organisationId).whereNotNull("v.decision").clearOrder().orderBy("v.decided_at", "desc").limit(30);
+  return queue(organisationId, (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(30), { column: "decided_at", order: "desc" });
 }
 
 export interface FieldSpecRow {
@@ -84,7 +88,8 @@ function fieldSpecColumns(qb: Knex.QueryBuilder, superseded: boolean) {
     .join("projects as p", "p.id", "d.project_id")
     .select(
       "r.id as revisionId", "r.number", "d.name as designName", "p.name as projectName", "p.address as projectAddress",
-      db.raw(`(select max(v.decided_at) from reviews v where v.revision_id = r.id and v.decision = 'approve') as "approvedAt"`),
+      // A current spec's approval time is on its design; a superseded one's is its approval record's.
+      superseded ? "a.decided_at as approvedAt" : "d.approved_at as approvedAt",
       db.raw(`${superseded ? "true" : "false"} as superseded`),
       db.raw(`exists (select 1 from design_holds h where h.design_id = r.design_id and h.cleared_at is null) as "onHold"`),
       "r.footing_depth_in as depthIn", "r.footing_diameter_in as diameterIn", "r.field_post_count as posts",

@@ -3,7 +3,7 @@ import type { DesignResult } from "@/engine";
 import { db } from "../client";
 import { isUuid } from "../ids";
 
-/** Revision statuses as stored; "superseded" is derived (see `isSuperseded`). */
+/** Revision statuses as stored; "superseded" is derived (see `displayStatus` in app/_lib/review/standing.ts). */
 export type RevisionStatus = "draft" | "in_review" | "approved" | "changes_requested";
 
 /** A revision with what review, field spec and report need around it: design, project, criteria. */
@@ -189,4 +189,9 @@ export async function recordDecision(
       ? { overrides: JSON.stringify(d.approval.overrides), facts_snapshot: JSON.stringify(d.approval.facts), verify_code: d.approval.verifyCode }
       : {}),
   });
+}
+
+/** Whether a decision that names this stored letter was committed (its file must then be kept). */
+export async function letterIsRecorded(letterFileKey: string): Promise<boolean> {
+  return Boolean(await db("reviews").where({ letter_file_key: letterFileKey }).first("id"));
 }

@@ -3,6 +3,7 @@
  * presumed soil, puts the design on hold and e-mails the approving engineer and the designer;
  * only an engineer clears the hold. Photos go to the S3 stand-in.
  */
+import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import { recordAsBuiltAction } from "@/app/(workspace)/field/[revisionId]/actions";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
@@ -41,7 +42,9 @@ async function record(email: string, fields: Record<string, string>, photos: Fil
 describe("as-built entries and holds", () => {
   it("records a hole as specified, with a photo in object storage, and raises no hold", async () => {
     const d = await approved();
-    const photo = new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3])], "hole-p1.jpg", { type: "image/jpeg" });
+    // A real JPEG: the upload policy reads the image header, so a bare signature is refused.
+    const jpeg = new Uint8Array(await sharp({ create: { width: 40, height: 30, channels: 3, background: { r: 100, g: 100, b: 100 } } }).jpeg().toBuffer());
+    const photo = new File([jpeg], "hole-p1.jpg", { type: "image/jpeg" });
     const out = await record(INSTALLER, { revisionId: d.revisionId, postId: "P1", measuredDiameterIn: String(d.diameterIn), measuredDepthIn: String(d.depthIn + 2), groundFound: "as_expected", notes: "Clean hole." }, [photo]);
     expect(out).toMatchObject({ kind: "value", value: { ok: true } });
     const entry = await db("as_built_entries").where({ revision_id: d.revisionId }).first();
@@ -49,7 +52,7 @@ describe("as-built entries and holds", () => {
     expect(entry.photo_keys).toHaveLength(1);
     const stored = await getObject(entry.photo_keys[0]);
     expect(stored.contentType).toBe("image/jpeg");
-    expect([...stored.body]).toEqual([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3]);
+    expect(stored.body).toEqual(jpeg);
     expect(await openHolds(d.designId)).toEqual([]);
   });
 

@@ -20,8 +20,7 @@ async function approve(revisionId: string): Promise<void> {
   await db("revisions").where({ id: revisionId }).update({ status: "in_review" });
   const [review] = await db("reviews").insert({ revision_id: revisionId, organisation_id: DEMO_ORG_ID, engineer_id: engineer, submitted_by: await userId(DESIGNER) }).returning("id");
   await db("reviews").where({ id: review.id }).update({ decision: "approve", decided_by: engineer, decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.", licence_number: "PE-000000-DEMO", licence_state: "CO",
-    // An approval carries its verify code and pinned facts (migration 20261202700000).
-    verify_code: `list-${review.id}`, facts_snapshot: JSON.stringify({ projectName: "List test", projectAddress: "", projectState: "CO", criteria: null }) });
+    verify_code: `list-test-${review.id}`, facts_snapshot: JSON.stringify({ projectName: "x", projectAddress: "", projectState: "CO", criteria: null }) });
   await db("revisions").where({ id: revisionId }).update({ status: "approved" });
 }
 

@@ -39,7 +39,7 @@ async function pending(database: string): Promise<string[]> {
 }
 
 afterAll(async () => {
-  if (cluster) for (const name of [copy, source]) psql(cluster, `DROP DATABASE IF EXISTS ${name}`);
+  if (cluster) for (const name of [copy, source]) psql(cluster, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
 });
 
 describe("migrating a grown database", () => {

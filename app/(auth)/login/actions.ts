@@ -3,14 +3,9 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
+import { safeNext } from "@/app/_lib/safe-next";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
-
-/** Only same-site paths are followed after sign-in. */
-function safeNext(value: FormDataEntryValue | null): string {
-  const next = typeof value === "string" ? value : "";
-  return next.startsWith("/") && !next.startsWith("//") ? next : "/projects";
-}
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const parsed = signInSchema.safeParse({ email: form.get("email"), password: form.get("password") });

@@ -5,6 +5,7 @@ import { listLicences } from "@/db/queries/licences";
 import { ROLE_LABELS } from "@/db/roles";
 import { LicenceForm } from "./_components/licence-form";
 import { RemoveLicenceButton } from "./_components/remove-licence-button";
+import { todayInZone } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Your account" };
 
@@ -12,7 +13,7 @@ export default async function AccountPage() {
   const user = await forPage(() => requireUser(), "/account");
   const isEngineer = hasRole(user, "engineer");
   const licences = isEngineer ? await listLicences(user.userId) : [];
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayInZone(user.timeZone);
   return (
     <>
       <h1 className="text-2xl font-semibold">Your account</h1>

@@ -24,7 +24,7 @@ export default async function ProjectsPage({ searchParams }: { searchParams: Pro
         ) : null}
       </div>
       <div className="mt-4">
-        <ProjectsTable page={page} />
+        <ProjectsTable page={page} timeZone={user.timeZone} />
       </div>
       <Caution compact className="mt-6" />
     </>

@@ -6,7 +6,7 @@ import type { DesignResult } from "@/engine";
 import { recordAudit } from "@/db/queries/audit";
 import { clearFailures, recordFailure, secondsUntilAllowed } from "@/db/queries/sign-in-throttle";
 import { findUserByEmail } from "@/db/queries/users";
-import { checkOutcome, ratioText, type CheckOverride } from "./check-outcome";
+import { checkOutcome, ratioText, type CheckOverride } from "@/components/review/check-outcome";
 
 const invalid = (path: (string | number)[], message: string) => ValidationError.field(path.join("."), message);
 

@@ -1,19 +1,18 @@
-import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { ConflictError, ValidationError } from "@/app/_lib/errors";
-import { assertRole, type CurrentUser } from "@/app/_lib/auth";
+import type { CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { deleteObject, putObject } from "@/app/_lib/storage";
+import { acceptUpload, revisionObjectKey, UPLOAD_KINDS } from "@/app/_lib/uploads";
 import type { DesignResult } from "@/engine";
 import { db } from "@/db/client";
 import { GROUND_FOUND, insertAsBuilt } from "@/db/queries/as-built";
 import { recordAudit } from "@/db/queries/audit";
 import { insertHold } from "@/db/queries/holds";
 import { userEmailAndName } from "@/db/queries/review-people";
-import { reviewsOfRevision } from "@/db/queries/reviews";
+import { reviewsOfRevision, type RevisionContext } from "@/db/queries/reviews";
 import { GROUND_FOUND_LABELS } from "./ground-labels";
-import { ownedRevision } from "./workflow";
 
 
 const number = (label: string, min: number, max: number) =>
@@ -31,7 +30,7 @@ export const asBuiltSchema = z.object({
 });
 export type AsBuiltInput = z.output<typeof asBuiltSchema>;
 
-export const PHOTO_LIMITS = { count: 6, bytes: 10 * 1024 * 1024 };
+export const PHOTO_LIMITS = { count: 6, bytes: UPLOAD_KINDS.asBuiltPhoto.maxBytes };
 
 /**
  * Why this hole stops the job, if it does: shallower or narrower than specified, or ground that
@@ -50,27 +49,27 @@ export function holdReasons(result: DesignResult, entry: AsBuiltInput): string[]
 }
 
 /**
- * Records a hole of an approved revision, with photos. When the hole contradicts the spec, the
- * design goes on hold and the approving engineer and the designer are e-mailed.
+ * The steps of recording a hole after the access checks (app/_lib/services/field.ts): a hole of an
+ * approved revision, with photos. When the hole contradicts the spec, the design goes on hold and
+ * the approving engineer and the designer are e-mailed.
  */
-export async function recordAsBuilt(user: CurrentUser, revisionId: string, input: AsBuiltInput, photos: File[]): Promise<{ entryId: string; holdId: string | null; reasons: string[] }> {
-  const revision = await ownedRevision(user, revisionId);
-  assertRole(user, "installer", "engineer");
+export async function recordAsBuilt(user: CurrentUser, revision: RevisionContext, input: AsBuiltInput, photos: File[]): Promise<{ entryId: string; holdId: string | null; reasons: string[] }> {
+  const revisionId = revision.id;
   if (revision.status !== "approved") throw new ConflictError("As-built entries are recorded only against an approved revision.");
   if (!revision.result.field.posts.some((p) => p.id === input.postId)) {
     throw ValidationError.field("postId", `Post must be one of ${revision.result.field.posts.map((p) => p.id).join(", ")}`);
   }
   const real = photos.filter((p) => p.size > 0);
   if (real.length > PHOTO_LIMITS.count) throw ValidationError.field("photos", `Attach at most ${PHOTO_LIMITS.count} photos per hole`);
-  for (const p of real) {
-    if (!p.type.startsWith("image/")) throw ValidationError.field("photos", `${p.name} is not a photo: attach JPEG, PNG or other image files`);
-    if (p.size > PHOTO_LIMITS.bytes) throw ValidationError.field("photos", `${p.name} is over 10 MB: attach photos up to 10 MB each`);
-  }
+  // The one upload policy: sniffed by content, size and pixel limits, refusals naming the file.
+  const accepted = [];
+  for (const p of real) accepted.push(await acceptUpload(p, "asBuiltPhoto", "photos"));
   const keys: string[] = [];
+  let committed = false;
   try {
-    for (const p of real) {
-      const key = `orgs/${user.organisationId}/revisions/${revisionId}/as-built/${randomUUID()}`;
-      await putObject(key, new Uint8Array(await p.arrayBuffer()), p.type);
+    for (const p of accepted) {
+      const key = revisionObjectKey(user.organisationId, revisionId, "as-built");
+      await putObject(key, p.bytes, p.type.contentType);
       keys.push(key);
     }
     const reasons = holdReasons(revision.result, input);
@@ -81,12 +80,13 @@ export async function recordAsBuilt(user: CurrentUser, revisionId: string, input
         : null;
       return { entryId, holdId };
     });
+    committed = true;
     await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: out.holdId ? "design-held" : "as-built-recorded", subject: revisionId, detail: { postId: input.postId } });
     if (out.holdId) await mailHold(revisionId, revision.designName, revision.projectName, user.name, reasons);
     return { ...out, reasons };
   } catch (error) {
-    // A failed save leaves no orphaned photos behind.
-    await Promise.allSettled(keys.map((k) => deleteObject(k)));
+    // Photos whose entry was never saved are removed; photos of a saved entry are never touched.
+    if (!committed) await Promise.allSettled(keys.map((k) => deleteObject(k)));
     throw error;
   }
 }

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { requireRole } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { auditCursorText, listAuditEvents, parseAuditCursor, type AuditRow } from "@/db/queries/audit";
+import { shortDateTime } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Audit log" };
 
@@ -64,7 +65,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             <div>{row.actorName ?? <span className="text-slate-500">not signed in</span>}{row.subject ? <span className="break-all text-slate-600"> · {row.subject}</span> : null}</div>
             {describe(row) ? <div className="text-slate-500">{describe(row)}</div> : null}
             <div className="text-xs text-slate-500">
-              <time dateTime={row.at.toISOString()}>{row.at.toISOString().slice(0, 19).replace("T", " ")} UTC</time> · from <span className="font-mono">{row.ip ?? "unknown"}</span>
+              <time dateTime={row.at.toISOString()}>{shortDateTime(row.at, user.timeZone)}</time> · from <span className="font-mono">{row.ip ?? "unknown"}</span>
             </div>
           </li>
         ))}
@@ -84,7 +85,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
           <tbody className="divide-y divide-slate-200">
             {rows.map((row) => (
               <tr key={row.id} className="align-top">
-                <td className="whitespace-nowrap px-3 py-2"><time dateTime={row.at.toISOString()}>{row.at.toISOString().slice(0, 19).replace("T", " ")}</time></td>
+                <td className="whitespace-nowrap px-3 py-2"><time dateTime={row.at.toISOString()}>{shortDateTime(row.at, user.timeZone)}</time></td>
                 <td className="px-3 py-2">{row.actorName ?? <span className="text-slate-500">not signed in</span>}</td>
                 <td className={`px-3 py-2 ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{ACTION_LABELS[row.action] ?? row.action}</td>
                 <td className="px-3 py-2">

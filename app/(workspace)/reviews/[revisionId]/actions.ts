@@ -1,57 +1,27 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { randomUUID } from "node:crypto";
-import { z } from "zod";
-import { assertRole, requireUser } from "@/app/_lib/auth";
+import { forAction } from "@/app/_lib/action-errors";
+import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionState } from "@/app/_lib/action-errors";
-import { clearHold, clearHoldSchema } from "@/app/_lib/review/holds";
-import { reviewSchema } from "@/app/_lib/review/schemas";
-import { decideRevision, ownedRevision, submitRevision } from "@/app/_lib/review/workflow";
-import { putObject } from "@/app/_lib/storage";
+import { clearHold } from "@/app/_lib/services/field";
+import { decideReview, submitForReview } from "@/app/_lib/services/review";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { getHold } from "@/db/queries/holds";
-import { assertOwned } from "@/app/_lib/auth";
 
 const text = (form: FormData, name: string) => String(form.get(name) ?? "");
 
 /** The designer sends this revision to the engineer chosen in the form. */
 export async function submitForReviewAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const revisionId = text(form, "revisionId");
-  const values = typedValues(form);
-  const user = await forPage(async () => {
-    const user = await requireUser();
-    await ownedRevision(user, revisionId);
-    assertRole(user, "designer");
-    return user;
-  });
-  try {
-    await submitRevision(user, revisionId, z.string().uuid({ error: "Choose the reviewing engineer" }).parse(text(form, "engineerId")));
-  } catch (error) {
-    const state = actionState(error, values);
-    if (state.fieldErrors?.["form"]) state.fieldErrors.engineerId = state.fieldErrors.form;
-    return state;
-  }
+  const user = await forPage(() => requireUser());
+  const submitted = await forAction(() => submitForReview(user, revisionId, () => ({ engineerId: text(form, "engineerId") })), typedValues(form));
+  if (!submitted.ok) return submitted.state;
   revalidatePath(`/reviews/${revisionId}`);
   return { ok: true, message: "Submitted for review: the engineer has been e-mailed." };
 }
 
-const LETTER_LIMIT_BYTES = 10 * 1024 * 1024;
-
-/**
- * The engineer's decision. Comments come as comment.N.body / comment.N.fieldPath pairs; a signed
- * letter (PDF or image) may be attached to an approval.
- */
-export async function decideReviewAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const revisionId = text(form, "revisionId");
-  const values = typedValues(form);
-  const user = await forPage(async () => {
-    const user = await requireUser();
-    await ownedRevision(user, revisionId);
-    assertRole(user, "engineer");
-    return user;
-  });
+/** Comments come as comment.N.body / comment.N.fieldPath pairs; blank ones are skipped. */
+function decisionFrom(form: FormData) {
   const comments: { fieldPath: string | null; body: string }[] = [];
   for (let i = 0; i < 50; i++) {
     const body = text(form, `comment.${i}.body`).trim();
@@ -61,45 +31,26 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
   const overrides: { checkId: string; reason: string }[] = [];
   for (let i = 0; i < 20 && form.has(`override.${i}.checkId`); i++) overrides.push({ checkId: text(form, `override.${i}.checkId`), reason: text(form, `override.${i}.reason`) });
   const approving = text(form, "decision") === "approve";
-  const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] });
-  if (!parsed.success) return actionState(parsed.error, values);
+  return { decision: text(form, "decision"), comments, password: text(form, "password"), overrides: approving ? overrides : [] };
+}
+
+/** The engineer's decision; a signed letter (PDF or image) may be attached to an approval. */
+export async function decideReviewAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const revisionId = text(form, "revisionId");
+  const user = await forPage(() => requireUser());
   const letter = form.get("letter");
-  let letterKey: string | null = null;
-  try {
-    if (letter instanceof File && letter.size > 0) {
-      if (parsed.data.decision !== "approve") return { message: "A signed letter goes with an approval; remove it to request changes.", fieldErrors: { letter: ["Attach the letter only when approving"] }, values };
-      if (!/^(application\/pdf|image\/)/.test(letter.type) || letter.size > LETTER_LIMIT_BYTES) {
-        return { message: "Check the highlighted fields.", fieldErrors: { letter: ["The signed letter must be a PDF or an image of at most 10 MB"] }, values };
-      }
-      letterKey = `orgs/${user.organisationId}/revisions/${revisionId}/letter-${randomUUID()}`;
-      await putObject(letterKey, new Uint8Array(await letter.arrayBuffer()), letter.type);
-    }
-    const { status } = await decideRevision(user, revisionId, parsed.data, letterKey);
-    revalidatePath(`/reviews/${revisionId}`);
-    return { ok: true, message: status === "approved" ? "Approved: the revision is pinned and the designer has been e-mailed." : "Changes requested: the designer has been e-mailed." };
-  } catch (error) {
-    return actionState(error, values);
-  }
+  const decided = await forAction(() => decideReview(user, revisionId, () => decisionFrom(form), letter instanceof File ? letter : null), typedValues(form));
+  if (!decided.ok) return decided.state;
+  revalidatePath(`/reviews/${revisionId}`);
+  return { ok: true, message: decided.value.status === "approved" ? "Approved: the revision is pinned and the designer has been e-mailed." : "Changes requested: the designer has been e-mailed." };
 }
 
 /** An engineer clears a hold, saying how it was resolved. */
 export async function clearHoldAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const holdId = text(form, "holdId");
-  const values = typedValues(form);
-  const user = await forPage(async () => {
-    const user = await requireUser();
-    assertOwned(user, await getHold(holdId), "That hold");
-    assertRole(user, "engineer");
-    return user;
-  });
-  const parsed = clearHoldSchema.safeParse({ note: text(form, "note"), confirm: form.get("confirm") === "yes" });
-  if (!parsed.success) return actionState(parsed.error, values);
-  let told: string[];
-  try {
-    ({ told } = await clearHold(user, holdId, parsed.data.note));
-  } catch (error) {
-    return actionState(error, values);
-  }
+  const user = await forPage(() => requireUser());
+  const cleared = await forAction(() => clearHold(user, text(form, "holdId"), () => ({ note: text(form, "note"), confirm: form.get("confirm") === "yes" })), typedValues(form));
+  if (!cleared.ok) return cleared.state;
+  const { told } = cleared.value;
   revalidatePath("/reviews");
   return { ok: true, message: `Hold cleared. ${told.length ? `E-mailed your note to ${told.join(", ")}.` : "Nobody else was on this revision to e-mail."} The note shows on the field spec and in the as-built log.` };
 }

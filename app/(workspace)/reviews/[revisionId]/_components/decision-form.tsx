@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState, useEffect, useState } from "react";
-import { ratioText, type CheckLine } from "@/app/_lib/review/check-outcome";
+import { ratioText, type CheckLine } from "@/components/review/check-outcome";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
 import { decideReviewAction } from "../actions";
@@ -96,7 +96,7 @@ function DecisionForm({ revisionId, inputs, failing, licenceNote, state, action 
       </fieldset>
       <div className="space-y-1">
         <label htmlFor="letter" className="block text-sm font-medium">Signed letter (optional, with an approval; PDF or image up to 10 MB)</label>
-        <input id="letter" name="letter" type="file" accept="application/pdf,image/*" className="block text-sm" aria-describedby={err("letter") ? "letter-error" : undefined} />
+        <input id="letter" name="letter" type="file" accept="application/pdf,image/jpeg,image/png,image/webp" className="block text-sm" aria-describedby={err("letter") ? "letter-error" : undefined} />
         {err("letter") ? <p id="letter-error" className="text-sm text-red-700">{err("letter")!.join(" ")}</p> : null}
       </div>
       {approving ? (
