@@ -98,6 +98,8 @@ const MATRIX: MatrixRow[] = [
       return { args: formArgs({ state: "NM" }) };
     },
   },
+  // Hardening: every signed-in person may end all of their own sessions; signed out goes to sign-in.
+  { file: "app/(workspace)/account/actions.ts", name: "signOutEverywhereAction", expect: everyone(SIGN_IN), setup: async () => ({ args: [] }) },
 
   // ── projects, criteria cards, designs, revisions, uploads (issue 5) ─────────────────────────────
   { file: "app/api/calc/route.ts", name: "POST", expect: MEMBERS, setup: async () => ({ body: defaultDesignInput }) },
