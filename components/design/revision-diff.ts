@@ -12,6 +12,8 @@ export interface DiffRow {
   path: string;
   label: string;
   unit?: UnitKind;
+  /** A utilisation (demand ÷ capacity): shown with two decimals, over 1.0 marked as failing. */
+  ratio?: boolean;
   from: DiffValue;
   to: DiffValue;
 }
@@ -49,9 +51,9 @@ export function resultFigures(r: DesignResult): DiffRow[] {
   const rows: DiffRow[] = [
     row("footing.depthFt", "Footing depth", r.footing.depthFt, "ft"),
     row("footing.diameterIn", "Hole diameter", r.footing.diameterIn, "in"),
-    row("footing.controllingCheck", "Check that sets the depth", r.footing.controllingCheck),
+    row("footing.controllingCheck", "Check that sets the depth", r.footing.checks.find((c) => c.id === r.footing.controllingCheck)?.title ?? r.footing.controllingCheck),
     row("footing.pass", "All footing checks pass", r.footing.pass),
-    ...r.footing.checks.map((c) => row(`footing.checks.${c.id}.ratio`, `Utilisation: ${c.title}`, round(c.ratio, 2))),
+    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${c.title}`, round(c.ratio, 2)), ratio: true })),
     row("governingLoads.shear", "Governing shear at grade", r.governingLoads.shear.valueLb ?? null, "lb"),
     row("governingLoads.moment", "Governing moment at grade", r.governingLoads.moment.valueLbFt ?? null, "lbFt"),
     row("governingLoads.uplift", "Governing uplift", r.governingLoads.uplift?.valueLb ?? null, "lb"),
@@ -62,7 +64,8 @@ export function resultFigures(r: DesignResult): DiffRow[] {
     row("concrete.job.orderYd3", "Concrete to order", r.concrete.job.orderYd3, "yd3"),
     row("concrete.job.bags80Lb", "80-lb bags for the job", r.concrete.job.bags80Lb),
     row("footing.suggestedPipeSize", "Smallest pipe that carries the moment", r.footing.suggestedPipeSize),
-    row("warnings", "Warnings", r.warnings.map((w) => w.code).sort().join(", ") || "none"),
+    // The warnings' words, never their codes (CHECK_OVER_CAPACITY_BEARING is for the engine).
+    row("warnings", "Warnings", r.warnings.map((w) => w.message).sort().join(" ") || "none"),
     row("engineVersion", "Engine version", r.engineVersion),
   ];
   return rows;

@@ -22,6 +22,11 @@ export interface DesignRow {
   diameterIn: number | null;
   pass: boolean | null;
   updatedAt: string;
+  /** The newest approved revision (designs.approved_revision_id, kept by a trigger), shown beside a newer draft. */
+  approvedRevisionId: string | null;
+  approvedNumber: number | null;
+  /** The approved revision's standing: on hold while a hold on the design is open. */
+  approvedState: "approved" | "on_hold" | "superseded" | null;
 }
 
 export async function getDesign(id: string): Promise<Design | undefined> {
@@ -36,6 +41,7 @@ export async function listDesigns(projectId: string, query: ListQuery = {}): Pro
   const base = db("designs as d")
     .joinRaw(`left join lateral (select r.number, r.status, r.note, r.created_at, r.footing_depth_in, r.footing_diameter_in, r.footing_pass
       from revisions r where r.design_id = d.id order by r.number desc limit 1) lr on true`)
+    .leftJoin("revisions as ar", "ar.id", "d.approved_revision_id")
     .where("d.project_id", projectId);
   const page = await listPage<DesignRow & { updatedAt: Date }>(base, query, {
     sortable: DESIGN_SORTS,
@@ -46,7 +52,12 @@ export async function listDesigns(projectId: string, query: ListQuery = {}): Pro
     select: (qb) =>
       qb.select("d.id", "d.name", "lr.number as latestNumber", "lr.status",
         db.raw("coalesce(lr.created_at, d.created_at) as \"updatedAt\""),
-        "lr.footing_depth_in as depthIn", "lr.footing_diameter_in as diameterIn", "lr.footing_pass as pass"),
+        "lr.footing_depth_in as depthIn", "lr.footing_diameter_in as diameterIn", "lr.footing_pass as pass",
+        "d.approved_revision_id as approvedRevisionId", "ar.number as approvedNumber",
+        db.raw(`case when ar.id is null then null
+          when exists (select 1 from revisions n where n.design_id = d.id and n.status = 'approved' and n.number > ar.number) then 'superseded'
+          when exists (select 1 from design_holds h where h.design_id = d.id and h.cleared_at is null) then 'on_hold'
+          else 'approved' end as "approvedState"`)),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
 }

@@ -5,11 +5,13 @@ import { forPage } from "@/app/_lib/page-access";
 import { checkOutcome } from "@/components/review/check-outcome";
 import { dateInWords } from "@/components/ui/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
-import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputRows, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
+import { checksTable, concreteLines, criteriaTable, fmt, governingLines, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { fieldLabel } from "@/components/design/fields";
-import { inputChanges } from "@/components/design/revision-diff";
+import { criteriaDifferences } from "@/components/design/criteria-differences";
+import { inputValueText } from "@/components/design/input-values";
+import { flatten as flatInputs, inputChanges } from "@/components/design/revision-diff";
 import { CheckSummary } from "@/components/review/check-summary";
 import { HoldBanner } from "@/components/review/hold-banner";
 import { clearHoldAction } from "./actions";
@@ -55,7 +57,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   const changes = previous ? inputChanges(previous.input as DesignInput, ctx.input as DesignInput) : [];
   const pinned = new Map<string, { body: string; when: Date }[]>();
   for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
-  const inputs = inputRows(ctx.input);
+  const inputs = Object.entries(flatInputs(ctx.input));
+  const offCard = criteriaDifferences(ctx.input, ctx.criteria?.values);
   const outcome = checkOutcome(r);
 
   return (
@@ -90,13 +93,13 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
             {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
               <ul className="mt-2 space-y-1 text-sm">
-                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span> <span className="text-slate-500">({c.path})</span>: {String(c.from)} → <strong>{String(c.to)}</strong></li>)}
+                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span>: {inputValueText(c.path, c.from)} → <strong>{inputValueText(c.path, c.to)}</strong></li>)}
               </ul>
             )}
             {previousComments.length ? (
               <div className="mt-3 text-sm">
                 <p className="font-medium">Comments made on revision {previous!.number}:</p>
-                <ul className="mt-1 space-y-1">{previousComments.map((c) => <li key={c.id} className="rounded bg-slate-50 p-2">{c.fieldPath ? <span className="mr-1 rounded bg-sky-100 px-1 text-xs text-sky-900">{c.fieldPath}</span> : null}{c.body}</li>)}</ul>
+                <ul className="mt-1 space-y-1">{previousComments.map((c) => <li key={c.id} className="rounded bg-slate-50 p-2">{c.fieldPath ? <span className="mr-1 rounded bg-sky-100 px-1 text-xs text-sky-900">{fieldLabel(c.fieldPath)}</span> : null}{c.body}</li>)}</ul>
               </div>
             ) : null}
           </section>
@@ -108,8 +111,9 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
               {inputs.map(([path, value]) => (
                 <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
-                  <dt className="text-slate-700">{fieldLabel(path)} <span className="text-xs text-slate-400">{path}</span></dt>
-                  <dd className="font-medium tabular-nums">{value}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
+                  <dt className="text-slate-700">{fieldLabel(path)}</dt>
+                  <dd className="font-medium tabular-nums">{inputValueText(path, value)}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
+                  {path in offCard ? <dd className="w-full rounded bg-orange-100 px-2 py-1 text-xs font-medium text-orange-950">Differs from the criteria card: card says {inputValueText(path, offCard[path])}</dd> : null}
                   {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
                 </div>
               ))}

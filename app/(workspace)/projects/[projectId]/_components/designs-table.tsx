@@ -14,6 +14,15 @@ export function DesignsTable({ page, projectId, timeZone }: { page: ServerPage<D
     col.accessor("name", { header: "Design", cell: (c) => <Link href={`/projects/${projectId}/designs/${c.row.original.id}`} className="font-medium text-accent-800 hover:underline">{c.getValue()}</Link> }),
     col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
     col.accessor("latestNumber", { header: "Revision", cell: (c) => (c.getValue() ? <span className="tabular-nums">Rev {c.getValue()}</span> : "—") }),
+    col.accessor("approvedNumber", {
+      header: "Approved",
+      enableSorting: false,
+      cell: (c) => {
+        const r = c.row.original;
+        if (!r.approvedRevisionId) return <span className="text-slate-600">None yet</span>;
+        return <span className="flex flex-wrap items-center gap-1 whitespace-nowrap"><Link href={`/reviews/${r.approvedRevisionId}`} className="tabular-nums text-accent-800 hover:underline">Rev {r.approvedNumber}</Link> <StatusBadge status={r.approvedState === "superseded" ? "superseded" : "approved"} onHold={r.approvedState === "on_hold"} /></span>;
+      },
+    }),
     col.accessor("depthIn", {
       header: "Footing",
       cell: (c) => {

@@ -4,7 +4,9 @@ import { AccessError, requireUser } from "@/app/_lib/auth";
 import { designFor, projectFor, revisionFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
 import { inputChanges, resultChanges, type DiffRow, type DiffValue } from "@/components/design/revision-diff";
+import { inputValueText } from "@/components/design/input-values";
 import { formatQuantity, type UnitSystem } from "@/components/design/units";
+import { ratioText } from "@/components/review/check-outcome";
 import { Caution } from "@/components/ui/caution";
 import { revisionNumbers } from "@/db/queries/revisions";
 import { shortDateTime } from "@/components/ui/dates";
@@ -12,14 +14,16 @@ import { shortDateTime } from "@/components/ui/dates";
 export const metadata: Metadata = { title: "Compare revisions" };
 type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
-function show(v: DiffValue, row: DiffRow, units: UnitSystem): string {
+function show(v: DiffValue, row: DiffRow, units: UnitSystem, inputs: boolean): React.ReactNode {
+  if (inputs) return inputValueText(row.path, v, units);
   if (v === null || v === undefined || v === "") return "—";
-  if (typeof v === "boolean") return v ? "yes" : "no";
+  if (typeof v === "boolean") return v ? "Yes" : "No";
+  if (typeof v === "number" && row.ratio) return v > 1 ? <span className="font-semibold text-red-700">{ratioText(v)} — fails</span> : ratioText(v);
   if (typeof v === "number" && row.unit) return formatQuantity(v, row.unit, units, { decimals: row.unit === "ft" ? 2 : undefined });
   return String(v);
 }
 
-function DiffTable({ rows, units, caption, empty }: { rows: DiffRow[]; units: UnitSystem; caption: string; empty: string }) {
+function DiffTable({ rows, units, caption, empty, inputs = false }: { rows: DiffRow[]; units: UnitSystem; caption: string; empty: string; inputs?: boolean }) {
   if (rows.length === 0) return <p className="text-sm text-slate-600">{empty}</p>;
   return (
     <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
@@ -30,8 +34,8 @@ function DiffTable({ rows, units, caption, empty }: { rows: DiffRow[]; units: Un
           {rows.map((r) => (
             <tr key={r.path}>
               <th scope="row" className="px-3 py-2 text-left font-medium text-slate-800">{r.label}</th>
-              <td className="px-3 py-2 tabular-nums text-slate-600 line-through decoration-slate-300">{show(r.from, r, units)}</td>
-              <td className="px-3 py-2 font-semibold tabular-nums text-slate-900">{show(r.to, r, units)}</td>
+              <td className="px-3 py-2 tabular-nums text-slate-600 line-through decoration-slate-300">{show(r.from, r, units, inputs)}</td>
+              <td className="px-3 py-2 font-semibold tabular-nums text-slate-900">{show(r.to, r, units, inputs)}</td>
             </tr>
           ))}
         </tbody>
@@ -93,7 +97,7 @@ export default async function DiffPage({ params, searchParams }: Props) {
 
       <section aria-labelledby="inputs-heading" className="mt-6 space-y-2">
         <h2 id="inputs-heading" className="text-lg font-semibold">Inputs changed ({inputs.length})</h2>
-        <DiffTable rows={inputs} units={units} caption="Inputs changed" empty="No input changed." />
+        <DiffTable rows={inputs} units={units} caption="Inputs changed" empty="No input changed." inputs />
       </section>
       <section aria-labelledby="results-heading" className="mt-6 space-y-2">
         <h2 id="results-heading" className="text-lg font-semibold">Results changed ({results.changed.length})</h2>
