@@ -30,7 +30,7 @@ export function inputValueText(path: string, value: unknown, units: UnitSystem =
   const choice = CHOICES[path]?.[String(value)];
   if (choice) return choice;
   const unit = FIELD_META[path]?.unit;
-  if (typeof value === "number" && unit) return whole(formatQuantity(value, unit, units));
+  if (typeof value === "number" && unit) return whole(formatQuantity(value, unit, units, { decimals: asEntered(value, units) }));
   if (typeof value === "string" && unit && /^-?[\d.]+(, -?[\d.]+)*$/.test(value)) {
     // Lists such as candidate hole sizes arrive as "12, 18, 24": each gets the unit.
     return value.split(", ").map((n) => whole(formatQuantity(Number(n), unit, units))).join(", ");
@@ -41,3 +41,6 @@ export function inputValueText(path: string, value: unknown, units: UnitSystem =
 
 /** "24.0 in" reads "24 in"; "5.50 ft" keeps its decimals. */
 const whole = (text: string) => text.replace(/(\d)\.0+(?!\d)/g, "$1");
+
+/** US units show the value as typed (0.75 in stays 0.75, not 0.8); metric rounds by the unit's rule. */
+const asEntered = (value: number, units: UnitSystem) => (units === "imperial" ? Math.min(3, (String(value).split(".")[1] ?? "").length) : undefined);

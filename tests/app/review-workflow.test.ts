@@ -115,7 +115,7 @@ describe("decide a review", () => {
     const comments = await db("review_comments as c").join("reviews as r", "r.id", "c.review_id").where("r.revision_id", revisionId).orderBy("c.created_at").select("c.field_path", "c.body");
     expect(comments.map((c) => c.field_path)).toEqual(expect.arrayContaining(["site.windSpeedMph", null]));
     const mail = await mailTo(DESIGNER, { subject: /needs changes/ });
-    expect(mail.text).toContain("[site.windSpeedMph] Use the county's 120 mph basic wind speed.");
+    expect(mail.text).toContain("[Basic wind speed] Use the county's 120 mph basic wind speed.");
 
     const revised = await addRevision(designId, { ...twoPostDesignInput, site: { ...twoPostDesignInput.site, windSpeedMph: 120 } });
     expect((await submitAs(DESIGNER, revised)).status).toBe(200);

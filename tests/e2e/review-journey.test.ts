@@ -76,7 +76,7 @@ describe("review journey", () => {
     await engineer.getByRole("button", { name: "Record decision" }).click();
     await engineer.getByText("Changes requested: the designer has been e-mailed.").waitFor();
     const changesMail = await mailTo(DESIGNER, { subject: /needs changes/ });
-    expect(changesMail.text).toContain("[site.windSpeedMph] Use 120 mph");
+    expect(changesMail.text).toContain("[Basic wind speed] Use 120 mph");
 
     // 3. Designer reads the comment, saves revision 2 with the change (the editor's save API) and resubmits it.
     await designer.goto(`${baseUrl()}/reviews/${rev1}`);
@@ -95,7 +95,7 @@ describe("review journey", () => {
     // 4. Engineer sees what changed since revision 1 and approves.
     await engineer.goto(`${baseUrl()}/reviews/${rev2}`);
     await engineer.getByText("Changes since revision 1, the last one you reviewed").waitFor();
-    expect(await engineer.getByText("site.windSpeedMph").first().isVisible()).toBe(true);
+    expect(await engineer.getByText("Basic wind speed").first().isVisible()).toBe(true);
     await engineer.getByLabel("Approve for construction").check();
     await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
     await engineer.getByRole("button", { name: "Sign and approve" }).click();

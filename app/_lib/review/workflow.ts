@@ -13,6 +13,7 @@ import {
 } from "@/db/queries/reviews";
 import { confirmSignature, decideOverrides } from "./approval-signature";
 import { ratioText } from "@/components/review/check-outcome";
+import { fieldLabel } from "@/components/design/fields";
 import { engineerEligibility, licenceEligibility } from "./eligibility";
 import type { ReviewBody } from "./schemas";
 
@@ -125,7 +126,7 @@ export async function decideRevision(
       text: [
         `${user.name} (licence ${eligible.licence.licenceNumber}, ${eligible.licence.state}) ${words} revision ${revision.number} of "${revision.designName}" (${revision.projectName}).`,
         ...(overrides.length ? ["", "Approved although these checks fail, for the reasons given:", ...overrides.map((o) => `- ${o.title} (ratio ${ratioText(o.ratio)}): ${o.reason}`)] : []),
-        ...(body.comments.length ? ["", "Comments:", ...body.comments.map((c) => `- ${c.fieldPath ? `[${c.fieldPath}] ` : ""}${c.body}`)] : []),
+        ...(body.comments.length ? ["", "Comments:", ...body.comments.map((c) => `- ${c.fieldPath ? `[${fieldLabel(c.fieldPath)}] ` : ""}${c.body}`)] : []),
         "",
         `Open the review: ${reviewUrl(revisionId)}`,
         ...(to === "approved" ? [`Field spec for the crew: ${env.appUrl}/field/${revisionId}`] : []),
