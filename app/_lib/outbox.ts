@@ -6,7 +6,7 @@ import { sendMail } from "./mail";
 /**
  * The e-mail outbox. A use case calls enqueueMail inside the transaction that changes state, so the
  * mail exists exactly when the change does; after commit it calls deliverSoon, which tries the rows
- * right away without making the caller wait on (or fail with) the mail server. A sweep started on
+ * right away but never fails the caller because of the mail server. A sweep started on
  * first use retries what is still pending with a growing backoff; after MAX_ATTEMPTS failures the
  * row is given up and a "mail-failed" event goes to the organisation's audit log.
  */
@@ -30,10 +30,15 @@ export async function enqueueMail(trx: Knex.Transaction, mail: QueuedMail): Prom
   return row.id as string;
 }
 
-/** After commit: tries each row now, in the background; a failure stays in the row for the sweep. */
-export function deliverSoon(ids: string[]): void {
+/**
+ * After commit: tries each row now. Never throws: a failure stays in the row for the sweep, and the
+ * caller still reports success because the change is committed. It is awaited (sendMail bounds every
+ * step, so a frozen server costs at most what it did before the outbox) so a mail that can go out
+ * has gone out by the time the user sees the answer, in the order the changes happened.
+ */
+export async function deliverSoon(ids: string[]): Promise<void> {
   startSweep();
-  for (const id of ids) void deliverOne(id).catch(() => undefined);
+  await Promise.allSettled(ids.map((id) => deliverOne(id)));
 }
 
 /**

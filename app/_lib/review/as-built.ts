@@ -86,7 +86,7 @@ export async function recordAsBuilt(user: CurrentUser, revision: RevisionContext
       return { entryId, holdId, mailIds };
     });
     committed = true;
-    deliverSoon(mailIds);
+    await deliverSoon(mailIds);
     return { ...out, reasons };
   } catch (error) {
     // Photos whose entry was never saved are removed; photos of a saved entry are never touched.

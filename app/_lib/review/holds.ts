@@ -39,6 +39,6 @@ export async function clearHold(user: CurrentUser, hold: HoldRecord & { organisa
     for (const p of people) ids.push(await enqueueMail(trx, { organisationId: user.organisationId, to: p.email, subject: `Hold cleared: ${where?.designName} (${where?.projectName})`, text }));
     return ids;
   });
-  deliverSoon(mailIds);
+  await deliverSoon(mailIds);
   return { told: people.map((p) => p.name) };
 }

@@ -69,7 +69,7 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
     });
     return { reviewId, mailId };
   });
-  deliverSoon([mailId]);
+  await deliverSoon([mailId]);
   return { reviewId };
 }
 
@@ -136,7 +136,7 @@ export async function decideRevision(
       ].join("\n"),
     })];
   });
-  deliverSoon(mailIds);
+  await deliverSoon(mailIds);
   return { status: to };
 }
 
