@@ -6,14 +6,17 @@
  */
 import { createServer } from "node:net";
 import { afterEach, describe, expect, it } from "vitest";
+import { recordAsBuiltAction } from "@/app/(workspace)/field/[revisionId]/actions";
+import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";
 import { MAX_ATTEMPTS, deliverOne, deliverPending } from "@/app/_lib/outbox";
 import { db } from "@/db/client";
 import { listAuditEvents } from "@/db/queries/audit";
+import { openHolds } from "@/db/queries/holds";
 import { mailTo } from "../support/mailbox";
-import { actAs, jsonRequest, params } from "../support/next-context";
-import { DEMO_PASSWORD, DESIGNER, ENGINEER, makeDesign, userId } from "../support/review-fixtures";
+import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
+import { DEMO_PASSWORD, DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
 
 const realSmtpPort = process.env.SMTP_PORT;
 function mailServerBack(): void {
@@ -71,6 +74,36 @@ describe("e-mail outbox", () => {
     expect((await outboxRow(DESIGNER, name)).sent_at).not.toBeNull();
     expect((await mailTo(ENGINEER, { subject: new RegExp(`Review requested: .*${name}`) })).text).toContain(`/reviews/${revisionId}`);
     expect((await mailTo(DESIGNER, { subject: new RegExp(`${name} approved`) })).text).toContain(`/field/${revisionId}`);
+  });
+
+  it("puts a design on hold and clears the hold with the mail server down, the mails waiting in the outbox", async () => {
+    const name = `Outbox hold ${Date.now()}`;
+    const { designId, revisionId } = await makeDesign({ name });
+    await actAs(DESIGNER);
+    await submit(jsonRequest("POST", "/x", { engineerId: await userId(ENGINEER) }), params({ revisionId }));
+    await actAs(ENGINEER);
+    await review(jsonRequest("POST", "/x", { decision: "approve", password: DEMO_PASSWORD }), params({ revisionId }));
+    const depthIn = (await db("revisions").where({ id: revisionId }).first("result")).result.footing.depthIn as number;
+    await mailServerDown();
+
+    const hole = new FormData();
+    // A hole 6 in shallower than specified puts the design on hold (app/_lib/review/as-built.ts).
+    for (const [k, v] of Object.entries({ revisionId, postId: "P1", measuredDiameterIn: "12", measuredDepthIn: String(depthIn - 6), groundFound: "as_expected" })) hole.append(k, v);
+    await actAs(INSTALLER);
+    expect(await outcomeOf(() => recordAsBuiltAction({}, hole))).toMatchObject({ kind: "value", value: { ok: true } });
+    const [hold] = await openHolds(designId);
+    expect(hold).toBeTruthy();
+    expect(await failedOnce(ENGINEER, `On hold: ${name}`)).toMatchObject({ sent_at: null });
+
+    const clear = new FormData();
+    clear.append("holdId", hold.id);
+    clear.append("note", "Hole re-bored to the specified depth and inspected.");
+    clear.append("confirm", "yes");
+    await actAs(ENGINEER);
+    expect(await outcomeOf(() => clearHoldAction({}, clear))).toMatchObject({ value: { ok: true } });
+    expect(await openHolds(designId)).toEqual([]);
+    expect(await failedOnce(DESIGNER, `Hold cleared: ${name}`)).toMatchObject({ sent_at: null });
+    expect(await db("audit_events").where({ action: "hold-cleared", subject: designId }).first()).toBeTruthy();
   });
 
   it("gives a mail up after the last attempt and says so in the organisation's audit log", async () => {
