@@ -1,4 +1,5 @@
 import { db } from "../client";
+import { acceptedProjectIds } from "./engagements";
 import { listPage, type ListPage, type ListQuery } from "./list-page";
 
 /** A customer site. */
@@ -27,6 +28,8 @@ export interface ProjectRow {
   jurisdiction: string | null;
   designCount: number;
   updatedAt: string;
+  /** The contractor's name: the caller's own organisation, or the one that engaged them on this project. */
+  organisationName: string;
 }
 
 const columns = [
@@ -40,16 +43,23 @@ export async function getProject(id: string): Promise<Project | undefined> {
 
 export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "\"designCount\"", updatedAt: "p.updated_at" } as const;
 
-/** One page of the organisation's projects with their criteria card and design count. */
-export async function listProjects(organisationId: string, query: ListQuery): Promise<ListPage<ProjectRow>> {
-  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").where("p.organisation_id", organisationId);
+/**
+ * One page of the organisation's projects with their criteria card and design count; with
+ * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside engineer).
+ */
+export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string): Promise<ListPage<ProjectRow>> {
+  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").join("organisations as o", "o.id", "p.organisation_id")
+    .where((w) => {
+      w.where("p.organisation_id", organisationId);
+      if (engagedUserId) w.orWhereIn("p.id", acceptedProjectIds(engagedUserId));
+    });
   const page = await listPage<ProjectRow>(base, query, {
     sortable: PROJECT_SORTS,
     defaultSort: "updatedAt",
     defaultDir: "desc",
     search: ["p.name", "p.address", "p.state", "c.jurisdiction"],
     select: (qb) =>
-      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt",
+      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName",
         db.raw("(select count(*)::int from designs d where d.project_id = p.id) as \"designCount\"")),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };

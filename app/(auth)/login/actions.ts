@@ -5,11 +5,18 @@ import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
+import { findSignInRoles } from "@/db/queries/users";
 
 /** Only same-site paths are followed after sign-in. */
-function safeNext(value: FormDataEntryValue | null): string {
+function safeNext(value: FormDataEntryValue | null): string | null {
   const next = typeof value === "string" ? value : "";
-  return next.startsWith("/") && !next.startsWith("//") ? next : "/projects";
+  return next.startsWith("/") && !next.startsWith("//") ? next : null;
+}
+
+/** Where a sign-in with no `next` lands: a reviewing engineer who does not design lands on their review queue. */
+async function landing(userId: string): Promise<string> {
+  const roles = await findSignInRoles(userId);
+  return roles.includes("engineer") && !roles.includes("designer") ? "/queue" : "/projects";
 }
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -18,7 +25,7 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
   if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   const outcome = await signIn(parsed.data);
   if (!outcome.ok) return { message: outcome.message, values };
-  redirect(safeNext(form.get("next")));
+  redirect(safeNext(form.get("next")) ?? (await landing(outcome.userId)));
 }
 
 export async function signOutAction(): Promise<void> {

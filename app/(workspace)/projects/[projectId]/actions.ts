@@ -3,7 +3,9 @@
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { requireUser } from "@/app/_lib/auth";
+import { assertRole, requireUser } from "@/app/_lib/auth";
+import { engageEngineer, revokeEngagement } from "@/app/_lib/engagements/service";
+import { actionFailure } from "@/app/_lib/review/action-errors";
 import { startingInput } from "@/app/_lib/design-defaults";
 import { assertCanWrite, cardFor, computeResult, projectFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
@@ -31,4 +33,40 @@ export async function createDesignAction(_prev: ActionState, form: FormData): Pr
   });
   revalidatePath(`/projects/${project.id}`);
   redirect(`/projects/${project.id}/designs/${created.designId}`);
+}
+
+/** Engage an outside reviewing engineer on this project by e-mail (designers, admins). */
+export async function engageEngineerAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const projectId = String(form.get("projectId") ?? "");
+  const user = await forPage(async () => {
+    const u = await requireUser();
+    await projectFor(u, projectId);
+    assertRole(u, "designer", "admin");
+    return u;
+  });
+  try {
+    const e = await engageEngineer(user, projectId, () => ({ email: form.get("email") ?? undefined, message: form.get("message") ?? undefined }));
+    revalidatePath(`/projects/${projectId}`);
+    return { ok: true, message: `Invitation e-mailed to ${e.email}.` };
+  } catch (error) {
+    return actionFailure(error, typedValues(form));
+  }
+}
+
+/** Revoke an engagement: the engineer loses access to the project at once (designers, admins). */
+export async function revokeEngagementAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const projectId = String(form.get("projectId") ?? "");
+  const user = await forPage(async () => {
+    const u = await requireUser();
+    await projectFor(u, projectId);
+    assertRole(u, "designer", "admin");
+    return u;
+  });
+  try {
+    await forPage(() => revokeEngagement(user, projectId, String(form.get("engagementId") ?? "")));
+  } catch (error) {
+    return actionFailure(error, typedValues(form));
+  }
+  revalidatePath(`/projects/${projectId}`);
+  return { ok: true, message: "Engagement revoked." };
 }

@@ -15,6 +15,10 @@ const columns = [
   col.accessor("updatedAt", { header: "Updated", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{new Date(c.getValue()).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" })}</time> }),
 ];
 
-export function ProjectsTable({ page }: { page: ServerPage<ProjectRow> }) {
-  return <DataTable page={page} columns={columns} caption="Projects" filterLabel="Filter by name, address, state or jurisdiction" emptyText="No projects yet. Start one for your next customer site." />;
+// For an outside engineer: whose project each row is.
+const contractor = col.accessor("organisationName", { header: "Contractor", enableSorting: false });
+const withContractor = [columns[0], contractor, ...columns.slice(1)];
+
+export function ProjectsTable({ page, showContractor = false }: { page: ServerPage<ProjectRow>; showContractor?: boolean }) {
+  return <DataTable page={page} columns={showContractor ? withContractor : columns} caption="Projects" filterLabel="Filter by name, address, state or jurisdiction" emptyText="No projects yet. Start one for your next customer site." />;
 }

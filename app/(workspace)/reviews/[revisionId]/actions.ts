@@ -6,13 +6,11 @@ import { z } from "zod";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { actionFailure } from "@/app/_lib/review/action-errors";
-import { clearHold, clearHoldSchema } from "@/app/_lib/review/holds";
+import { clearHold, clearHoldSchema, holdFor } from "@/app/_lib/review/holds";
 import { reviewSchema } from "@/app/_lib/review/schemas";
 import { decideRevision, ownedRevision, submitRevision } from "@/app/_lib/review/workflow";
 import { putObject } from "@/app/_lib/storage";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { getHold } from "@/db/queries/holds";
-import { assertOwned } from "@/app/_lib/auth";
 
 const text = (form: FormData, name: string) => String(form.get(name) ?? "");
 
@@ -46,11 +44,11 @@ const LETTER_LIMIT_BYTES = 10 * 1024 * 1024;
 export async function decideReviewAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const revisionId = text(form, "revisionId");
   const values = typedValues(form);
-  const user = await forPage(async () => {
+  const { user, ctx } = await forPage(async () => {
     const user = await requireUser();
-    await ownedRevision(user, revisionId);
+    const ctx = await ownedRevision(user, revisionId, { engaged: true });
     assertRole(user, "engineer");
-    return user;
+    return { user, ctx };
   });
   const comments: { fieldPath: string | null; body: string }[] = [];
   for (let i = 0; i < 50; i++) {
@@ -67,7 +65,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
       if (!/^(application\/pdf|image\/)/.test(letter.type) || letter.size > LETTER_LIMIT_BYTES) {
         return { message: "Check the highlighted fields.", fieldErrors: { letter: ["The signed letter must be a PDF or an image of at most 10 MB"] }, values };
       }
-      letterKey = `orgs/${user.organisationId}/revisions/${revisionId}/letter-${randomUUID()}`;
+      letterKey = `orgs/${ctx.organisationId}/revisions/${revisionId}/letter-${randomUUID()}`;
       await putObject(letterKey, new Uint8Array(await letter.arrayBuffer()), letter.type);
     }
     const { status } = await decideRevision(user, revisionId, parsed.data, letterKey);
@@ -84,7 +82,7 @@ export async function clearHoldAction(_prev: ActionState, form: FormData): Promi
   const values = typedValues(form);
   const user = await forPage(async () => {
     const user = await requireUser();
-    assertOwned(user, await getHold(holdId), "That hold");
+    await holdFor(user, holdId);
     assertRole(user, "engineer");
     return user;
   });

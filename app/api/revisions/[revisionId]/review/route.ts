@@ -13,7 +13,7 @@ export const POST = apiRoute<{ params: Promise<{ revisionId: string }> }>(async 
   const user = await requireUser();
   const { revisionId: id } = await params;
   // Who, whose, which role: before reading the body, so a wrong role is a 403 whatever was sent.
-  await ownedRevision(user, id);
+  await ownedRevision(user, id, { engaged: true });
   assertRole(user, "engineer");
   const body = reviewSchema.parse(await readJson(request));
   const { status } = await decideRevision(user, id, body);
