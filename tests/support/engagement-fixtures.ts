@@ -50,3 +50,13 @@ export async function ensureOutsideCast(): Promise<void> {
 export async function idOf(email: string): Promise<string> {
   return (await db("users").where({ email }).first("id")).id;
 }
+
+/** An invited engagement whose link token is known (for the sign-up from the link). */
+export async function engagementWithToken(projectId: string, email: string): Promise<{ id: string; token: string }> {
+  const token = crypto.randomBytes(32).toString("base64url");
+  const invitedBy = (await db("users").where({ email: "designer@demo.pierwise.test" }).first("id")).id;
+  const [row] = await db("engagements")
+    .insert({ organisation_id: DEMO_ORG_ID, project_id: projectId, email, token_hash: crypto.createHash("sha256").update(token, "utf8").digest("hex"), invited_by: invitedBy })
+    .returning("id");
+  return { id: row.id, token };
+}

@@ -17,7 +17,7 @@ import { findUserByEmail } from "@/db/queries/users";
 /**
  * An engineer with no account signs up from the engagement link: their organisation (their firm, or
  * just themselves), the account with the admin and engineer roles, and their licence; then they are
- * signed in and back on the link's page to accept. The link's token is the permission, and the
+ * signed in and land on their review queue, where the engagement waits for Accept or Decline. The link's token is the permission, and the
  * e-mail is the one it was sent to.
  */
 export async function engineerSignUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -45,5 +45,5 @@ export async function engineerSignUpAction(_prev: ActionState, form: FormData): 
   await saveLicence(created.userId, { state: input.state, licenceNumber: input.licenceNumber, expiresOn: input.expiresOn });
   await recordAudit({ organisationId: created.organisationId, actorUserId: created.userId, action: "sign-up", subject: engagement.email, detail: { fromEngagement: engagement.id }, ip: await requestIp() });
   await startSession(created.userId, created.organisationId);
-  redirect(`/engagements/${token}`);
+  redirect("/queue");
 }
