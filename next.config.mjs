@@ -12,6 +12,9 @@ const nextConfig = {
   experimental: { authInterrupts: true },
   // Tests build once into the same folder; the start script reuses a build that is newer than the sources.
   distDir: process.env.PIERWISE_DIST_DIR ?? ".next",
+  // `npm run bench:web` builds with PIERWISE_BENCH_BUILD=1: only then do `*.bench.ts` files (the
+  // empty route handler it measures against) become routes.
+  pageExtensions: ["tsx", "ts", "jsx", "js", ...(process.env.PIERWISE_BENCH_BUILD === "1" ? ["bench.ts"] : [])],
 };
 
 export default nextConfig;

@@ -4,6 +4,7 @@
  */
 export { ENGINE_VERSION } from "./version";
 export { sizeDesign, sizeParsedDesign } from "./size-design";
+export { FIELD_LABELS, fieldLabel, messageName, type FieldLabel, type FieldUnit } from "./field-labels";
 export { designInputSchema, siteSchema, arraySchema, postsSchema, type DesignInput, type DesignInputDraft } from "./schema";
 export { zodIssuesToFieldErrors } from "./schema-helpers";
 export { parseDesignInput, safeParseDesignInput } from "./parse";

@@ -33,7 +33,7 @@ export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; a
     soil,
     ...(input.posts.isolatedPoleIncrease ? ["IBC §1806.3.4 lateral value doubled for an isolated pole (designer's choice)"] : []),
     "IBC §1807.3.3 post backfill and hole size",
-    "IBC §1809.4–1809.5 frost protection and 12 in minimum depth",
+    "IBC §1809.4 depth of footings (12 in minimum); §1809.5 frost protection",
     "AISC 360-16 §F8 round HSS flexure, Ω = 1.67",
   ];
   return { asce: `ASCE 7-${e.slice(2)}`, ibc: "IBC 2018/2021", aisc: "AISC 360-16", sections };

@@ -4,6 +4,7 @@
  * `DesignInput` is complete. Each rule's message names the field and its allowed range.
  */
 import { z } from "zod";
+import { messageName } from "./field-labels";
 import { choice, flag, num } from "./schema-helpers";
 import { PIPE_SIZES } from "./footing/pipe";
 
@@ -22,8 +23,8 @@ const soilSchema = z.discriminatedUnion(
     z.object({ method: z.literal("class"), soilClass: soilClassValue }),
     z.object({
       method: z.literal("custom"),
-      allowableBearingPsf: num("Allowable bearing pressure", 500, 20000, "psf"),
-      lateralBearingPsfPerFt: num("Lateral bearing pressure", 25, 2000, "psf per ft"),
+      allowableBearingPsf: num(messageName("site.soil.allowableBearingPsf"), 500, 20000, "psf"),
+      lateralBearingPsfPerFt: num(messageName("site.soil.lateralBearingPsfPerFt"), 25, 2000, "psf per ft"),
       description: z.string().max(200, { error: "Soil description must be at most 200 characters" }).optional(),
     }),
   ],
@@ -34,60 +35,60 @@ const topographySchema = z.discriminatedUnion(
   "method",
   [
     z.object({ method: z.literal("flat") }),
-    z.object({ method: z.literal("kzt"), kzt: num("Topographic factor Kzt", 1, 3) }),
+    z.object({ method: z.literal("kzt"), kzt: num(messageName("site.topography.kzt"), 1, 3) }),
     z.object({
       method: z.literal("hill"),
-      k1: num("Topographic multiplier K1", 0, 1.5),
-      k2: num("Topographic multiplier K2", 0, 1),
-      k3: num("Topographic multiplier K3", 0, 1),
+      k1: num(messageName("site.topography.k1"), 0, 1.5),
+      k2: num(messageName("site.topography.k2"), 0, 1),
+      k3: num(messageName("site.topography.k3"), 0, 1),
     }),
   ],
   { error: 'Topography method must be "flat", "kzt" or "hill"' },
 );
 
 export const siteSchema = z.object({
-  edition: choice("ASCE 7 edition", ["7-16", "7-22"]),
-  riskCategory: choice("Risk category", ["I", "II", "III", "IV"]).default("II"),
-  windSpeedMph: num("Wind speed", 85, 200, "mph"),
-  exposure: choice("Exposure category", ["B", "C", "D"]),
-  groundElevationFt: num("Ground elevation", -300, 15000, "ft").default(0),
+  edition: choice(messageName("site.edition"), ["7-16", "7-22"]),
+  riskCategory: choice(messageName("site.riskCategory"), ["I", "II", "III", "IV"]).default("II"),
+  windSpeedMph: num(messageName("site.windSpeedMph"), 85, 200, "mph"),
+  exposure: choice(messageName("site.exposure"), ["B", "C", "D"]),
+  groundElevationFt: num(messageName("site.groundElevationFt"), -300, 15000, "ft").default(0),
   topography: topographySchema.default({ method: "flat" }),
-  groundSnowPsf: num("Ground snow load", 0, 300, "psf").default(0),
-  snowExposureCe: num("Snow exposure factor Ce", 0.7, 1.3).default(1.0),
-  snowThermalCt: num("Snow thermal factor Ct", 0.85, 1.3).default(1.2),
+  groundSnowPsf: num(messageName("site.groundSnowPsf"), 0, 300, "psf").default(0),
+  snowExposureCe: num(messageName("site.snowExposureCe"), 0.7, 1.3).default(1.0),
+  snowThermalCt: num(messageName("site.snowThermalCt"), 0.85, 1.3).default(1.2),
   soil: soilSchema,
-  frostDepthIn: num("Frost depth", 0, 120, "in"),
-  slopeAlongPct: num("Ground slope along the array", -50, 50, "%").default(0),
-  slopeAcrossPct: num("Ground slope across the array", -50, 50, "%").default(0),
-  waterTableDepthFt: num("Water table depth", 0, 200, "ft").optional(),
+  frostDepthIn: num(messageName("site.frostDepthIn"), 0, 120, "in"),
+  slopeAlongPct: num(messageName("site.slopeAlongPct"), -50, 50, "%").default(0),
+  slopeAcrossPct: num(messageName("site.slopeAcrossPct"), -50, 50, "%").default(0),
+  waterTableDepthFt: num(messageName("site.waterTableDepthFt"), 0, 200, "ft").optional(),
 }, { error: "Site must be given: wind, exposure, snow, soil and frost for the site" });
 
 export const arraySchema = z.object({
-  moduleLengthIn: num("Module length", 30, 110, "in"),
-  moduleWidthIn: num("Module width", 15, 60, "in"),
-  moduleWeightLb: num("Module weight", 10, 150, "lb"),
-  orientation: choice("Orientation", ["portrait", "landscape"]),
-  rows: num("Rows", 1, 8, "", { int: true }),
-  columns: num("Columns", 1, 40, "", { int: true }),
-  gapIn: num("Gap between modules", 0, 12, "in").default(1),
-  tiltDeg: num("Tilt", 0, 60, "degrees"),
+  moduleLengthIn: num(messageName("array.moduleLengthIn"), 30, 110, "in"),
+  moduleWidthIn: num(messageName("array.moduleWidthIn"), 15, 60, "in"),
+  moduleWeightLb: num(messageName("array.moduleWeightLb"), 10, 150, "lb"),
+  orientation: choice(messageName("array.orientation"), ["portrait", "landscape"]),
+  rows: num(messageName("array.rows"), 1, 8, "", { int: true }),
+  columns: num(messageName("array.columns"), 1, 40, "", { int: true }),
+  gapIn: num(messageName("array.gapIn"), 0, 12, "in").default(1),
+  tiltDeg: num(messageName("array.tiltDeg"), 0, 60, "degrees"),
   tiltSettingsDeg: z
     .array(num("Each tilt setting", 0, 60, "degrees"), { error: "Tilt settings must be a list of angles in degrees" })
     .min(1, { error: "Tilt settings must list between 1 and 24 angles" })
     .max(24, { error: "Tilt settings must list between 1 and 24 angles" })
     .optional(),
-  lowestEdgeClearanceIn: num("Lowest edge clearance", 6, 120, "in"),
-  rackingDeadPsf: num("Racking dead load", 0, 15, "psf").default(1.5),
-  rackDepthIn: num("Rack depth (panel underside to post top)", 0, 24, "in").default(6),
-  flow: choice("Wind flow beneath the array", ["clear", "obstructed"]).default("clear"),
-  slipperySurface: flag("Slippery surface").default(true),
+  lowestEdgeClearanceIn: num(messageName("array.lowestEdgeClearanceIn"), 6, 120, "in"),
+  rackingDeadPsf: num(messageName("array.rackingDeadPsf"), 0, 15, "psf").default(1.5),
+  rackDepthIn: num(messageName("array.rackDepthIn"), 0, 24, "in").default(6),
+  flow: choice(messageName("array.flow"), ["clear", "obstructed"]).default("clear"),
+  slipperySurface: flag(messageName("array.slipperySurface")).default(true),
   /**
    * The compass bearing the modules face (the low edge's outward normal), clockwise from true
    * north: 180 faces south. Used only to orient the drawing (`geometryPreview.north`) and the field
    * spec; it changes no calculation, because the free-roof wind method checks both along-slope
    * wind directions (γ = 0° and 180°) whichever way the array faces.
    */
-  azimuthDeg: num("Array azimuth", 0, 360, "degrees").default(180),
+  azimuthDeg: num(messageName("array.azimuthDeg"), 0, 360, "degrees").default(180),
 }, { error: "Array must be given: modules, rows and columns, tilt and clearance" });
 
 const diameterList = (label: string) =>
@@ -96,24 +97,24 @@ const diameterList = (label: string) =>
     .max(20, { error: `${label} diameters must list between 1 and 20 sizes` });
 
 export const postsSchema = z.object({
-  count: num("Number of posts", 2, 20, "", { int: true }).default(2),
-  spacingFt: num("Post spacing", 1, 40, "ft").optional(),
-  pipeSize: choice("Pipe size", PIPE_SIZES),
-  yieldKsi: num("Post yield strength", 25, 60, "ksi").default(35),
-  holeDiameterIn: z.union([num("Hole diameter", 8, 60, "in"), z.literal("auto")], {
+  count: num(messageName("posts.count"), 2, 20, "", { int: true }).default(2),
+  spacingFt: num(messageName("posts.spacingFt"), 1, 40, "ft").optional(),
+  pipeSize: choice(messageName("posts.pipeSize"), PIPE_SIZES),
+  yieldKsi: num(messageName("posts.yieldKsi"), 25, 60, "ksi").default(35),
+  holeDiameterIn: z.union([num(messageName("posts.holeDiameterIn"), 8, 60, "in"), z.literal("auto")], {
     error: 'Hole diameter must be between 8 and 60 in, or "auto"',
   }).default(24),
   autoDiametersIn: diameterList("Candidate").default([12, 18, 24, 30, 36]),
-  maxAutoDepthIn: num("Largest reasonable depth for automatic sizing", 24, 240, "in").default(96),
+  maxAutoDepthIn: num(messageName("posts.maxAutoDepthIn"), 24, 240, "in").default(96),
   sweepDiametersIn: diameterList("Sweep").default([12, 18, 24, 30, 36]),
-  fixedDepthIn: num("Given footing depth", 12, 360, "in").optional(),
-  constrainedAtGrade: flag("Constrained at grade").default(false),
-  isolatedPoleIncrease: flag("Isolated pole lateral increase (IBC §1806.3.4)").default(false),
-  concreteUnitWeightPcf: num("Concrete unit weight", 100, 160, "pcf").default(145),
-  wasteAllowancePct: num("Concrete waste allowance", 0, 50, "%").default(10),
-  subtractPostDisplacement: flag("Subtract post displacement").default(false),
-  depthIncrementIn: num("Depth increment", 1, 12, "in").default(6),
-  sideFrictionPsf: num("Side friction", 0, 2000, "psf").optional(),
+  fixedDepthIn: num(messageName("posts.fixedDepthIn"), 12, 360, "in").optional(),
+  constrainedAtGrade: flag(messageName("posts.constrainedAtGrade")).default(false),
+  isolatedPoleIncrease: flag(messageName("posts.isolatedPoleIncrease")).default(false),
+  concreteUnitWeightPcf: num(messageName("posts.concreteUnitWeightPcf"), 100, 160, "pcf").default(145),
+  wasteAllowancePct: num(messageName("posts.wasteAllowancePct"), 0, 50, "%").default(10),
+  subtractPostDisplacement: flag(messageName("posts.subtractPostDisplacement")).default(false),
+  depthIncrementIn: num(messageName("posts.depthIncrementIn"), 1, 12, "in").default(6),
+  sideFrictionPsf: num(messageName("posts.sideFrictionPsf"), 0, 2000, "psf").optional(),
 }, { error: "Posts must be given: number of posts, pipe size and hole" });
 
 export const designInputSchema = z

@@ -7,7 +7,11 @@ const root = fileURLToPath(new URL("..", import.meta.url));
 // PostgreSQL (and mail/file stand-ins) that tests/run.ts starts and passes in env.
 export default defineConfig({
   root,
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // Server-only modules (app/_lib/services) run in-process here, as Next runs them on the server.
+    alias: { "server-only": fileURLToPath(new URL("../node_modules/server-only/empty.js", import.meta.url)) },
+  },
   test: {
     projects: [
       {

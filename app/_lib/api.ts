@@ -1,17 +1,12 @@
-import { ZodError } from "zod";
-import { AccessError } from "./auth";
+import { AccessError, ConflictError, validationIssues, ValidationError, type FieldIssue } from "./errors";
 
-export interface FieldError {
-  path: string;
-  message: string;
-}
+/** One problem in an API answer: `{ errors: [{ path, message }] }`. */
+export type FieldError = FieldIssue;
+// Kept here for callers that import them beside apiRoute; they live in ./errors.
+export { ConflictError, ValidationError };
 
 export function errorResponse(status: number, errors: FieldError[]): Response {
   return Response.json({ errors }, { status });
-}
-
-export function zodErrors(error: ZodError): FieldError[] {
-  return error.issues.map((issue) => ({ path: issue.path.join("."), message: issue.message }));
 }
 
 /** Reads a JSON body; a body that is not JSON is a 422 naming the body, not a 500. */
@@ -19,33 +14,33 @@ export async function readJson(request: Request): Promise<unknown> {
   try {
     return await request.json();
   } catch {
-    throw new ZodError([{ code: "custom", path: [], message: "The request body must be JSON.", input: undefined }]);
+    throw ValidationError.field("", "The request body must be JSON.");
   }
 }
 
-/** A conflict the caller can resolve, e.g. saving against a revision that is no longer the latest. */
-export class ConflictError extends Error {
-  constructor(message: string, readonly detail: Record<string, unknown> = {}) {
-    super(message);
-  }
+/**
+ * The one mapper from the error vocabulary (./errors) to JSON: access failures become 401/403/404,
+ * invalid input 422 with `{ errors: [{ path, message }] }`, conflicts 409; anything else is a
+ * logged 500 that leaks nothing.
+ */
+export function apiErrorResponse(error: unknown): Response {
+  if (error instanceof AccessError) return errorResponse(error.status, [{ path: "", message: error.message }]);
+  const issues = validationIssues(error);
+  if (issues) return errorResponse(422, issues);
+  if (error instanceof ConflictError) return Response.json({ errors: [{ path: "", message: error.message }], ...error.detail }, { status: 409 });
+  console.error(error);
+  return errorResponse(500, [{ path: "", message: "Something went wrong on our side; nothing was changed. Try again." }]);
 }
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/**
- * Wraps a route handler: access failures become 401/403/404, invalid input 422 with
- * `{ errors: [{ path, message }] }`, conflicts 409; anything else is a logged 500.
- */
+/** Wraps a route handler so every failure is answered by apiErrorResponse. */
 export function apiRoute<C = unknown>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
       return await handler(request, context);
     } catch (error) {
-      if (error instanceof AccessError) return errorResponse(error.status, [{ path: "", message: error.message }]);
-      if (error instanceof ZodError) return errorResponse(422, zodErrors(error));
-      if (error instanceof ConflictError) return Response.json({ errors: [{ path: "", message: error.message }], ...error.detail }, { status: 409 });
-      console.error(error);
-      return errorResponse(500, [{ path: "", message: "Something went wrong on our side; nothing was changed. Try again." }]);
+      return apiErrorResponse(error);
     }
   };
 }

@@ -2,6 +2,7 @@ import { cache } from "react";
 import { hasAcceptedEngagement, type ProjectScope } from "@/db/queries/engagements";
 import { findActiveMember, type MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
+import { AccessError } from "./errors";
 import { getSession } from "./session";
 
 /**
@@ -12,15 +13,8 @@ import { getSession } from "./session";
  */
 export type CurrentUser = MemberRecord;
 
-export class AccessError extends Error {
-  constructor(
-    readonly status: 401 | 403 | 404,
-    message: string,
-  ) {
-    super(message);
-    this.name = "AccessError";
-  }
-}
+// Lives in ./errors with the rest of the error vocabulary; re-exported for the many callers here.
+export { AccessError };
 
 /** The signed-in, active member for this request, or null. Cached per request. */
 export const currentUser = cache(async (): Promise<CurrentUser | null> => {

@@ -1,11 +1,11 @@
-import { ZodError } from "zod";
 import { DesignInputError, EngineInputError, ENGINE_VERSION, sizeParsedDesign, type DesignInput, type DesignResult } from "@/engine";
 import { getCriteriaCard, type CriteriaCard } from "@/db/queries/criteria-cards";
 import { getDesign, type Design } from "@/db/queries/designs";
 import { getProject, type Project } from "@/db/queries/projects";
 import { createRevision, getRevision, StaleRevisionError, type Revision } from "@/db/queries/revisions";
-import { ConflictError } from "./api";
+import { isUuid } from "@/db/ids";
 import { assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "./auth";
+import { ConflictError, ValidationError } from "./errors";
 
 /**
  * Loading a project, design or revision for the signed-in member (404 when it is another
@@ -55,9 +55,8 @@ export function assertCanWrite(user: CurrentUser): void {
   assertRole(user, "designer", "admin");
 }
 
-export function isUuid(value: string): boolean {
-  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
-}
+// The one strict id check lives in db/ids.ts; re-exported for the callers that load records here.
+export { isUuid };
 
 /** Runs the engine; a range only the engine knows about becomes a 422 naming the field (under `prefix`). */
 export function computeResult(input: DesignInput, prefix: string[] = []): DesignResult {
@@ -65,7 +64,7 @@ export function computeResult(input: DesignInput, prefix: string[] = []): Design
     return sizeParsedDesign(input);
   } catch (error) {
     if (error instanceof DesignInputError || error instanceof EngineInputError) {
-      throw new ZodError(error.issues.map((i) => ({ code: "custom" as const, path: [...prefix, ...i.path.split(".")], message: i.message, input: undefined })));
+      throw new ValidationError(error.issues.map((i) => ({ path: [...prefix, i.path].join("."), message: i.message })));
     }
     throw error;
   }

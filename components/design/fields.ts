@@ -1,73 +1,9 @@
-import type { UnitKind } from "./units";
-
 /**
- * What each design input means in the trade: its label, unit and help text. Shared by the editor
- * (labels, units, help beside each field) and the revision diff (names of what changed). Keys are
- * the dotted paths of designInputSchema, so API errors land beside the right field.
+ * The field-label table lives in the engine (engine/field-labels.ts) so the schema's messages, the
+ * pages and the report read one table; re-exported here under the names the editor uses.
  */
-export interface FieldMeta {
-  label: string;
-  unit?: UnitKind;
-  help: string;
-}
+import { FIELD_LABELS, fieldLabel, type FieldLabel } from "@/engine/field-labels";
 
-export const FIELD_META: Record<string, FieldMeta> = {
-  "site.edition": { label: "ASCE 7 edition", help: "The edition of ASCE 7 your building code adopts (see the criteria card)." },
-  "site.riskCategory": { label: "Risk category", help: "II for an ordinary array; the category sets which wind map applies." },
-  "site.windSpeedMph": { label: "Basic wind speed", unit: "mph", help: "Ultimate design wind speed V for the site from the ASCE 7 map or the county: a 3-second gust at 33 ft in open country." },
-  "site.exposure": { label: "Exposure category", help: "B: suburbs or woods close by. C: open fields, scattered trees. D: flat ground facing open water or salt flats." },
-  "site.groundElevationFt": { label: "Ground elevation", unit: "ft", help: "Height above sea level. Thinner air at altitude lowers the wind pressure (Ke)." },
-  "site.topography.method": { label: "Topography", help: "Flat unless the array sits on or near the top of a hill, ridge or escarpment that speeds the wind up." },
-  "site.topography.kzt": { label: "Topographic factor Kzt", help: "Speed-up factor from the engineer or ASCE 7 §26.8 (1.0 is flat ground)." },
-  "site.topography.k1": { label: "K1", help: "Hill shape multiplier from ASCE 7 Fig. 26.8-1." },
-  "site.topography.k2": { label: "K2", help: "Reduction with distance from the crest." },
-  "site.topography.k3": { label: "K3", help: "Reduction with height above local ground." },
-  "site.groundSnowPsf": { label: "Ground snow load", unit: "psf", help: "pg from the snow map or the county: the weight of snow on the ground the panels must carry." },
-  "site.snowExposureCe": { label: "Snow exposure factor Ce", help: "1.0 for partially exposed; lower where wind scours snow off, higher in sheltered spots." },
-  "site.snowThermalCt": { label: "Snow thermal factor Ct", help: "1.2 for unheated structures such as an open array." },
-  "site.soil.method": { label: "Soil values from", help: "Presumed class from IBC Table 1806.2, or the values in a geotechnical report." },
-  "site.soil.soilClass": { label: "Presumed soil class", help: "1 crystalline rock … 4 sand, gravel · 5 clay, silt. Fill, organic soil and mud need a soil report." },
-  "site.soil.allowableBearingPsf": { label: "Allowable bearing", unit: "psf", help: "Vertical bearing pressure the soil report allows under the footing." },
-  "site.soil.lateralBearingPsfPerFt": { label: "Lateral bearing", unit: "psfPerFt", help: "Sideways soil resistance per foot of depth from the soil report." },
-  "site.soil.description": { label: "Soil description", help: "What the report calls the soil, e.g. 'stiff sandy clay'." },
-  "site.frostDepthIn": { label: "Frost depth", unit: "in", help: "How deep the ground freezes. Footings go below it so frost heave cannot jack them up." },
-  "site.slopeAlongPct": { label: "Ground slope along the array", unit: "pct", help: "Rise of the ground going right along the rows, per 100 ft of run (negative falls)." },
-  "site.slopeAcrossPct": { label: "Ground slope front to back", unit: "pct", help: "Rise of the ground from the low (front) edge toward the back (negative falls to the back)." },
-  "site.waterTableDepthFt": { label: "Water table depth", unit: "ft", help: "Leave blank if groundwater is well below the footing. Below it, concrete weighs less against uplift." },
-  "array.moduleLengthIn": { label: "Module length", unit: "in", help: "Long side of one module, from the datasheet." },
-  "array.moduleWidthIn": { label: "Module width", unit: "in", help: "Short side of one module." },
-  "array.moduleWeightLb": { label: "Module weight", unit: "lbMass", help: "Weight of one module from the datasheet." },
-  "array.orientation": { label: "Orientation", help: "Portrait: long side up the slope. Landscape: long side along the row." },
-  "array.rows": { label: "Rows", help: "Modules stacked up the slope of the rack." },
-  "array.columns": { label: "Columns", help: "Modules side by side along the rack." },
-  "array.gapIn": { label: "Gap between modules", unit: "in", help: "Clamp gap between neighbouring modules." },
-  "array.tiltDeg": { label: "Tilt", unit: "deg", help: "Angle of the panels from horizontal." },
-  "array.tiltSettingsDeg": { label: "Allowed tilt settings", unit: "deg", help: "For an adjustable rack: every tilt it may be set to, comma separated. The footing is sized for the worst." },
-  "array.lowestEdgeClearanceIn": { label: "Lowest edge clearance", unit: "in", help: "Gap between the bottom edge of the panels and the ground; 18–24 in keeps snow and weeds off." },
-  "array.rackingDeadPsf": { label: "Racking weight", unit: "psf", help: "Rails, purlins and clamps spread over the panel area." },
-  "array.rackDepthIn": { label: "Rack depth", unit: "in", help: "From the panel underside down to the top of the post." },
-  "array.flow": { label: "Wind under the array", help: "Clear unless stored material or a wall blocks more than half the space under the panels." },
-  "array.slipperySurface": { label: "Snow slides off", help: "Glass modules without snow guards let snow slide, which lowers the design snow." },
-  "array.azimuthDeg": { label: "Array azimuth", unit: "deg", help: "Direction the module faces, clockwise from true north: 180 = south. Used for the drawing and the field spec, not the wind calculation." },
-  "posts.count": { label: "Number of posts", help: "Posts in the single row under the beam." },
-  "posts.spacingFt": { label: "Post spacing", unit: "ft", help: "Centre to centre. Leave blank to spread the posts evenly under the array." },
-  "posts.pipeSize": { label: "Pipe size", help: "Nominal size of standard-weight (Schedule 40) steel pipe used for the posts." },
-  "posts.yieldKsi": { label: "Post yield strength", unit: "ksi", help: "Fy of the pipe steel; 35 ksi for common ASTM A53 Grade B pipe." },
-  "posts.holeDiameterIn": { label: "Hole diameter", unit: "in", help: "The auger size. Choose “size it for me” to try the candidate sizes and pick the shallowest reasonable hole." },
-  "posts.autoDiametersIn": { label: "Candidate hole sizes", unit: "in", help: "Auger sizes the crew has, tried by “size it for me”." },
-  "posts.maxAutoDepthIn": { label: "Deepest reasonable hole", unit: "in", help: "“Size it for me” prefers holes no deeper than this." },
-  "posts.sweepDiametersIn": { label: "Options table sizes", unit: "in", help: "Hole sizes listed in the diameter options table." },
-  "posts.fixedDepthIn": { label: "Given footing depth", unit: "in", help: "Leave blank to size the depth. Give a depth to check a hole that is already dug." },
-  "posts.constrainedAtGrade": { label: "Constrained at grade", help: "Only when a slab or rigid collar at the ground stops the post moving sideways." },
-  "posts.isolatedPoleIncrease": { label: "Isolated pole increase", help: "IBC §1806.3.4 doubles lateral bearing for isolated poles that tolerate ½ in movement. Engineer's call." },
-  "posts.concreteUnitWeightPcf": { label: "Concrete unit weight", unit: "pcf", help: "145 pcf for normal-weight concrete." },
-  "posts.wasteAllowancePct": { label: "Concrete waste allowance", unit: "pct", help: "Extra concrete for ragged holes and spillage; 5–10 % is usual." },
-  "posts.subtractPostDisplacement": { label: "Subtract post volume", help: "Take the steel's volume out of the concrete order." },
-  "posts.depthIncrementIn": { label: "Round depth up to", unit: "in", help: "Depths are rounded up to this step so the crew marks whole numbers." },
-  "posts.sideFrictionPsf": { label: "Side friction", unit: "psf", help: "Engineer's skin friction against uplift. Leave blank to count concrete weight only." },
-  projectName: { label: "Project name on print-outs", help: "" },
-};
-
-export function fieldLabel(path: string): string {
-  return FIELD_META[path]?.label ?? path;
-}
+export type FieldMeta = FieldLabel;
+export const FIELD_META = FIELD_LABELS;
+export { fieldLabel };

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "../client";
+import { isUuid } from "../ids";
 
 export const GROUND_FOUND = ["as_expected", "rock", "water", "fill", "caving"] as const;
 export type GroundFound = (typeof GROUND_FOUND)[number];
@@ -33,7 +34,7 @@ export async function asBuiltEntries(revisionId: string): Promise<AsBuiltEntry[]
 }
 
 export async function getAsBuiltEntry(entryId: string): Promise<AsBuiltEntry | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(entryId)) return undefined;
+  if (!isUuid(entryId)) return undefined;
   return entries().where("a.id", entryId).first();
 }
 

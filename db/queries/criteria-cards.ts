@@ -1,4 +1,5 @@
 import { db } from "../client";
+import { isUuid } from "../ids";
 
 /** A jurisdiction's design criteria, entered once per organisation and applied to its projects. */
 export interface CriteriaCardValues {
@@ -30,6 +31,7 @@ export async function listCriteriaCards(organisationId: string): Promise<Criteri
 }
 
 export async function getCriteriaCard(id: string): Promise<CriteriaCard | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("criteria_cards").where({ id }).first(columns);
 }
 

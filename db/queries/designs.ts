@@ -2,6 +2,7 @@ import type { Knex } from "knex";
 import { db } from "../client";
 import { listPage, type ListPage, type ListQuery } from "./list-page";
 import { createRevision, type RevisionStatus } from "./revisions";
+import { isUuid } from "../ids";
 
 /** One array on its posts, within a project; its content lives in its revisions. */
 export interface Design {
@@ -24,6 +25,7 @@ export interface DesignRow {
 }
 
 export async function getDesign(id: string): Promise<Design | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("designs").where({ id }).first("id", "project_id as projectId", "organisation_id as organisationId", "name", "created_at as createdAt");
 }
 

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "../client";
+import { isUuid } from "../ids";
 import { isUniqueViolation } from "./organisations";
 
 /**
@@ -43,7 +44,6 @@ function engagementQuery(knex: Knex = db) {
     );
 }
 
-const isUuid = (v: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(v);
 
 export async function createEngagement(e: { organisationId: string; projectId: string; email: string; message: string; tokenHash: string; invitedBy: string }): Promise<string> {
   try {

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "../client";
+import { isUuid } from "../ids";
 
 export interface HoldRecord {
   id: string;
@@ -37,7 +38,7 @@ export async function allHolds(designId: string): Promise<HoldRecord[]> {
 }
 
 export async function getHold(holdId: string): Promise<(HoldRecord & { organisationId: string }) | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(holdId)) return undefined;
+  if (!isUuid(holdId)) return undefined;
   return holdsQuery().select("h.organisation_id as organisationId").where("h.id", holdId).first();
 }
 

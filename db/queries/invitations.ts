@@ -3,6 +3,7 @@ import { db } from "../client";
 import type { Role } from "../roles";
 import { isUniqueViolation } from "./organisations";
 import { parseRoles, rolesLiteral } from "./users";
+import { isUuid } from "../ids";
 
 export interface InvitationView {
   id: string;
@@ -70,7 +71,7 @@ export async function listPendingInvitations(organisationId: string): Promise<In
 }
 
 export async function findInvitationById(id: string): Promise<InvitationView | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) return undefined;
+  if (!isUuid(id)) return undefined;
   const row = await invitationQuery(db).where("i.id", id).first();
   return row ? { ...row, roles: parseRoles(row.roles) } : undefined;
 }

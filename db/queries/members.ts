@@ -1,6 +1,7 @@
 import { db } from "../client";
 import type { Role } from "../roles";
 import { parseRoles, rolesLiteral } from "./users";
+import { isUuid } from "../ids";
 
 export interface MemberRow {
   membershipId: string;
@@ -44,7 +45,7 @@ export async function listMembers(organisationId: string): Promise<MemberRow[]> 
 }
 
 export async function findMembership(membershipId: string): Promise<MemberRow | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(membershipId)) return undefined;
+  if (!isUuid(membershipId)) return undefined;
   const row = await db("memberships as m").join("users as u", "u.id", "m.user_id").where("m.id", membershipId).first(memberColumns);
   return row ? toMember(row) : undefined;
 }

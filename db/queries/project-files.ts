@@ -1,5 +1,6 @@
 import { db } from "../client";
 import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { isUuid } from "../ids";
 
 /** An upload on a project; the bytes are in the private object store under `objectKey`. */
 export interface ProjectFile {
@@ -24,6 +25,7 @@ const columns = [
 ];
 
 export async function getProjectFile(id: string): Promise<ProjectFile | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("project_files as f").leftJoin("users as u", "u.id", "f.uploaded_by").where("f.id", id).first(columns);
 }
 

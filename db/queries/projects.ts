@@ -1,6 +1,7 @@
 import { db } from "../client";
 import { acceptedProjectIds } from "./engagements";
 import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { isUuid } from "../ids";
 
 /** A customer site. */
 export interface Project {
@@ -38,6 +39,7 @@ const columns = [
 ];
 
 export async function getProject(id: string): Promise<Project | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("projects").where({ id }).first(columns);
 }
 

@@ -2,6 +2,7 @@ import { db } from "../client";
 import { listLicences, type LicenceRow } from "./licences";
 import { parseRoles } from "./users";
 import type { Role } from "../roles";
+import { isUuid } from "../ids";
 
 /** People a review involves: the organisation's engineers (licences from db/queries/licences.ts). */
 
@@ -14,7 +15,7 @@ export interface OrgMember {
 
 /** An active member of the organisation, or undefined. */
 export async function activeMember(organisationId: string, userId: string): Promise<OrgMember | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(userId)) return undefined;
+  if (!isUuid(userId)) return undefined;
   const row = await db("memberships as m")
     .join("users as u", "u.id", "m.user_id")
     .where({ "m.organisation_id": organisationId, "m.user_id": userId })

@@ -1,6 +1,7 @@
 import type { Knex } from "knex";
 import type { DesignResult } from "@/engine";
 import { db } from "../client";
+import { isUuid } from "../ids";
 
 /** Revision statuses as stored; "superseded" is derived (see `isSuperseded`). */
 export type RevisionStatus = "draft" | "in_review" | "approved" | "changes_requested";
@@ -30,7 +31,7 @@ export interface RevisionContext {
 const json = <T>(v: unknown): T => (typeof v === "string" ? JSON.parse(v) : v) as T;
 
 export async function getRevisionContext(revisionId: string, trx: Knex = db): Promise<RevisionContext | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(revisionId)) return undefined;
+  if (!isUuid(revisionId)) return undefined;
   const row = await trx("revisions as r")
     .join("designs as d", "d.id", "r.design_id")
     .join("projects as p", "p.id", "d.project_id")

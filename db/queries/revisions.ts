@@ -11,6 +11,7 @@ import { listPage, type ListPage, type ListQuery } from "./list-page";
  */
 export { REVISION_STATUS_LABELS, type RevisionStatus } from "../revision-status";
 import type { RevisionStatus } from "../revision-status";
+import { isUuid } from "../ids";
 
 export interface Revision<I = unknown, R = unknown> {
   id: string;
@@ -109,6 +110,7 @@ export async function createRevision(a: NewRevision, conn: Knex | Knex.Transacti
 }
 
 export async function getRevision<I = unknown, R = unknown>(id: string): Promise<Revision<I, R> | undefined> {
+  if (!isUuid(id)) return undefined;
   return db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.id", id).first(columns);
 }
 

@@ -3,7 +3,7 @@
  * rounded up to the practical increment, or the given depth), and every check at that depth.
  *
  * Depth-setting checks: lateral (IBC §1807.3.2.1/.2), uplift, frost and minimum 12 in
- * (IBC §1809.4–1809.5). Diameter checks: bearing (Table 1806.2), hole ≥ post + 4 in (§1807.3.3),
+ * (IBC §1809.4 depth of footings, 12 in minimum; §1809.5 frost protection). Diameter checks: bearing (Table 1806.2), hole ≥ post + 4 in (§1807.3.3),
  * post bending (AISC 360 §F8, independent of the hole).
  */
 import type { FactoredPostLoad } from "../loads/factored";
@@ -145,9 +145,9 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   const checks: FootingCheck[] = [
     lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
     makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
-    makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (frost), §1809.5 (12 in minimum)", null, need.frost),
+    makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (depth of footings, 12 in minimum), §1809.5 (frost protection)", null, need.frost),
     makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brgRow && gov(brgRow)),
-    makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 [memory]", null),
+    makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 backfill (value as recalled; confirm against the printed code)", null),
     makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),
   ];
   let pass = true;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { embedmentDepth, lateralRatio, pipeAllowableMoment, smallestPipeFor, soilValues, upliftCapacityLb } from "../../engine/index";
+import { STD_PIPE, type PipeSize } from "../../engine/footing/pipe";
 import { requiredUpliftDepthFt } from "../../engine/footing/uplift-depth";
 
 describe("IBC §1807.3.2 embedment", () => {
@@ -61,6 +62,29 @@ describe("soil, uplift, post", () => {
     expect(pipeAllowableMoment({ size: "3" }).allowableMomentKipFt).toBeCloseTo(3.82, 2);
     expect(pipeAllowableMoment({ size: "4", yieldKsi: 35 }).allowableMomentKipFt).toBeCloseTo((35 * 4.05) / 1.67 / 12, 9);
     expect(smallestPipeFor(3.9)).toBe("3-1/2");
+  });
+  it("every standard pipe matches its AISC Shapes Database v15.0 row and the geometry it comes from", () => {
+    // AISC Shapes Database v15.0, rows PipeNSTD: OD, tdes, Z, weight [memory: printed table not read here].
+    const rows: [PipeSize, number, number, number, number][] = [
+      ["2-1/2", 2.875, 0.189, 1.37, 5.8], // Pipe2-1/2STD [memory]
+      ["3", 3.5, 0.201, 2.19, 7.58], // Pipe3STD [memory]
+      ["3-1/2", 4.0, 0.211, 3.03, 9.12], // Pipe3-1/2STD [memory]
+      ["4", 4.5, 0.221, 4.05, 10.8], // Pipe4STD [memory]
+      ["5", 5.563, 0.241, 6.83, 14.6], // Pipe5STD [memory]; was 6.97 in³, about 2 % high
+      ["6", 6.625, 0.261, 10.6, 19.0], // Pipe6STD [memory]
+    ];
+    for (const [size, od, tdes, z, w] of rows) {
+      const p = pipeAllowableMoment({ size });
+      expect([p.outsideDiameterIn, p.designWallIn, p.plasticModulusIn3, p.weightLbPerFt]).toEqual([od, tdes, z, w]);
+      // tdes = 0.93 tnom, AISC 360-16 §B4.2 [std], to the database's 3 decimals (±0.0015 in).
+      expect(Math.abs(tdes - 0.93 * STD_PIPE[size].nominalWallIn)).toBeLessThan(0.0015);
+      // Z of a ring (D³ − (D − 2t)³)/6 with t = tdes [computed]: within 0.6 % of the table.
+      const zRing = (od ** 3 - (od - 2 * tdes) ** 3) / 6;
+      expect(Math.abs(zRing / z - 1)).toBeLessThan(0.006);
+      // Plain-end weight 10.69 (D − t) t lb/ft with t = tnom, ASME B36.10M [std]: within 0.5 %.
+      const t = STD_PIPE[size].nominalWallIn;
+      expect(Math.abs((10.69 * (od - t) * t) / w - 1)).toBeLessThan(0.005);
+    }
   });
   it("refuses a yield strength out of range", () => {
     expect(() => pipeAllowableMoment({ size: "3", yieldKsi: 80 })).toThrowError("Post yield strength must be between 25 and 60 ksi");

@@ -5,7 +5,7 @@ import { revalidatePath } from "next/cache";
 import { requireUser } from "@/app/_lib/auth";
 import { answerEngagement } from "@/app/_lib/engagements/service";
 import { forPage } from "@/app/_lib/page-access";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 
 /** The invited engineer accepts or declines an engagement (from the e-mailed link or the queue). */
@@ -16,7 +16,7 @@ export async function answerEngagementAction(_prev: ActionState, form: FormData)
   try {
     await forPage(() => answerEngagement(user, String(form.get("engagementId") ?? ""), answer));
   } catch (error) {
-    const state = actionFailure(error, typedValues(form));
+    const state = actionState(error, typedValues(form));
     if (state.fieldErrors?.licence) state.message = state.fieldErrors.licence.join(" ");
     return state;
   }

@@ -1,6 +1,5 @@
-import { ZodError } from "zod";
-import { ConflictError } from "@/app/_lib/api";
-import { AccessError, assertRole, hasRole, type CurrentUser } from "@/app/_lib/auth";
+import { assertRole, hasRole, type CurrentUser } from "@/app/_lib/auth";
+import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { projectFor } from "@/app/_lib/designs";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
@@ -166,6 +165,4 @@ export async function canAccept(user: CurrentUser): Promise<{ ok: true } | { ok:
   return { ok: true };
 }
 
-function invalid(path: string, message: string): ZodError {
-  return new ZodError([{ code: "custom", path: [path], message, input: undefined }]);
-}
+const invalid = ValidationError.field;

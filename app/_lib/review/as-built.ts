@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { z } from "zod";
-import { ConflictError } from "@/app/_lib/api";
+import { ConflictError, ValidationError } from "@/app/_lib/errors";
 import { assertRole, type CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
@@ -58,13 +58,13 @@ export async function recordAsBuilt(user: CurrentUser, revisionId: string, input
   assertRole(user, "installer", "engineer");
   if (revision.status !== "approved") throw new ConflictError("As-built entries are recorded only against an approved revision.");
   if (!revision.result.field.posts.some((p) => p.id === input.postId)) {
-    throw new z.ZodError([{ code: "custom", path: ["postId"], message: `Post must be one of ${revision.result.field.posts.map((p) => p.id).join(", ")}`, input: input.postId }]);
+    throw ValidationError.field("postId", `Post must be one of ${revision.result.field.posts.map((p) => p.id).join(", ")}`);
   }
   const real = photos.filter((p) => p.size > 0);
-  if (real.length > PHOTO_LIMITS.count) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `Attach at most ${PHOTO_LIMITS.count} photos per hole`, input: undefined }]);
+  if (real.length > PHOTO_LIMITS.count) throw ValidationError.field("photos", `Attach at most ${PHOTO_LIMITS.count} photos per hole`);
   for (const p of real) {
-    if (!p.type.startsWith("image/")) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `${p.name} is not a photo: attach JPEG, PNG or other image files`, input: undefined }]);
-    if (p.size > PHOTO_LIMITS.bytes) throw new z.ZodError([{ code: "custom", path: ["photos"], message: `${p.name} is over 10 MB: attach photos up to 10 MB each`, input: undefined }]);
+    if (!p.type.startsWith("image/")) throw ValidationError.field("photos", `${p.name} is not a photo: attach JPEG, PNG or other image files`);
+    if (p.size > PHOTO_LIMITS.bytes) throw ValidationError.field("photos", `${p.name} is over 10 MB: attach photos up to 10 MB each`);
   }
   const keys: string[] = [];
   try {

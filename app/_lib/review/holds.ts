@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ConflictError } from "@/app/_lib/api";
+import { ConflictError } from "@/app/_lib/errors";
 import { assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
 import { recordAudit } from "@/db/queries/audit";
 import { clearHoldRow, getHold } from "@/db/queries/holds";

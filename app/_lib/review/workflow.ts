@@ -1,6 +1,5 @@
-import { ZodError } from "zod";
-import { ConflictError } from "@/app/_lib/api";
-import { AccessError, assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { db } from "@/db/client";
@@ -16,9 +15,7 @@ import type { ReviewBody } from "./schemas";
 
 const STATUS_WORDS = { draft: "a draft", in_review: "in review", approved: "approved", changes_requested: "marked changes requested" } as const;
 
-function invalid(path: string, message: string): ZodError {
-  return new ZodError([{ code: "custom", path: path.split("."), message, input: undefined }]);
-}
+const invalid = ValidationError.field;
 
 /**
  * Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). With
@@ -97,10 +94,10 @@ export async function decideRevision(
   const revision = await ownedRevision(user, revisionId, { engaged: true });
   assertRole(user, "engineer");
   if ((await designAuthorIds(revision.designId)).includes(user.userId)) {
-    throw new AccessError(403, body.decision === "approve" ? "You cannot approve a design you authored." : "You cannot review a design you authored.");
+    throw new AccessError(403, body.decision === "approve" ? "You cannot approve a design you authored." : "You cannot review a design you authored.", true);
   }
   const eligible = await licenceEligibility(user.userId, revision.projectState);
-  if (!eligible.ok) throw new AccessError(403, eligible.message);
+  if (!eligible.ok) throw new AccessError(403, eligible.message, true);
   const inputKeys = new Set(flattenKeys(revision.input));
   body.comments.forEach((c, i) => {
     if (c.fieldPath && !inputKeys.has(c.fieldPath)) throw invalid(`comments.${i}.fieldPath`, `"${c.fieldPath}" is not an input of this revision; pin the comment to an input shown on the page or leave it unpinned`);
@@ -114,7 +111,7 @@ export async function decideRevision(
     if (!open) throw new ConflictError("This revision has no open review to decide.");
     // An outside engineer decides only what was submitted to them.
     if (revision.organisationId !== user.organisationId && open.engineerId !== user.userId) {
-      throw new AccessError(403, "This revision was submitted to another engineer; only they can decide it.");
+      throw new AccessError(403, "This revision was submitted to another engineer; only they can decide it.", true);
     }
     await recordDecision(trx, open.id, {
       decision: body.decision === "approve" ? "approve" : "request_changes",

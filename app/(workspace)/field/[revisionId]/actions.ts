@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { asBuiltSchema, recordAsBuilt } from "@/app/_lib/review/as-built";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
@@ -25,7 +25,7 @@ export async function recordAsBuiltAction(_prev: ActionState, form: FormData): P
     groundFound: form.get("groundFound") ?? undefined,
     notes: form.get("notes") ?? "",
   });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  if (!parsed.success) return actionState(parsed.error, values);
   const photos = form.getAll("photos").filter((p): p is File => p instanceof File);
   try {
     const out = await recordAsBuilt(user, revisionId, parsed.data, photos);
@@ -33,6 +33,6 @@ export async function recordAsBuiltAction(_prev: ActionState, form: FormData): P
     if (out.holdId) return { ok: true, message: `Recorded. The design is now ON HOLD: ${out.reasons.join(" ")} Do not pour; the engineer and designer have been e-mailed.` };
     return { ok: true, message: `Hole ${parsed.data.postId} recorded.` };
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
 }

@@ -5,7 +5,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { engageEngineer, revokeEngagement } from "@/app/_lib/engagements/service";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { startingInput } from "@/app/_lib/design-defaults";
 import { assertCanWrite, cardFor, computeResult, projectFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
@@ -49,7 +49,7 @@ export async function engageEngineerAction(_prev: ActionState, form: FormData): 
     revalidatePath(`/projects/${projectId}`);
     return { ok: true, message: `Invitation e-mailed to ${e.email}.` };
   } catch (error) {
-    return actionFailure(error, typedValues(form));
+    return actionState(error, typedValues(form));
   }
 }
 
@@ -65,7 +65,7 @@ export async function revokeEngagementAction(_prev: ActionState, form: FormData)
   try {
     await forPage(() => revokeEngagement(user, projectId, String(form.get("engagementId") ?? "")));
   } catch (error) {
-    return actionFailure(error, typedValues(form));
+    return actionState(error, typedValues(form));
   }
   revalidatePath(`/projects/${projectId}`);
   return { ok: true, message: "Engagement revoked." };

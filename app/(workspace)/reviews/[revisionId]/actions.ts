@@ -5,7 +5,7 @@ import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { assertRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { actionFailure } from "@/app/_lib/review/action-errors";
+import { actionState } from "@/app/_lib/action-errors";
 import { clearHold, clearHoldSchema, holdFor } from "@/app/_lib/review/holds";
 import { reviewSchema } from "@/app/_lib/review/schemas";
 import { decideRevision, ownedRevision, submitRevision } from "@/app/_lib/review/workflow";
@@ -27,7 +27,7 @@ export async function submitForReviewAction(_prev: ActionState, form: FormData):
   try {
     await submitRevision(user, revisionId, z.string().uuid({ error: "Choose the reviewing engineer" }).parse(text(form, "engineerId")));
   } catch (error) {
-    const state = actionFailure(error, values);
+    const state = actionState(error, values);
     if (state.fieldErrors?.["form"]) state.fieldErrors.engineerId = state.fieldErrors.form;
     return state;
   }
@@ -56,7 +56,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     if (body) comments.push({ body, fieldPath: text(form, `comment.${i}.fieldPath`) || null });
   }
   const parsed = reviewSchema.safeParse({ decision: text(form, "decision"), comments });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  if (!parsed.success) return actionState(parsed.error, values);
   const letter = form.get("letter");
   let letterKey: string | null = null;
   try {
@@ -72,7 +72,7 @@ export async function decideReviewAction(_prev: ActionState, form: FormData): Pr
     revalidatePath(`/reviews/${revisionId}`);
     return { ok: true, message: status === "approved" ? "Approved: the revision is pinned and the designer has been e-mailed." : "Changes requested: the designer has been e-mailed." };
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
 }
 
@@ -87,11 +87,11 @@ export async function clearHoldAction(_prev: ActionState, form: FormData): Promi
     return user;
   });
   const parsed = clearHoldSchema.safeParse({ note: text(form, "note") });
-  if (!parsed.success) return actionFailure(parsed.error, values);
+  if (!parsed.success) return actionState(parsed.error, values);
   try {
     await clearHold(user, holdId, parsed.data.note);
   } catch (error) {
-    return actionFailure(error, values);
+    return actionState(error, values);
   }
   revalidatePath("/reviews");
   return { ok: true, message: "Hold cleared." };

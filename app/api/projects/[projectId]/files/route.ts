@@ -1,5 +1,5 @@
-import { ZodError } from "zod";
 import { apiRoute } from "@/app/_lib/api";
+import { ValidationError } from "@/app/_lib/errors";
 import { requireUser } from "@/app/_lib/auth";
 import { assertCanWrite, projectFor } from "@/app/_lib/designs";
 import { listQueryFrom } from "@/app/_lib/schemas/project";
@@ -10,7 +10,7 @@ import { getProjectFile, insertProjectFile, listProjectFiles } from "@/db/querie
 export const dynamic = "force-dynamic";
 type Context = { params: Promise<{ projectId: string }> };
 
-const refuse = (path: string, message: string) => new ZodError([{ code: "custom", path: [path], message, input: undefined }]);
+const refuse = ValidationError.field;
 
 /** The project's uploads (`?q=&sort=originalName|kind|sizeBytes|createdAt&dir=&page=&pageSize=`). */
 export const GET = apiRoute<Context>(async (request, { params }) => {

@@ -1,0 +1,66 @@
+/**
+ * What bench:web plants in the editor page before any of the app's scripts run: counters on the
+ * WebGL calls that matter (shader programs made, draw calls), long tasks, event timings, and a
+ * watch on the results that stamps when each keystroke's result reaches the page and when the
+ * frame after it is painted. Plain JavaScript in a string: it runs in the browser as is.
+ */
+export const EDITOR_PROBE = String.raw`
+(() => {
+  const b = (window.__bench = { programs: [], draws: [], firstDraw: null, longTasks: [], events: [], keys: [] });
+  for (const C of [window.WebGLRenderingContext, window.WebGL2RenderingContext]) {
+    if (!C) continue;
+    const p = C.prototype;
+    const createProgram = p.createProgram;
+    p.createProgram = function () { b.programs.push(performance.now()); return createProgram.apply(this, arguments); };
+    for (const name of ["drawElements", "drawArrays", "drawElementsInstanced", "drawArraysInstanced"]) {
+      const f = p[name];
+      if (!f) continue;
+      p[name] = function () {
+        const t = performance.now();
+        if (b.firstDraw === null) b.firstDraw = t;
+        b.draws.push(t);
+        return f.apply(this, arguments);
+      };
+    }
+  }
+  try {
+    new PerformanceObserver((l) => { for (const e of l.getEntries()) b.longTasks.push({ start: e.startTime, duration: e.duration }); })
+      .observe({ type: "longtask", buffered: true });
+  } catch {}
+  try {
+    new PerformanceObserver((l) => { for (const e of l.getEntries()) if (e.interactionId) b.events.push({ id: e.interactionId, name: e.name, start: e.startTime, duration: e.duration }); })
+      .observe({ type: "event", durationThreshold: 16, buffered: true });
+  } catch {}
+  // The footing and its checks: what a designer reads after each keystroke.
+  const resultText = () => {
+    const spec = document.querySelector('[data-testid="footing-spec"]');
+    const checks = document.getElementById("res-checks");
+    return (spec ? spec.textContent : "") + "|" + (checks && checks.parentElement ? checks.parentElement.textContent : "");
+  };
+  const onChange = () => {
+    const k = b.keys[b.keys.length - 1];
+    if (!k || k.resultAt !== null || resultText() === k.before) return;
+    k.resultAt = performance.now();
+    requestAnimationFrame(() => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => { k.paintAt = performance.now(); };
+      ch.port2.postMessage(0);
+    });
+  };
+  document.addEventListener("keydown", (e) => {
+    if (!/^[0-9]$/.test(e.key)) return;
+    b.keys.push({ t: e.timeStamp, before: resultText(), resultAt: null, paintAt: null });
+  }, true);
+  const start = () => new MutationObserver(onChange).observe(document.body, { subtree: true, childList: true, characterData: true });
+  if (document.body) start(); else document.addEventListener("DOMContentLoaded", start);
+})();
+`;
+
+export interface ProbeState {
+  programs: number[];
+  draws: number[];
+  firstDraw: number | null;
+  longTasks: { start: number; duration: number }[];
+  events: { id: number; name: string; start: number; duration: number }[];
+  keys: { t: number; before: string; resultAt: number | null; paintAt: number | null }[];
+}
