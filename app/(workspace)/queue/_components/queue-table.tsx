@@ -14,37 +14,49 @@ const STATE = {
 const day = (iso: string) => new Date(iso).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
 
 const col = createColumnHelper<EngineerQueueRow>();
+// Few, wide columns so a phone shows what matters (which revision, for whom, its state) without scrolling sideways.
 const columns = [
+  col.accessor("designName", {
+    header: "Revision",
+    cell: (c) => {
+      const r = c.row.original;
+      return (
+        <span className="block min-w-40">
+          <Link href={`/reviews/${r.revisionId}`} className="font-medium text-accent-800 hover:underline">{r.designName}, revision {r.number}</Link>
+          <span className="block text-xs text-slate-600">{r.projectName} ({r.projectState})</span>
+          <span className="block text-xs text-slate-500">for {r.contractor}</span>
+        </span>
+      );
+    },
+  }),
   col.accessor("state", {
     header: "State",
     cell: (c) => {
       const r = c.row.original;
       const decided = r.decision === "approve" ? "approved" : r.decision === "request_changes" ? "changes requested" : null;
-      return <span className="whitespace-nowrap"><span className={`rounded px-2 py-0.5 text-xs font-medium ${STATE[r.state].tone}`}>{STATE[r.state].label}</span>{decided ? <span className="block text-xs text-slate-500">{decided}</span> : null}</span>;
+      return <span className="block"><span className={`whitespace-nowrap rounded px-2 py-0.5 text-xs font-medium ${STATE[r.state].tone}`}>{STATE[r.state].label}</span>{decided ? <span className="block text-xs text-slate-500">{decided}</span> : null}</span>;
     },
-  }),
-  col.accessor("contractor", { header: "Contractor", cell: (c) => <span className="text-slate-700">{c.getValue()}</span> }),
-  col.accessor("projectName", { header: "Project", cell: (c) => <span>{c.getValue()} <span className="text-slate-500">({c.row.original.projectState})</span></span> }),
-  col.accessor("designName", {
-    header: "Design and revision",
-    cell: (c) => <Link href={`/reviews/${c.row.original.revisionId}`} className="font-medium text-accent-800 hover:underline">{c.getValue()}, revision {c.row.original.number}</Link>,
   }),
   col.display({
     id: "footing",
-    header: "Footing",
+    header: "Footing and failing checks",
     cell: (c) => {
       const r = c.row.original;
-      if (r.diameterIn === null || r.depthIn === null) return <span className="text-slate-500">—</span>;
-      return <span className="whitespace-nowrap tabular-nums">{r.posts ?? "?"} × ⌀{r.diameterIn} in, {r.depthIn} in deep</span>;
+      return (
+        <span className="block min-w-36">
+          {r.diameterIn === null || r.depthIn === null ? <span className="text-slate-500">No footing result</span> : <span className="tabular-nums">{r.posts ?? "?"} × ⌀{r.diameterIn} in, {r.depthIn} in deep</span>}
+          <span className={`block text-xs ${r.failing.length ? "text-red-800" : "text-slate-500"}`}>{r.failing.length ? `Fails: ${r.failing.join("; ")}` : "All checks pass"}</span>
+        </span>
+      );
     },
   }),
-  col.accessor("failing", {
-    header: "Failing checks",
-    enableSorting: false,
-    cell: (c) => (c.getValue().length === 0 ? <span className="text-slate-500">None</span> : <span className="text-red-800">{c.getValue().join("; ")}</span>),
+  col.accessor("submittedAt", {
+    header: "Submitted",
+    cell: (c) => {
+      const r = c.row.original;
+      return <span className="block whitespace-nowrap text-slate-600"><time dateTime={r.submittedAt}>{day(r.submittedAt)}</time>{r.decidedAt ? <span className="block text-xs">decided <time dateTime={r.decidedAt}>{day(r.decidedAt)}</time></span> : null}</span>;
+    },
   }),
-  col.accessor("submittedAt", { header: "Submitted", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{day(c.getValue())}</time> }),
-  col.accessor("decidedAt", { header: "Decided", cell: (c) => (c.getValue() ? <time dateTime={c.getValue()!} className="whitespace-nowrap text-slate-600">{day(c.getValue()!)}</time> : <span className="text-slate-500">—</span>) }),
 ];
 
 export function QueueTable({ page }: { page: ServerPage<EngineerQueueRow> }) {
