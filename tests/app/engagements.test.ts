@@ -260,3 +260,38 @@ describe("what an engaged engineer may do", () => {
     expect(await db("reviews").where({ revision_id: d.revisionId }).whereNull("decision").first()).toBeUndefined();
   });
 });
+
+describe("the engineer's queue across contractors", () => {
+  it("pages one queue over every contractor, filtered by contractor and by state (waiting, on hold, decided)", async () => {
+    const engineer = await freshOutsideEngineer();
+    const me = { userId: engineer.userId, organisationId: engineer.organisationId };
+    const waiting = await makeDesign();
+    const onHold = await makeDesign();
+    await engage(waiting.projectId, engineer, "accepted");
+    await engage(onHold.projectId, engineer, "accepted");
+    await engage(OTHER_PROJECT_ID, engineer, "accepted", OTHER_ORG_ID);
+    const otherRevision = (await db("revisions as r").join("designs as d", "d.id", "r.design_id").where("d.project_id", OTHER_PROJECT_ID).orderBy("r.number", "desc").first("r.id")).id;
+    const designer = (await db("users").where({ email: DESIGNER }).first("id")).id;
+    const outsider = (await db("users").where({ email: OUTSIDER }).first("id")).id;
+    await db("reviews").insert([
+      { revision_id: waiting.revisionId, organisation_id: (await db("projects").where({ id: waiting.projectId }).first("organisation_id")).organisation_id, engineer_id: engineer.userId, submitted_by: designer },
+      { revision_id: otherRevision, organisation_id: OTHER_ORG_ID, engineer_id: engineer.userId, submitted_by: outsider },
+    ]);
+    // An approval by this engineer whose design an installer then put on hold.
+    const [approval] = await db("reviews").insert({
+      revision_id: onHold.revisionId, organisation_id: (await db("projects").where({ id: onHold.projectId }).first("organisation_id")).organisation_id, engineer_id: engineer.userId,
+      submitted_by: designer, decision: "approve", decided_by: engineer.userId, decided_at: db.fn.now(), engineer_name: "Test", licence_number: "PE-T", licence_state: "CO",
+    }).returning("organisation_id");
+    await db("design_holds").insert({ design_id: onHold.designId, organisation_id: approval.organisation_id, revision_id: onHold.revisionId, reason: "Hole P1 shallower than specified.", raised_by: designer });
+
+    const all = await engineerQueue(me, {});
+    expect(all.total).toBe(3);
+    // Waiting first, then on hold (the default order).
+    expect(all.rows.map((r) => r.state)).toEqual(["waiting", "waiting", "on_hold"]);
+    expect(new Set(all.rows.map((r) => r.contractor))).toEqual(new Set(["Example Ground-Mount Co. (demo)", "Other Example Solar Co. (demo)"]));
+    const theirs = await engineerQueue(me, {}, { contractor: OTHER_ORG_ID });
+    expect(theirs.rows.map((r) => r.revisionId)).toEqual([otherRevision]);
+    expect((await engineerQueue(me, {}, { state: "on_hold" })).rows.map((r) => r.revisionId)).toEqual([onHold.revisionId]);
+    expect((await engineerQueue(me, { pageSize: 1, page: 2 })).rows).toHaveLength(1);
+  });
+});
