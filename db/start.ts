@@ -1,7 +1,8 @@
 /**
  * `npm start`: PostgreSQL under .data/ (kept between runs), migrations, demo data on an empty
  * database, the mail and file stand-ins, a fresh build when sources changed, then `next start`.
- * Ctrl-C stops everything this started. Nothing here ever deletes or re-initialises .data/pg.
+ * Ctrl-C stops everything this started. Nothing here ever deletes or re-initialises a cluster
+ * (.data/pg, or the folder recorded in .data/pg-location: see lib/cluster-location.ts).
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import crypto from "node:crypto";
@@ -15,6 +16,8 @@ import { buildApp, buildIsStale } from "./lib/build";
 import { reportAndExit } from "./lib/fail";
 import { acquireStartLock, releaseStartLock, stopOrphans, recordChild } from "./lib/run-state";
 import { assertPortFree } from "./lib/ports";
+import { markClusterCreated, resolveClusterLocation } from "./lib/cluster-location";
+import { migrateToLatest } from "./lib/migrate";
 import { ensureAppDatabase, ensureCluster, findServerBinaries, isRunning, startServer, stopServer, type Cluster } from "./lib/postgres";
 import { startStandIns, type StandIns } from "./lib/stand-ins";
 
@@ -43,8 +46,12 @@ let stopping = false;
 let lockHeld = false;
 let startedCluster = false;
 
-async function shutdown(code: number): Promise<never> {
-  if (!stopping) {
+async function shutdown(code: number): Promise<void> {
+  // A repeated Ctrl-C must not cut the stop short and leave PostgreSQL running and the lock behind.
+  // (package.json runs this with `node --import tsx`, not the tsx command: that one relays Ctrl-C to
+  // its child and SIGKILLs it when the child is slow to acknowledge, as on a busy machine.)
+  if (stopping) return;
+  {
     stopping = true;
     console.log("\npierwise: stopping…");
     server?.kill("SIGTERM");
@@ -74,8 +81,13 @@ async function main(): Promise<void> {
   await assertPortFree(ports.s3, "file store stand-in", "PIERWISE_S3_PORT");
 
   const { binDir, version } = findServerBinaries({ installIfMissing: true });
-  cluster = { binDir, version, dataDir: path.join(dataDir, "pg"), port: ports.pg };
+  const location = resolveClusterLocation(dataDir, { asRoot: process.getuid?.() === 0 });
+  cluster = { binDir, version, dataDir: location.dataDir, port: ports.pg };
   const made = ensureCluster(cluster, { throwaway: false });
+  markClusterCreated(dataDir, location);
+  if (made === "created" && location.kind === "recorded") {
+    console.log(`pierwise: new PostgreSQL cluster in ${cluster.dataDir} (owned by the postgres user, which cannot enter this checkout); its place is recorded in ${path.join(dataDir, "pg-location")}.`);
+  }
   if (isRunning(cluster)) {
     console.log("pierwise: PostgreSQL from an earlier run is still up; using it.");
   } else {
@@ -86,10 +98,10 @@ async function main(): Promise<void> {
   const databaseUrl = ensureAppDatabase(cluster, "pierwise", keptSecret("db-password"), "pierwise");
   process.env.DATABASE_URL = databaseUrl;
 
+  const applied = await migrateToLatest(databaseUrl, cluster.dataDir);
+  if (applied) console.log(`pierwise: applied ${applied} migration(s).`);
   const migrator = knex({ ...knexConfig, connection: databaseUrl });
   try {
-    const [, applied] = await migrator.migrate.latest();
-    if (applied.length) console.log(`pierwise: applied ${applied.length} migration(s).`);
     const [{ count }] = await migrator("organisations").count<{ count: string }[]>({ count: "*" });
     if (Number(count) === 0) {
       await migrator.seed.run();
@@ -139,7 +151,8 @@ async function main(): Promise<void> {
 Pierwise is running.
   App:          http://127.0.0.1:${ports.app}
   Mail viewer:  http://127.0.0.1:${ports.mailWeb}   (every e-mail the app sends lands here)
-  Data:         ${dataDir} (kept between runs)
+  Database:     ${cluster.dataDir} (kept between runs)
+  Files, keys:  ${dataDir}
   Demo sign-ins (password pierwise-demo):
     designer@demo.pierwise.test   engineer@demo.pierwise.test
     installer@demo.pierwise.test  admin@demo.pierwise.test

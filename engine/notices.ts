@@ -19,6 +19,18 @@ export const SITE_CAUTIONS = [
 export const WIND_METHOD_NOTE =
   "Wind: ASCE 7 open monoslope free-roof method (Fig. 27.3-4) for both editions. ASCE 7-22's provisions specific to ground-mounted fixed-tilt solar arrays are not implemented.";
 
+/**
+ * Wind along the rows (γ = 90°): the free-roof provisions have an along-ridge case, but its
+ * coefficients could not be read from published text here, so it is not evaluated [see README].
+ */
+export const WIND_ALONG_ROWS_NOT_CHECKED =
+  "Wind along the rows (γ = 90°, blowing parallel to the beam) was not checked: the free-roof method's along-ridge case is not evaluated, so uplift under it, the horizontal load along the beam, each post's bending about the beam's axis and the footing under that load are not covered. Have the engineer check them, or brace the rack along the row.";
+
+/** How the posts share the array's load (result.geometry.postLoadSharing). */
+export const BEAM_SHARING_CONTINUOUS =
+  "Post loads are the reactions of the beam continuous over its posts (three-moment equation, rigid supports, overhangs as cantilevers); every load case is uniform along the beam, so each post's reaction factor (its share ÷ its tributary share) is the same for dead, snow and every wind case.";
+export const BEAM_SHARING_TWO_POSTS = "Two posts: each carries its tributary share, which statics gives exactly (reaction factor 1).";
+
 export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; aisc: string; sections: string[] } {
   const e = input.site.edition;
   const lateral = input.posts.constrainedAtGrade ? "IBC §1807.3.2.2 Eq. 18-2 (constrained)" : "IBC §1807.3.2.1 Eq. 18-1 (nonconstrained)";
@@ -27,7 +39,7 @@ export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; a
     `ASCE 7-${e.slice(2)} Eq. 26.10-1 velocity pressure; Table 26.10-1 Kz; §26.8 Kzt; §26.9 Ke; Table 26.6-1 Kd`,
     "ASCE 7-16 §26.11 gust-effect factor G = 0.85 (rigid)",
     "ASCE 7-16 §27.3.2 Fig. 27.3-4 open monoslope free roof, net pressure coefficients CN",
-    `ASCE 7-${e.slice(2)} Ch. 7 snow: Eq. 7.3-1 pf, §7.4 Fig. 7.4-1 Cs`,
+    `ASCE 7-${e.slice(2)} Ch. 7 snow: Eq. 7.3-1 pf, §7.4 Fig. 7.4-1 Cs; minimum snow below 15°: ASCE 7-16 §7.3.4 rule${e === "7-22" ? " (used for 7-22 too: see warnings)" : ""}`,
     `ASCE 7-${e.slice(2)} §2.4.1 ASD load combinations`,
     lateral,
     soil,

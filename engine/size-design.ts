@@ -12,7 +12,7 @@ import type { CheckId, FootingCheck } from "./footing/checks";
 import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
 import { smallestPipeFor } from "./footing/pipe";
 import { previewGeometry } from "./geometry/preview";
-import { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
+import { BEAM_SHARING_CONTINUOUS, BEAM_SHARING_TWO_POSTS, DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
 import { autoDiameter } from "./options/auto-diameter";
 import { diameterSweep } from "./options/diameter-sweep";
 import { tiltEnvelope } from "./options/tilt-envelope";
@@ -74,7 +74,8 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       surfaceAreaFt2: dims.surfaceAreaFt2, lowestEdgeFt: heights.lowestEdgeFt, highestEdgeFt: heights.highestEdgeFt,
       meanHeightFt: heights.meanHeightFt, hOverL: main.hOverL, minClearanceIn: heights.minClearanceIn, postTopFt: heights.postTopFt,
       spacingFt: layout.spacingFt, overhangFt: layout.overhangFt,
-      posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt })),
+      posts: main.posts.map((p) => ({ id: p.id, xFt: p.xFt, yFt: 0, tributaryWidthFt: p.tributaryWidthFt, gradeFt: p.gradeFt, heightAboveGradeFt: p.heightAboveGradeFt, loadShare: p.share, reactionFactor: p.reactionFactor })),
+      postLoadSharing: main.posts.length > 2 ? BEAM_SHARING_CONTINUOUS : BEAM_SHARING_TWO_POSTS,
     },
     wind: { edition: input.site.edition, heightFt: heights.meanHeightFt, gustFactor: main.gustFactor, velocity: main.velocity, cases: windCaseRows(main), method: WIND_METHOD_NOTE },
     // Written out rather than spread (a spread is slow on this hot path); TypeScript insists every

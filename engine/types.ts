@@ -62,7 +62,13 @@ export interface DesignResult {
     postTopFt: number;
     spacingFt: number;
     overhangFt: number;
-    posts: { id: string; xFt: number; yFt: number; tributaryWidthFt: number; gradeFt: number; heightAboveGradeFt: number }[];
+    /**
+     * Each post: `loadShare` is its fraction of every array load (continuous-beam reaction);
+     * `reactionFactor` = loadShare ÷ (tributary width ÷ array width), 1 for two posts.
+     */
+    posts: { id: string; xFt: number; yFt: number; tributaryWidthFt: number; gradeFt: number; heightAboveGradeFt: number; loadShare: number; reactionFactor: number }[];
+    /** How the posts share the load, in words. */
+    postLoadSharing: string;
   };
   wind: { edition: "7-16" | "7-22"; heightFt: number; gustFactor: number; velocity: VelocityPressure; cases: WindCaseResult[]; method: string };
   snow: SnowLoad & { totalLb: number };

@@ -5,6 +5,7 @@
 import type { FootingEvaluation } from "./footing/evaluate-footing";
 import type { ArrayLoadState } from "./loads/array-loads";
 import type { DesignInput } from "./schema";
+import { WIND_ALONG_ROWS_NOT_CHECKED } from "./notices";
 
 export interface DesignWarning {
   code: string;
@@ -25,12 +26,16 @@ export function collectWarnings(input: DesignInput, states: ArrayLoadState[], ev
     if (s.hOverL < 0.25 || s.hOverL > 1.0)
       add(out, "H_OVER_L_OUT_OF_RANGE", `At ${s.tiltDeg}° tilt h/L = ${s.hOverL.toFixed(2)}, outside 0.25–1.0 where ASCE 7 Fig. 27.3-4 applies; have the engineer confirm the wind coefficients.`);
     if (s.tiltDeg > 45) add(out, "TILT_ABOVE_45", `Tilt ${s.tiltDeg}° is above the 45° the free-roof figure covers; the 45° coefficients were used.`);
-    if (s.tiltDeg < 7.5) add(out, "TILT_BELOW_7_5", `Tilt ${s.tiltDeg}° is below 7.5°: the figure's 0° row was used.`, "info");
+    if (s.tiltDeg < 7.5)
+      add(out, "TILT_BELOW_7_5", `Tilt ${s.tiltDeg}° is below 7.5°: the free-roof figure's 0° row was used, and the coefficients jump between that row and the 7.5° row (the required depth can change by a whole step between 7.4° and 7.5°); have the engineer confirm the wind coefficients.`);
+    if (input.site.edition === "7-22" && s.snow.minimumPmPsf > 0)
+      add(out, "SNOW_MINIMUM_7_16_RULE", `At ${s.tiltDeg}° tilt (under 15°) the minimum snow load used the ASCE 7-16 §7.3.4 rule (pm = pg up to 20 psf, else 20 psf, without Is as 7-22 drops it); the ASCE 7-22 rule was not available to follow here: confirm against the printed standard.`);
     if (s.heights.minClearanceIn < input.array.lowestEdgeClearanceIn - 1e-6)
       add(out, "CLEARANCE_BELOW_TARGET", `At ${s.tiltDeg}° the lowest edge clears grade by ${s.heights.minClearanceIn.toFixed(1)} in, less than the ${input.array.lowestEdgeClearanceIn} in asked for.`);
   }
   if (input.array.lowestEdgeClearanceIn < 18)
     add(out, "LOW_CLEARANCE", `Lowest edge clearance ${input.array.lowestEdgeClearanceIn} in is under the usual 18–24 in; allow for snow, vegetation and splash.`);
+  add(out, "WIND_ALONG_ROWS_NOT_CHECKED", WIND_ALONG_ROWS_NOT_CHECKED);
   if (input.site.edition === "7-22") add(out, "FREE_ROOF_FOR_7_22", "ASCE 7-22 has provisions specific to ground-mounted solar; this engine uses the free-roof method for 7-22 as for 7-16.", "info");
   if (input.posts.isolatedPoleIncrease) add(out, "LATERAL_DOUBLED", "IBC §1806.3.4 doubling of lateral bearing is applied: valid only for isolated poles not adversely affected by ½ in motion at grade.");
   if (input.posts.sideFrictionPsf) add(out, "SIDE_FRICTION_USED", `Side friction of ${input.posts.sideFrictionPsf} psf is counted against uplift: an engineer's value, not a presumptive one.`);

@@ -1,12 +1,13 @@
 /**
- * `npm test`: a throwaway PostgreSQL (own folder and port, removed afterwards), migrations, the
- * mail and file stand-ins, then the unit and integration suites; then a production build served
- * on a free port for the browser suite. Ends with "N passed, N failed" and a non-zero exit code
+ * `npm test`: a throwaway PostgreSQL (own folder under the temp folder and own port, removed
+ * afterwards), migrations, the mail and file stand-ins, then the unit and integration suites;
+ * then a production build served on a free port for the browser suite. Ends with "N passed, N failed" and a non-zero exit code
  * on any failure.
  */
 import { spawn, spawnSync } from "node:child_process";
 import crypto from "node:crypto";
 import fs from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import knex from "knex";
@@ -27,6 +28,7 @@ const filters = process.argv.slice(2);
 const distDir = process.env.PIERWISE_DIST_DIR ?? ".next";
 
 let cluster: Cluster | undefined;
+let clusterParent: string | undefined;
 let standIns: StandIns | undefined;
 
 /** Runs vitest as a child without blocking: the stand-ins in this process must keep answering. */
@@ -52,7 +54,12 @@ const typecheck = { passed: 0, failed: 0 };
 async function main(): Promise<number> {
   fs.mkdirSync(reportDir, { recursive: true });
   const { binDir, version } = findServerBinaries({ installIfMissing: true });
-  cluster = { binDir, version, dataDir: path.join(workDir, "pg"), port: await freePort() };
+  // The throwaway cluster lives under the system's temp folder, not in the checkout: as root the
+  // server runs as the postgres user, which cannot enter a private checkout (root's home, a
+  // `mktemp -d` folder), and a short path keeps the server's socket within its length limit.
+  clusterParent = fs.mkdtempSync(path.join(os.tmpdir(), "pierwise-test-"));
+  fs.chmodSync(clusterParent, 0o755);
+  cluster = { binDir, version, dataDir: path.join(clusterParent, "pg"), port: await freePort() };
   ensureCluster(cluster, { throwaway: true });
   startServer(cluster, { throwaway: true });
   const databaseUrl = ensureAppDatabase(cluster, "pierwise_test", crypto.randomBytes(12).toString("hex"), "pierwise_test");
@@ -93,7 +100,7 @@ async function main(): Promise<number> {
     });
     try {
       await waitForHttp(`http://127.0.0.1:${ports.app}/api/health`, 60_000);
-      const status = await runVitest(["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${ports.app}` }, path.join(reportDir, "e2e.json"));
+      const status = await runVitest(["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${ports.app}`, PIERWISE_DIST_DIR: distDir }, path.join(reportDir, "e2e.json"));
       if (status !== 0) failedRuns += 1;
     } finally {
       server.kill("SIGTERM");
@@ -116,6 +123,7 @@ async function cleanUp(): Promise<void> {
     console.error(String(error));
   }
   fs.rmSync(workDir, { recursive: true, force: true });
+  if (clusterParent) fs.rmSync(clusterParent, { recursive: true, force: true });
 }
 
 process.on("SIGINT", () => {

@@ -1,4 +1,5 @@
 import { AccessError, ConflictError, validationIssues, ValidationError, type FieldIssue } from "./errors";
+import { guardRequest, readLimitedText, RequestError, type GuardOptions } from "./request-guards";
 
 /** One problem in an API answer: `{ errors: [{ path, message }] }`. */
 export type FieldError = FieldIssue;
@@ -11,8 +12,9 @@ export function errorResponse(status: number, errors: FieldError[]): Response {
 
 /** Reads a JSON body; a body that is not JSON is a 422 naming the body, not a 500. */
 export async function readJson(request: Request): Promise<unknown> {
+  const text = await readLimitedText(request); // 413 past 1 MB, before parsing
   try {
-    return await request.json();
+    return JSON.parse(text);
   } catch {
     throw ValidationError.field("", "The request body must be JSON.");
   }
@@ -24,6 +26,7 @@ export async function readJson(request: Request): Promise<unknown> {
  * logged 500 that leaks nothing.
  */
 export function apiErrorResponse(error: unknown): Response {
+  if (error instanceof RequestError) return errorResponse(error.status, [{ path: error.path, message: error.message }]);
   if (error instanceof AccessError) return errorResponse(error.status, [{ path: "", message: error.message }]);
   const issues = validationIssues(error);
   if (issues) return errorResponse(422, issues);
@@ -35,9 +38,10 @@ export function apiErrorResponse(error: unknown): Response {
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
 /** Wraps a route handler so every failure is answered by apiErrorResponse. */
-export function apiRoute<C = unknown>(handler: Handler<C>): Handler<C> {
+export function apiRoute<C = unknown>(handler: Handler<C>, guard: GuardOptions = {}): Handler<C> {
   return async (request, context) => {
     try {
+      guardRequest(request, guard); // origin, content type and body size (request-guards.ts)
       return await handler(request, context);
     } catch (error) {
       return apiErrorResponse(error);

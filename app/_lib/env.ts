@@ -19,7 +19,14 @@ export const env = {
     return "development-only-secret-not-for-production-use-0000";
   },
   get smtp() {
-    return { host: read("SMTP_HOST", "127.0.0.1"), port: Number(read("SMTP_PORT", "1025")) };
+    return {
+      host: read("SMTP_HOST", "127.0.0.1"),
+      port: Number(read("SMTP_PORT", "1025")),
+      // For a mail service that wants a login and TLS (several app servers share one); unset for the local stand-in.
+      user: read("SMTP_USER", ""),
+      password: read("SMTP_PASSWORD", ""),
+      secure: read("SMTP_SECURE", "") === "true",
+    };
   },
   get mailFrom() {
     return read("MAIL_FROM", "Pierwise <no-reply@pierwise.test>");
@@ -28,6 +35,7 @@ export const env = {
     return {
       endpoint: read("S3_ENDPOINT", "http://127.0.0.1:4569"),
       bucket: read("S3_BUCKET", "pierwise-uploads"),
+      region: read("S3_REGION", "us-east-1"),
       accessKeyId: read("S3_ACCESS_KEY_ID", "S3RVER"),
       secretAccessKey: read("S3_SECRET_ACCESS_KEY", "S3RVER"),
     };

@@ -10,7 +10,7 @@ let client: S3Client | undefined;
 function s3(): S3Client {
   client ??= new S3Client({
     endpoint: env.s3.endpoint,
-    region: "us-east-1",
+    region: env.s3.region,
     forcePathStyle: true,
     credentials: { accessKeyId: env.s3.accessKeyId, secretAccessKey: env.s3.secretAccessKey },
   });

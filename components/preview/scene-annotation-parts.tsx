@@ -3,6 +3,7 @@ import { Billboard, Line, Text } from "@react-three/drei";
 import { useFrame } from "@react-three/fiber";
 import { useMemo, useRef, useState } from "react";
 import { Vector3, type Group, type PerspectiveCamera } from "three";
+import { configureTextBuilder } from "troika-three-text";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { arrowParts, clearanceDimension, embedmentDimension, northMarker, windArrow, type DimensionLine } from "./scene-annotations";
 import type { Bounds } from "./camera-framing";
@@ -10,6 +11,11 @@ import type { Vec3 } from "./scene-mapping";
 import { latinOnly, windSceneLabel, type PreviewFigures } from "./preview-labels";
 import { COLOURS, FONT_URL } from "./scene-style";
 import { MATERIALS, UNIT_CONE, UNIT_CYLINDER } from "./shared-resources";
+
+// Lay out label text on the main thread: the worker the text builder would start is made from a
+// blob: URL and loads code into itself, which the content-security policy (proxy.ts) refuses.
+// The scene has a handful of short labels, so the main thread does not notice the work.
+configureTextBuilder({ useWorker: false });
 
 type Side = "left" | "center" | "right";
 

@@ -1,12 +1,25 @@
 /**
  * Up-front WebGL check, so browsers with WebGL switched off get the 2D elevation straight away
- * instead of waiting for the 3D canvas to fail. The probe context is released at once: browsers
- * allow only a few live contexts per page.
+ * instead of waiting for the 3D canvas to fail. The answer is kept for the life of the page: every
+ * preview on the page (and every remount) reuses it, so the probe asks the browser for one WebGL
+ * context at most once. The probe context is released at once: browsers allow only a few live
+ * contexts per page.
  */
+let known: boolean | undefined;
+
+/** Set on the probe's own canvas, so the probe can be told apart from the scene's canvas. */
+export const PROBE_CANVAS_ATTRIBUTE = "data-webgl-probe";
+
 export function webglAvailable(): boolean {
   if (typeof document === "undefined") return false;
+  known ??= probe();
+  return known;
+}
+
+function probe(): boolean {
   try {
     const canvas = document.createElement("canvas");
+    canvas.setAttribute(PROBE_CANVAS_ATTRIBUTE, "");
     const gl = (canvas.getContext("webgl2") ?? canvas.getContext("webgl")) as WebGLRenderingContext | null;
     if (!gl) return false;
     gl.getExtension("WEBGL_lose_context")?.loseContext();

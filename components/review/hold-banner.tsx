@@ -1,3 +1,4 @@
+import { dateTimeInWords } from "@/app/_lib/review/dates";
 import type { HoldRecord } from "@/db/queries/holds";
 import { ClearHoldForm } from "./clear-hold-form";
 
@@ -5,7 +6,7 @@ import { ClearHoldForm } from "./clear-hold-form";
  * A design on hold, shown at the top of every screen of that design until an engineer clears it.
  * Engineers get the clear form beside each hold.
  */
-export function HoldBanner({ holds, canClear = false }: { holds: HoldRecord[]; canClear?: boolean }) {
+export function HoldBanner({ holds, canClear = false, timeZone }: { holds: HoldRecord[]; canClear?: boolean; timeZone?: string }) {
   if (holds.length === 0) return null;
   return (
     <section role="alert" aria-label="Design on hold" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
@@ -15,7 +16,7 @@ export function HoldBanner({ holds, canClear = false }: { holds: HoldRecord[]; c
         {holds.map((h) => (
           <li key={h.id} className="text-sm">
             <p className="font-semibold">{h.reason}</p>
-            <p className="text-xs">Raised by {h.raisedByName} on {h.raisedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
+            <p className="text-xs">Raised by {h.raisedByName} on {dateTimeInWords(h.raisedAt, timeZone)}</p>
             {canClear ? <ClearHoldForm holdId={h.id} /> : null}
           </li>
         ))}

@@ -29,24 +29,24 @@ export async function getDesign(id: string): Promise<Design | undefined> {
   return db("designs").where({ id }).first("id", "project_id as projectId", "organisation_id as organisationId", "name", "created_at as createdAt");
 }
 
-export const DESIGN_SORTS = { name: "d.name", latestNumber: "lr.number", status: "lr.status", depthIn: "(lr.result->'footing'->>'depthIn')::float", updatedAt: "coalesce(lr.created_at, d.created_at)" } as const;
+export const DESIGN_SORTS = { name: "d.name", latestNumber: "lr.number", status: "lr.status", depthIn: "lr.footing_depth_in", updatedAt: "coalesce(lr.created_at, d.created_at)" } as const;
 
-/** One page of a project's designs with their latest revision's number, status and footing. */
+/** One page of a project's designs with their latest revision's number, status and footing (stored columns, no JSON read). */
 export async function listDesigns(projectId: string, query: ListQuery = {}): Promise<ListPage<DesignRow>> {
   const base = db("designs as d")
-    .joinRaw("left join lateral (select * from revisions r where r.design_id = d.id order by r.number desc limit 1) lr on true")
+    .joinRaw(`left join lateral (select r.number, r.status, r.note, r.created_at, r.footing_depth_in, r.footing_diameter_in, r.footing_pass
+      from revisions r where r.design_id = d.id order by r.number desc limit 1) lr on true`)
     .where("d.project_id", projectId);
   const page = await listPage<DesignRow & { updatedAt: Date }>(base, query, {
     sortable: DESIGN_SORTS,
     defaultSort: "updatedAt",
     defaultDir: "desc",
+    notNull: ["name"],
     search: ["d.name", "lr.status", "lr.note"],
     select: (qb) =>
       qb.select("d.id", "d.name", "lr.number as latestNumber", "lr.status",
         db.raw("coalesce(lr.created_at, d.created_at) as \"updatedAt\""),
-        db.raw("(lr.result->'footing'->>'depthIn')::float as \"depthIn\""),
-        db.raw("(lr.result->'footing'->>'diameterIn')::float as \"diameterIn\""),
-        db.raw("(lr.result->'footing'->>'pass')::boolean as pass")),
+        "lr.footing_depth_in as depthIn", "lr.footing_diameter_in as diameterIn", "lr.footing_pass as pass"),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
 }

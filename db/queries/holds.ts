@@ -54,3 +54,31 @@ export async function clearHoldRow(holdId: string, clearedBy: string, note: stri
   const n = await db("design_holds").where({ id: holdId }).whereNull("cleared_at").update({ cleared_by: clearedBy, cleared_at: db.fn.now(), clear_note: note });
   return n === 1;
 }
+
+/** Every hold raised on one revision, newest first (the field spec shows the cleared ones' notes). */
+export async function holdsOfRevision(revisionId: string): Promise<HoldRecord[]> {
+  return holdsQuery().where("h.revision_id", revisionId).orderBy("h.raised_at", "desc");
+}
+
+/**
+ * Who must hear that a hold was cleared: the revision's author and whoever submitted it (the
+ * designer side), and every installer who logged an as-built hole on it.
+ */
+export async function holdAudience(revisionId: string): Promise<{ email: string; name: string }[]> {
+  const ids = db("revisions").where({ id: revisionId }).whereNotNull("author_id").select("author_id as id")
+    .union((q) => q.from("reviews").where({ revision_id: revisionId }).select("submitted_by"))
+    .union((q) => q.from("as_built_entries").where({ revision_id: revisionId }).select("recorded_by"));
+  return db("users").whereIn("id", ids).orderBy("email").select("email", "name");
+}
+
+/** Open holds of the organisation with the revision each was raised on, oldest first: the engineer's list opens with them. */
+export async function openHoldsOfOrganisation(organisationId: string): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null })[]> {
+  return holdsQuery()
+    .join("designs as d", "d.id", "h.design_id")
+    .join("projects as p", "p.id", "d.project_id")
+    .leftJoin("revisions as rv", "rv.id", "h.revision_id")
+    .select(["d.name as designName", "p.name as projectName", "rv.number"])
+    .where("h.organisation_id", organisationId)
+    .whereNull("h.cleared_at")
+    .orderBy("h.raised_at", "asc");
+}

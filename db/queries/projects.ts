@@ -43,10 +43,12 @@ export async function getProject(id: string): Promise<Project | undefined> {
   return db("projects").where({ id }).first(columns);
 }
 
-export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "\"designCount\"", updatedAt: "p.updated_at" } as const;
+export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
 
 /**
- * One page of the organisation's projects with their criteria card and design count; with
+ * One page of the organisation's projects with their criteria card and design count. The design
+ * count is a column kept by a trigger (so sorting by it reads no designs); `q` goes through the
+ * trigram index over name, address and state, and matches a criteria card through its id. With
  * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside engineer).
  */
 export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string): Promise<ListPage<ProjectRow>> {
@@ -59,10 +61,14 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     sortable: PROJECT_SORTS,
     defaultSort: "updatedAt",
     defaultDir: "desc",
+    notNull: ["name", "state", "designCount", "updatedAt"],
     search: ["p.name", "p.address", "p.state", "c.jurisdiction"],
+    // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
+    match: (w, pattern) =>
+      w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
+        .orWhereIn("p.criteria_card_id", db("criteria_cards").where("organisation_id", organisationId).whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [pattern]).select("id")),
     select: (qb) =>
-      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName",
-        db.raw("(select count(*)::int from designs d where d.project_id = p.id) as \"designCount\"")),
+      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount"),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
 }

@@ -26,6 +26,23 @@ export interface RevisionContext {
   authorName: string | null;
   createdAt: Date;
   criteria: { jurisdiction: string; state: string; values: Record<string, unknown>; sources: Record<string, unknown> } | null;
+  /** True when project name, address, state and criteria are the approval's snapshot, not the live project. */
+  factsPinned: boolean;
+  organisationName: string;
+  /** IANA time zone the organisation's dates are shown in. */
+  timeZone: string;
+}
+
+/** The project facts an approval was given, pinned with it (reviews.facts_snapshot). */
+export interface FactsSnapshot {
+  projectName: string;
+  projectAddress: string;
+  projectState: string;
+  criteria: RevisionContext["criteria"];
+}
+
+export function factsOf(ctx: RevisionContext): FactsSnapshot {
+  return { projectName: ctx.projectName, projectAddress: ctx.projectAddress, projectState: ctx.projectState, criteria: ctx.criteria };
 }
 
 const json = <T>(v: unknown): T => (typeof v === "string" ? JSON.parse(v) : v) as T;
@@ -37,6 +54,9 @@ export async function getRevisionContext(revisionId: string, trx: Knex = db): Pr
     .join("projects as p", "p.id", "d.project_id")
     .leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id")
     .leftJoin("users as u", "u.id", "r.author_id")
+    .join("organisations as o", "o.id", "r.organisation_id")
+    // An approved revision reads the facts pinned with its approval, never the live project.
+    .leftJoin("reviews as ap", (j) => j.on("ap.revision_id", "r.id").andOnVal("ap.decision", "approve"))
     .where("r.id", revisionId)
     .first(
       "r.id", "r.organisation_id as organisationId", "r.design_id as designId", "d.name as designName",
@@ -44,15 +64,18 @@ export async function getRevisionContext(revisionId: string, trx: Knex = db): Pr
       "r.number", "r.status", "r.input", "r.result", "r.engine_version as engineVersion", "r.content_hash as contentHash",
       "r.author_id as authorId", "u.name as authorName", "r.created_at as createdAt",
       "c.jurisdiction as cJurisdiction", "c.state as cState", "c.values as cValues", "c.sources as cSources",
+      "o.name as organisationName", "o.time_zone as timeZone", "ap.facts_snapshot as snapshot",
     );
   if (!row) return undefined;
-  const { cJurisdiction, cState, cValues, cSources, ...rest } = row;
-  return {
+  const { cJurisdiction, cState, cValues, cSources, snapshot, ...rest } = row;
+  const live: RevisionContext = {
     ...rest,
     input: json(rest.input),
     result: json(rest.result),
     criteria: cJurisdiction ? { jurisdiction: cJurisdiction, state: cState, values: json(cValues), sources: json(cSources ?? {}) } : null,
+    factsPinned: false,
   };
+  return snapshot ? { ...live, ...json<FactsSnapshot>(snapshot), factsPinned: true } : live;
 }
 
 /** Locks the revision row for a status change, so two decisions cannot race. */
@@ -99,6 +122,10 @@ export interface ReviewRecord {
   licenceState: string | null;
   licenceExpiresOn: string | null;
   letterFileKey: string | null;
+  /** Failing checks approved anyway, each with the engineer's reason (empty for other decisions). */
+  overrides: { checkId: string; title: string; ratio: number; reason: string }[];
+  /** The public /verify/<code> code of an approval. */
+  verifyCode: string | null;
   comments: { id: string; fieldPath: string | null; body: string; createdAt: Date }[];
 }
 
@@ -115,12 +142,13 @@ export async function reviewsOfRevision(revisionId: string, trx: Knex = db): Pro
       "v.decided_by as decidedBy", "v.decided_at as decidedAt", "v.engineer_name as engineerName",
       "v.licence_number as licenceNumber", "v.licence_state as licenceState",
       trx.raw("to_char(v.licence_expires_on, 'YYYY-MM-DD') as \"licenceExpiresOn\""), "v.letter_file_key as letterFileKey",
+      "v.overrides", "v.verify_code as verifyCode",
     );
   const comments = rows.length
     ? await trx("review_comments").whereIn("review_id", rows.map((r) => r.id)).orderBy("created_at", "asc")
         .select("id", "review_id as reviewId", "field_path as fieldPath", "body", "created_at as createdAt")
     : [];
-  return rows.map((r) => ({ ...r, comments: comments.filter((c) => c.reviewId === r.id).map(({ reviewId: _r, ...c }) => c) }));
+  return rows.map((r) => ({ ...r, overrides: json(r.overrides ?? []), comments: comments.filter((c) => c.reviewId === r.id).map(({ reviewId: _r, ...c }) => c) }));
 }
 
 export async function insertReview(trx: Knex.Transaction, r: { revisionId: string; organisationId: string; engineerId: string; submittedBy: string }): Promise<string> {
@@ -140,6 +168,8 @@ export async function recordDecision(
     licence: { number: string; state: string; expiresOn: string } | null;
     letterFileKey: string | null;
     comments: { fieldPath: string | null; body: string }[];
+    /** Approval only: what is pinned with it. */
+    approval?: { overrides: ReviewRecord["overrides"]; facts: FactsSnapshot; verifyCode: string };
   },
 ): Promise<void> {
   // Comments first: once the review row says "approve" the trigger refuses new comments on it.
@@ -155,5 +185,13 @@ export async function recordDecision(
     licence_state: d.licence?.state ?? null,
     licence_expires_on: d.licence?.expiresOn ?? null,
     letter_file_key: d.letterFileKey,
+    ...(d.approval
+      ? { overrides: JSON.stringify(d.approval.overrides), facts_snapshot: JSON.stringify(d.approval.facts), verify_code: d.approval.verifyCode }
+      : {}),
   });
+}
+
+/** Whether a decision that names this stored letter was committed (its file must then be kept). */
+export async function letterIsRecorded(letterFileKey: string): Promise<boolean> {
+  return Boolean(await db("reviews").where({ letter_file_key: letterFileKey }).first("id"));
 }

@@ -123,21 +123,24 @@ export async function revisionNumbers(designId: string): Promise<{ id: string; n
   return db("revisions").where({ design_id: designId }).orderBy("number", "desc").select("id", "number", "created_at as createdAt");
 }
 
-export const REVISION_SORTS = { number: "r.number", status: "r.status", authorName: "u.name", createdAt: "r.created_at", depthIn: "(r.result->'footing'->>'depthIn')::float" } as const;
+export const REVISION_SORTS = { number: "r.number", status: "r.status", authorName: "u.name", createdAt: "r.created_at", depthIn: "r.footing_depth_in" } as const;
 
-/** One page of a design's revisions, without the heavy input and result (only the footing headline). */
+/**
+ * One page of a design's revisions, without the heavy input and result: the footing headline
+ * comes from stored columns. Number, status and time are never null, so the (design_id, number)
+ * index serves the default newest-first order.
+ */
 export async function listRevisions(designId: string, query: ListQuery = {}): Promise<ListPage<RevisionRow>> {
   const base = db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.design_id", designId);
   const page = await listPage<RevisionRow & { createdAt: Date }>(base, query, {
     sortable: REVISION_SORTS,
     defaultSort: "number",
     defaultDir: "desc",
+    notNull: ["number", "status", "createdAt"],
     search: ["r.note", "u.name", "r.status", "r.number"],
     select: (qb) =>
       qb.select("r.id", "r.number", "r.status", "r.note", "u.name as authorName", "r.created_at as createdAt", "r.engine_version as engineVersion",
-        db.raw("(r.result->'footing'->>'depthIn')::float as \"depthIn\""),
-        db.raw("(r.result->'footing'->>'diameterIn')::float as \"diameterIn\""),
-        db.raw("(r.result->'footing'->>'pass')::boolean as pass")),
+        "r.footing_depth_in as depthIn", "r.footing_diameter_in as diameterIn", "r.footing_pass as pass"),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, createdAt: new Date(r.createdAt).toISOString() })) };
 }

@@ -11,6 +11,8 @@ export interface MemberRecord {
   roles: Role[];
   /** When the password was last reset; sessions that began earlier are no longer honoured. */
   passwordChangedAt?: Date | null;
+  /** The organisation's IANA time zone, for dates in words. */
+  timeZone?: string;
 }
 
 /** Postgres returns enum arrays as "{a,b}" text through pg; normalise either form. */
@@ -30,7 +32,7 @@ export async function findActiveMember(userId: string, organisationId: string): 
     .join("organisations as o", "o.id", "m.organisation_id")
     .where({ "m.user_id": userId, "m.organisation_id": organisationId })
     .whereNull("m.deactivated_at")
-    .first("u.id as userId", "u.email", "u.name", "o.id as organisationId", "o.name as organisationName", "m.roles", "u.password_changed_at as passwordChangedAt");
+    .first("u.id as userId", "u.email", "u.name", "o.id as organisationId", "o.name as organisationName", "m.roles", "u.password_changed_at as passwordChangedAt", "o.time_zone as timeZone");
   return row ? { ...row, roles: parseRoles(row.roles) } : undefined;
 }
 

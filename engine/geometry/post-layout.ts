@@ -4,8 +4,8 @@
  * Posts stand in one line under a single beam at mid-slope of the array (plan offset y = 0).
  * Spacing given, or computed as width / count so every post carries an equal share with end
  * overhangs of half a spacing. Tributary width: end post = overhang + spacing/2, interior
- * post = spacing (simple-span shares; the continuity of a beam over three or more posts puts
- * roughly 10–25 % more on the first interior post, which this method does not add) [common practice].
+ * post = spacing. The loads posts carry come from the continuous beam (`continuous-beam.ts`);
+ * the tributary width is kept to report each post's reaction factor against it.
  *
  * @example postLayout({ widthFt: 20, count: 2 }) // xFt [-5, 5], tributaryWidthFt [10, 10]
  */

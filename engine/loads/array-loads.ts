@@ -4,13 +4,15 @@
  *
  * Statics: dead and snow act at the array centroid, which sits over the beam (mid-slope), so they
  * add vertical load only. Wind acts as resolved by `arrayWindForce`; at each post's grade the
- * overturning moment is M_top + H × (post height above its own grade). Each post takes the
- * fraction tributaryWidth / arrayWidth of every array load, so the posts' reactions sum to the
- * applied loads.
+ * overturning moment is M_top + H × (post height above its own grade). Each post takes its
+ * share of every array load as a reaction of the beam continuous over the posts
+ * (`continuousBeamShares`; with two posts that is the tributary share exactly), so the posts'
+ * reactions sum to the applied loads.
  */
 import type { DesignInput } from "../schema";
 import { arrayDimensions, type ArrayDimensions } from "../geometry/array-dimensions";
 import { gradeHeights, type GradeHeights } from "../geometry/grade";
+import { continuousBeamShares } from "../geometry/continuous-beam";
 import { postLayout, type PostLayout } from "../geometry/post-layout";
 import { snowLoad, SNOW_IMPORTANCE, type SnowLoad } from "../snow/snow-load";
 import { arrayWindForce, type ArrayWindForce } from "../wind/array-wind-force";
@@ -32,7 +34,10 @@ export interface PostLoad {
   id: string;
   xFt: number;
   tributaryWidthFt: number;
+  /** Fraction of every array load on this post (continuous-beam reaction / total load). */
   share: number;
+  /** share ÷ tributary share: 1 for two posts; above 1 where continuity adds load. */
+  reactionFactor: number;
   heightAboveGradeFt: number;
   gradeFt: number;
   deadLb: number;
@@ -97,11 +102,12 @@ export function arrayLoads(input: DesignInput, tiltDeg: number, clearanceTiltDeg
     is: SNOW_IMPORTANCE[site.riskCategory], tiltDeg, slippery: array.slipperySurface,
   });
   const snowTotalLb = snow.designPsf * dims.widthFt * horizontalFt;
+  const shares = continuousBeamShares({ widthFt: dims.widthFt, xFt: layout.xFt });
   const postLoads: PostLoad[] = layout.xFt.map((xFt, i) => {
-    const share = layout.tributaryWidthFt[i] / dims.widthFt;
+    const share = shares[i];
     const hp = heights.postHeightAboveGradeFt[i];
     return {
-      id: POST_IDS[i] ?? `P${i + 1}`, xFt, tributaryWidthFt: layout.tributaryWidthFt[i], share, heightAboveGradeFt: hp,
+      id: POST_IDS[i] ?? `P${i + 1}`, xFt, tributaryWidthFt: layout.tributaryWidthFt[i], share, reactionFactor: (share * dims.widthFt) / layout.tributaryWidthFt[i], heightAboveGradeFt: hp,
       gradeFt: heights.postGradeFt[i], deadLb: share * deadArrayLb, snowLb: share * snowTotalLb,
       wind: windCases.map(({ force: f }) => ({
         shearLb: share * f.horizontalLb,

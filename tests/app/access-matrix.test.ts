@@ -128,7 +128,7 @@ const MATRIX: MatrixRow[] = [
   { file: "app/(workspace)/criteria/actions.ts", name: "saveCriteriaCardAction", expect: only({ admin: 422, designer: 422 }, { nobody: SIGN_IN }), setup: async () => ({ args: formArgs({ cardId: DEMO_CARD_ID, jurisdiction: "", state: "CO" }) }) },
   // ── review, field spec, as-built, report (issue 6) ─────────────────────────────────────────────
   { file: "app/api/revisions/[revisionId]/submit/route.ts", name: "POST", expect: only({ designer: 200 }), setup: async () => ({ params: { revisionId: (await makeDesign()).revisionId }, body: { engineerId: await reviewUserId(CALLERS.engineer) } }) },
-  { file: "app/api/revisions/[revisionId]/review/route.ts", name: "POST", expect: only({ engineer: 200 }), setup: async () => ({ params: { revisionId: (await freshInReview()).revisionId }, body: { decision: "approve" } }) },
+  { file: "app/api/revisions/[revisionId]/review/route.ts", name: "POST", expect: only({ engineer: 200 }), setup: async () => ({ params: { revisionId: (await freshInReview()).revisionId }, body: { decision: "approve", password: DEMO_PASSWORD } }) },
   { file: "app/api/revisions/[revisionId]/report.pdf/route.ts", name: "GET", expect: only({ admin: 200, designer: 200, engineer: 200, installer: 200 }), setup: async () => ({ params: { revisionId: (await makeDesign()).revisionId } }) },
   {
     file: "app/api/revisions/[revisionId]/letter/route.ts", name: "GET", expect: only({ admin: 200, designer: 200, engineer: 200, installer: 200 }),
@@ -152,11 +152,11 @@ const MATRIX: MatrixRow[] = [
   },
   {
     file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "decideReviewAction", expect: only({ engineer: 200 }, { nobody: SIGN_IN }),
-    setup: async () => ({ args: formArgs({ revisionId: (await freshInReview()).revisionId, decision: "approve" }) }),
+    setup: async () => ({ args: formArgs({ revisionId: (await freshInReview()).revisionId, decision: "approve", password: DEMO_PASSWORD }) }),
   },
   {
     file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "clearHoldAction", expect: only({ engineer: 200 }, { nobody: SIGN_IN }),
-    setup: async () => ({ args: formArgs({ holdId: (await freshAsBuilt({ hold: true })).holdId!, note: "Cleared by the access matrix." }) }),
+    setup: async () => ({ args: formArgs({ holdId: (await freshAsBuilt({ hold: true })).holdId!, note: "Cleared by the access matrix.", confirm: "yes" }) }),
   },
   {
     file: "app/(workspace)/field/[revisionId]/actions.ts", name: "recordAsBuiltAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),

@@ -3,6 +3,7 @@
  * presumed soil, puts the design on hold and e-mails the approving engineer and the designer;
  * only an engineer clears the hold. Photos go to the S3 stand-in.
  */
+import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import { recordAsBuiltAction } from "@/app/(workspace)/field/[revisionId]/actions";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
@@ -12,6 +13,7 @@ import { getObject } from "@/app/_lib/storage";
 import { db } from "@/db/client";
 import { openHolds } from "@/db/queries/holds";
 import { mailTo } from "../support/mailbox";
+import { DEMO_PASSWORD } from "../support/review-fixtures";
 import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
 
@@ -20,7 +22,7 @@ async function approved() {
   await actAs(DESIGNER);
   await submit(jsonRequest("POST", "/x", { engineerId: await userId(ENGINEER) }), params({ revisionId: d.revisionId }));
   await actAs(ENGINEER);
-  await review(jsonRequest("POST", "/x", { decision: "approve" }), params({ revisionId: d.revisionId }));
+  await review(jsonRequest("POST", "/x", { decision: "approve", password: DEMO_PASSWORD }), params({ revisionId: d.revisionId }));
   const result = (await db("revisions").where({ id: d.revisionId }).first("result")).result;
   return { ...d, depthIn: result.footing.depthIn as number, diameterIn: result.footing.diameterIn as number };
 }
@@ -40,7 +42,9 @@ async function record(email: string, fields: Record<string, string>, photos: Fil
 describe("as-built entries and holds", () => {
   it("records a hole as specified, with a photo in object storage, and raises no hold", async () => {
     const d = await approved();
-    const photo = new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3])], "hole-p1.jpg", { type: "image/jpeg" });
+    // A real JPEG: the upload policy reads the image header, so a bare signature is refused.
+    const jpeg = new Uint8Array(await sharp({ create: { width: 40, height: 30, channels: 3, background: { r: 100, g: 100, b: 100 } } }).jpeg().toBuffer());
+    const photo = new File([jpeg], "hole-p1.jpg", { type: "image/jpeg" });
     const out = await record(INSTALLER, { revisionId: d.revisionId, postId: "P1", measuredDiameterIn: String(d.diameterIn), measuredDepthIn: String(d.depthIn + 2), groundFound: "as_expected", notes: "Clean hole." }, [photo]);
     expect(out).toMatchObject({ kind: "value", value: { ok: true } });
     const entry = await db("as_built_entries").where({ revision_id: d.revisionId }).first();
@@ -48,7 +52,7 @@ describe("as-built entries and holds", () => {
     expect(entry.photo_keys).toHaveLength(1);
     const stored = await getObject(entry.photo_keys[0]);
     expect(stored.contentType).toBe("image/jpeg");
-    expect([...stored.body]).toEqual([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3]);
+    expect(stored.body).toEqual(jpeg);
     expect(await openHolds(d.designId)).toEqual([]);
   });
 
@@ -105,8 +109,8 @@ describe("as-built entries and holds", () => {
     }
     await actAs(ENGINEER);
     expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "" })))).toMatchObject({ value: { fieldErrors: { note: [expect.stringMatching(/how the hold was resolved/)] } } });
-    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "Hole re-bored to 30 in and inspected." })))).toMatchObject({ value: { ok: true } });
+    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "Hole re-bored to 30 in and inspected.", confirm: "yes" })))).toMatchObject({ value: { ok: true } });
     expect(await openHolds(d.designId)).toEqual([]);
-    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "again" })))).toMatchObject({ value: { message: "This hold was already cleared." } });
+    expect(await outcomeOf(() => clearHoldAction({}, form({ holdId: hold.id, note: "again", confirm: "yes" })))).toMatchObject({ value: { message: "This hold was already cleared." } });
   });
 });

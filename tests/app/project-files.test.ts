@@ -107,7 +107,7 @@ describe("POST /api/projects/:id/files", () => {
     big.set([0x25, 0x50, 0x44, 0x46, 0x2d]); // a PDF header: only the size is wrong
     const response = await upload(uploadRequest(big, "huge.pdf"), params({ projectId: DEMO_SLOPED_PROJECT_ID }));
     expect(response.status).toBe(422);
-    expect((await response.json()).errors).toEqual([{ path: "file", message: "File must be at most 15 MB" }]);
+    expect((await response.json()).errors).toEqual([{ path: "file", message: "huge.pdf is over 15 MB: each file must be at most 15 MB" }]);
     const declared = new Request("http://127.0.0.1/", { method: "POST", headers: { "content-length": String(40 * 1024 * 1024), "content-type": "multipart/form-data; boundary=x" }, body: "--x--" });
     expect((await upload(declared, params({ projectId: DEMO_SLOPED_PROJECT_ID }))).status).toBe(422);
     expect(await storedKeys(DEMO_SLOPED_PROJECT_ID)).toEqual([]);

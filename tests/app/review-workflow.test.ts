@@ -9,6 +9,7 @@ import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { db } from "@/db/client";
 import { twoPostDesignInput } from "@/engine";
 import { firstLink, mailTo } from "../support/mailbox";
+import { DEMO_PASSWORD } from "../support/review-fixtures";
 import { actAs, jsonRequest, params } from "../support/next-context";
 import { ADMIN, DESIGNER, ENGINEER, INSTALLER, OUTSIDER, addRevision, makeDesign, userId } from "../support/review-fixtures";
 
@@ -86,14 +87,14 @@ describe("superseded (derived)", () => {
     const { getRevisionContext } = await import("@/db/queries/reviews");
     const { designId, revisionId: first } = await makeDesign();
     await submitAs(DESIGNER, first);
-    await decideAs(ENGINEER, first, { decision: "approve" });
+    await decideAs(ENGINEER, first, { decision: "approve", password: DEMO_PASSWORD });
     expect((await revisionStanding((await getRevisionContext(first))!)).status).toBe("approved");
     // A later edit is a new draft revision; the approved one stays approved until the new one is approved.
     const second = await addRevision(designId, { ...twoPostDesignInput, array: { ...twoPostDesignInput.array, tiltDeg: 25 } });
     expect(await statusOf(second)).toBe("draft");
     expect((await revisionStanding((await getRevisionContext(first))!)).status).toBe("approved");
     await submitAs(DESIGNER, second);
-    await decideAs(ENGINEER, second, { decision: "approve" });
+    await decideAs(ENGINEER, second, { decision: "approve", password: DEMO_PASSWORD });
     const standing = await revisionStanding((await getRevisionContext(first))!);
     expect(standing.status).toBe("superseded");
     expect(standing.supersededBy?.id).toBe(second);
@@ -124,7 +125,7 @@ describe("decide a review", () => {
   it("approves, recording the engineer's name, licence number, state and time, and e-mails the designer", async () => {
     const { revisionId } = await makeDesign();
     await submitAs(DESIGNER, revisionId);
-    const out = await decideAs(ENGINEER, revisionId, { decision: "approve", comments: "Checked against the county criteria." });
+    const out = await decideAs(ENGINEER, revisionId, { decision: "approve", password: DEMO_PASSWORD, comments: "Checked against the county criteria." });
     expect(out).toMatchObject({ status: 200, body: { status: "approved" } });
     const rec = await db("reviews").where({ revision_id: revisionId }).first();
     // Demo licence: db/seeds/01_demo_accounts.ts (invented number, CO).
@@ -150,19 +151,19 @@ describe("decide a review", () => {
   it("is for engineers of the organisation only", async () => {
     const { revisionId } = await makeDesign();
     await submitAs(DESIGNER, revisionId);
-    expect((await decideAs(null, revisionId, { decision: "approve" })).status).toBe(401);
-    expect((await decideAs(OUTSIDER, revisionId, { decision: "approve" })).status).toBe(404);
-    for (const who of [DESIGNER, INSTALLER, ADMIN]) expect((await decideAs(who, revisionId, { decision: "approve" })).status).toBe(403);
+    expect((await decideAs(null, revisionId, { decision: "approve", password: DEMO_PASSWORD })).status).toBe(401);
+    expect((await decideAs(OUTSIDER, revisionId, { decision: "approve", password: DEMO_PASSWORD })).status).toBe(404);
+    for (const who of [DESIGNER, INSTALLER, ADMIN]) expect((await decideAs(who, revisionId, { decision: "approve", password: DEMO_PASSWORD })).status).toBe(403);
     expect(await statusOf(revisionId)).toBe("in_review");
   });
 
   it("only decides a revision in review (409)", async () => {
     const { revisionId } = await makeDesign();
-    const draft = await decideAs(ENGINEER, revisionId, { decision: "approve" });
+    const draft = await decideAs(ENGINEER, revisionId, { decision: "approve", password: DEMO_PASSWORD });
     expect(draft.status).toBe(409);
     expect(draft.body.errors[0].message).toMatch(/Only a revision in review can be decided/);
     await submitAs(DESIGNER, revisionId);
-    await decideAs(ENGINEER, revisionId, { decision: "approve" });
+    await decideAs(ENGINEER, revisionId, { decision: "approve", password: DEMO_PASSWORD });
     expect((await decideAs(ENGINEER, revisionId, { decision: "request-changes", comments: "late" })).status).toBe(409);
   });
 
@@ -172,7 +173,7 @@ describe("decide a review", () => {
     // A second engineer-designer could submit it; here the row is moved to review directly.
     await db("revisions").where({ id: own }).update({ status: "in_review" });
     await db("reviews").insert({ revision_id: own, organisation_id: (await db("revisions").where({ id: own }).first()).organisation_id, engineer_id: engineerId, submitted_by: await userId(DESIGNER) });
-    const out = await decideAs(ENGINEER, own, { decision: "approve" });
+    const out = await decideAs(ENGINEER, own, { decision: "approve", password: DEMO_PASSWORD });
     expect(out.status).toBe(403);
     expect(out.body.errors[0].message).toBe("You cannot approve a design you authored.");
     expect(await statusOf(own)).toBe("in_review");
@@ -183,7 +184,7 @@ describe("decide a review", () => {
     await submitAs(DESIGNER, revisionId);
     await db("engineer_licences").where({ user_id: engineerId, state: "CO" }).update({ expires_on: "2024-05-01" });
     try {
-      const out = await decideAs(ENGINEER, revisionId, { decision: "approve" });
+      const out = await decideAs(ENGINEER, revisionId, { decision: "approve", password: DEMO_PASSWORD });
       expect(out.status).toBe(403);
       expect(out.body.errors[0].message).toMatch(/CO.*expired on 2024-05-01/);
       expect(await statusOf(revisionId)).toBe("in_review");

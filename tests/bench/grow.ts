@@ -68,10 +68,17 @@ export async function prepare(client: pg.Client): Promise<void> {
   `);
 }
 
-/** Adds units [from, to) of generated rows, then ANALYZE so plans are those of a settled database. */
+/** Adds units [from, to) of generated rows, then VACUUM ANALYZE so plans are those of a settled database. */
 export async function grow(client: pg.Client, from: number, to: number): Promise<void> {
   if (to <= from) return;
   const units = `generate_series(${from}, ${to - 1}) u`;
+  // Approvals carry a verify code and a facts snapshot once the approval-signature migration ran.
+  const verifiable = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'verify_code'")).rowCount === 1;
+  const verifyColumns = verifiable ? ", verify_code, facts_snapshot" : "";
+  const verifyValues = verifiable
+    ? `, CASE WHEN j = 0 THEN md5('code' || u || '-' || k) END,
+       CASE WHEN j = 0 THEN jsonb_build_object('projectName', 'Generated site', 'projectAddress', '', 'projectState', 'CO', 'criteria', NULL) END`
+    : "";
   const org = "JOIN bench.orgs o ON o.n = bench.org_of(u)";
   const statements = [
     `INSERT INTO criteria_cards (id, organisation_id, jurisdiction, state, values, sources, created_by, created_at, updated_at)
@@ -104,13 +111,13 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
              md5('hb' || u) || md5('gb' || u), 'draft', 'Generated revision ' || (u + 1), o.designer, now() - interval '1 day' + u * interval '1 second'
       FROM ${units} JOIN bench.orgs o ON o.n = 0 CROSS JOIN bench.template t JOIN bench.results x ON x.depth = u % 48`,
     `INSERT INTO reviews (id, revision_id, organisation_id, engineer_id, submitted_by, submitted_at, decision, decided_by, decided_at,
-                          engineer_name, licence_number, licence_state, licence_expires_on)
+                          engineer_name, licence_number, licence_state, licence_expires_on${verifyColumns})
       SELECT md5('v' || u || '-' || k || '-' || j)::uuid, md5('r' || u || '-' || k || '-' || j || '-' || (CASE WHEN j = 0 THEN 5 ELSE 10 END))::uuid,
              o.id, o.engineer, o.designer, now() - (u * 22 + k) * interval '7 minutes' + interval '2 minutes',
              (CASE j WHEN 0 THEN 'approve' WHEN 1 THEN 'request_changes' END)::review_decision,
              CASE WHEN j < 2 THEN o.engineer END, CASE WHEN j < 2 THEN now() - (u * 22 + k) * interval '7 minutes' + interval '4 minutes' END,
              CASE WHEN j < 2 THEN 'Generated Engineer, P.E.' END, CASE WHEN j = 0 THEN 'PE-BENCH' END, CASE WHEN j = 0 THEN 'CO' END,
-             CASE WHEN j = 0 THEN date '2030-12-31' END
+             CASE WHEN j = 0 THEN date '2030-12-31' END${verifyValues}
       FROM ${units} CROSS JOIN generate_series(0, 21) k CROSS JOIN generate_series(0, 2) j ${org}`,
     `INSERT INTO review_comments (review_id, field_path, body, author_id)
       SELECT md5('v' || u || '-' || k || '-1')::uuid, 'site.windSpeedMph', 'Confirm the wind speed against the county table.', o.engineer
@@ -135,7 +142,9 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
     await client.query(sql);
     took.push(`${/INSERT INTO (\w+)/.exec(sql)?.[1]} ${((Date.now() - started) / 1000).toFixed(1)} s`);
   }
-  await client.query("ANALYZE");
+  // What autovacuum does on its own for insert-only tables, here at once: statistics, and the
+  // visibility map that lets counts use index-only scans (TOAST is skipped: nothing there to do).
+  await client.query("VACUUM (ANALYZE, PROCESS_TOAST FALSE)");
   console.log(`bench:db: generated units ${from}–${to - 1}: ${took.join(", ")}`);
 }
 

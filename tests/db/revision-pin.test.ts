@@ -13,7 +13,7 @@ async function approvedRevision() {
   await db("revisions").where({ id: revisionId }).update({ status: "in_review" });
   const [review] = await db("reviews").insert({ revision_id: revisionId, organisation_id: DEMO_ORG_ID, engineer_id: engineer, submitted_by: await userId(DESIGNER) }).returning("id");
   await db("review_comments").insert({ review_id: review.id, body: "Looks right.", author_id: engineer });
-  await db("reviews").where({ id: review.id }).update({ decision: "approve", decided_by: engineer, decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.", licence_number: "PE-000000-DEMO", licence_state: "CO" });
+  await db("reviews").where({ id: review.id }).update({ decision: "approve", decided_by: engineer, decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.", licence_number: "PE-000000-DEMO", licence_state: "CO", verify_code: `pin-test-${review.id}`, facts_snapshot: JSON.stringify({ projectName: "x", projectAddress: "", projectState: "CO", criteria: null }) });
   await db("revisions").where({ id: revisionId }).update({ status: "approved" });
   return { designId, revisionId, reviewId: review.id as string };
 }

@@ -5,6 +5,7 @@
  */
 import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { PROBE_CANVAS_ATTRIBUTE } from "@/components/preview/webgl-support";
 import { DESKTOP, PHONE, launch, shot, signedInContext } from "../support/browser";
 
 const DESIGNER = "designer@demo.pierwise.test";
@@ -139,19 +140,25 @@ describe("2D fallback when the 3D scene cannot start", () => {
 
   it("catches a renderer that fails after the up-front check passed, and shows the elevation", async () => {
     const context = await signedInContext(browser, DESIGNER);
-    // The up-front probe gets its WebGL context; every later WebGL request fails, as when a
-    // browser runs out of contexts or the GPU process dies.
-    await context.addInitScript(() => {
+    // Only the up-front probe's own (marked) canvas gets a WebGL context; every other canvas is
+    // refused, as when a browser runs out of contexts or the GPU process dies. The simulation does
+    // not depend on how many contexts the probe or the scene ask for, nor in which order.
+    await context.addInitScript((probeAttribute: string) => {
+      const w = window as unknown as { __webglProbes: number };
+      w.__webglProbes = 0;
+      const probed = new WeakSet<HTMLCanvasElement>();
       const original = HTMLCanvasElement.prototype.getContext;
-      let webglCalls = 0;
       HTMLCanvasElement.prototype.getContext = function (this: HTMLCanvasElement, type: string, ...rest: unknown[]) {
-        if (type === "webgl2" || type === "webgl") {
-          webglCalls += 1;
-          if (webglCalls > 1) return null;
+        if (/webgl/i.test(type)) {
+          if (!this.hasAttribute(probeAttribute)) return null;
+          if (!probed.has(this)) {
+            probed.add(this);
+            w.__webglProbes += 1;
+          }
         }
         return (original as (...a: unknown[]) => RenderingContext | null).call(this, type, ...rest);
       } as typeof HTMLCanvasElement.prototype.getContext;
-    });
+    }, PROBE_CANVAS_ATTRIBUTE);
     const page = await context.newPage();
     // Earlier suites add many projects to the demo organisation: find the demo one by name.
     await page.goto("/projects?q=Larkspur");
@@ -163,6 +170,21 @@ describe("2D fallback when the 3D scene cannot start", () => {
     // The camera buttons go with the scene; nothing is left that does nothing.
     expect(await page.getByTestId("design-preview").getByRole("button", { name: "Side" }).count()).toBe(0);
     expect(await fallback.locator("svg").textContent()).toMatch(/Clearance \d+ in.*Embedment \d+ in/s);
+
+    // Another design in the same page (client-side navigation, no reload) mounts a new preview:
+    // it reuses the page's probe answer instead of asking the browser again.
+    await page.evaluate(() => Object.assign(window, { __sameDocument: true }));
+    await page.goBack();
+    await page.getByRole("link", { name: "12-module array on two posts" }).click();
+    await page.getByRole("heading", { level: 1, name: "12-module array on two posts" }).waitFor({ timeout: 30_000 });
+    await fallback.waitFor({ timeout: 30_000 });
+    expect(await fallback.textContent()).toMatch(/could not start/);
+    const seen = await page.evaluate(() => {
+      const w = window as unknown as { __webglProbes: number; __sameDocument?: boolean };
+      return { probes: w.__webglProbes, sameDocument: w.__sameDocument === true };
+    });
+    expect(seen.sameDocument).toBe(true);
+    expect(seen.probes).toBe(1);
     await context.close();
   });
 });

@@ -97,7 +97,8 @@ describe("review journey", () => {
     await engineer.getByText("Changes since revision 1, the last one you reviewed").waitFor();
     expect(await engineer.getByText("site.windSpeedMph").first().isVisible()).toBe(true);
     await engineer.getByLabel("Approve for construction").check();
-    await engineer.getByRole("button", { name: "Record decision" }).click();
+    await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
+    await engineer.getByRole("button", { name: "Sign and approve" }).click();
     await engineer.getByText("Approved: the revision is pinned and the designer has been e-mailed.").waitFor();
     await engineer.reload();
     await engineer.getByText("Approved for construction").first().waitFor();
@@ -158,7 +159,8 @@ describe("review journey", () => {
     const engineer = await as(ENGINEER);
     await engineer.goto(`${baseUrl()}/reviews/${revisionId}`);
     await engineer.getByLabel("Approve for construction").check();
-    await engineer.getByRole("button", { name: "Record decision" }).click();
+    await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
+    await engineer.getByRole("button", { name: "Sign and approve" }).click();
     await engineer.getByText("Approved: the revision is pinned").waitFor();
 
     const installer = await as(INSTALLER, PHONE);

@@ -7,7 +7,7 @@
 import crypto from "node:crypto";
 import { putObject } from "@/app/_lib/storage";
 import { db } from "@/db/client";
-import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
+import { DEMO_ORG_ID, DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 import { DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 import { CALLERS, SIGN_IN, everyone, formArgs, only, type Expected, type MatrixRow, type Who } from "./access-matrix";
 import { uniqueEmail } from "./accounts";
@@ -126,14 +126,14 @@ export const ENGAGED_MATRIX: EngagedRow[] = [
     },
   },
   // Their own review work.
-  { file: "app/api/revisions/[revisionId]/review/route.ts", name: "POST", expect: open(200), setup: async (who) => ({ params: { revisionId: await inReviewFor(who) }, body: { decision: "approve" } }) },
-  { file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "decideReviewAction", expect: open(200), setup: async (who) => ({ args: formArgs({ revisionId: await inReviewFor(who), decision: "approve" }) }) },
+  { file: "app/api/revisions/[revisionId]/review/route.ts", name: "POST", expect: open(200), setup: async (who) => ({ params: { revisionId: await inReviewFor(who) }, body: { decision: "approve", password: DEMO_PASSWORD } }) },
+  { file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "decideReviewAction", expect: open(200), setup: async (who) => ({ args: formArgs({ revisionId: await inReviewFor(who), decision: "approve", password: DEMO_PASSWORD }) }) },
   {
     file: "app/(workspace)/reviews/[revisionId]/actions.ts", name: "clearHoldAction", expect: open(200),
     setup: async (who) => {
       const a = await freshAsBuilt({ hold: true });
       await engageFor(who, await projectOfDesign(a.designId));
-      return { args: formArgs({ holdId: a.holdId!, note: "Cleared by the outside engineer in the matrix." }) };
+      return { args: formArgs({ holdId: a.holdId!, note: "Cleared by the outside engineer in the matrix.", confirm: "yes" }) };
     },
   },
   // Everything else on the engaged project stays the contractor's: 404 even while engaged.

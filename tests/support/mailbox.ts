@@ -7,7 +7,8 @@ export interface CaughtMail {
 }
 
 export async function mailTo(address: string, options: { subject?: RegExp; timeoutMs?: number } = {}): Promise<CaughtMail> {
-  const deadline = Date.now() + (options.timeoutMs ?? 5000);
+  // Generous: on a busy machine the app may take seconds to hand a mail to the stand-in.
+  const deadline = Date.now() + (options.timeoutMs ?? 20_000);
   const viewer = process.env.MAIL_VIEWER_URL;
   if (!viewer) throw new Error("MAIL_VIEWER_URL is not set: run the suite through `npm test`.");
   while (Date.now() < deadline) {

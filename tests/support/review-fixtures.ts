@@ -13,6 +13,8 @@ export const ENGINEER = "engineer@demo.pierwise.test";
 export const INSTALLER = "installer@demo.pierwise.test";
 export const ADMIN = "admin@demo.pierwise.test";
 export const OUTSIDER = "designer@other.pierwise.test";
+/** Every demo person's password; approving is signed with it. */
+export { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 
 export async function userId(email: string): Promise<string> {
   return (await db("users").where({ email }).first("id")).id;
@@ -67,6 +69,7 @@ export async function freshApproved(options: { letterKey?: string } = {}): Promi
   await db("reviews").where({ id: d.reviewId }).update({
     decision: "approve", decided_by: await userId(ENGINEER), decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.",
     licence_number: "PE-000000-DEMO", licence_state: "CO", letter_file_key: options.letterKey ?? null,
+    verify_code: crypto.randomBytes(16).toString("base64url"), facts_snapshot: JSON.stringify({ projectName: "Review test site", projectAddress: "1 Test Lane (invented), Testville, CO", projectState: "CO", criteria: null }),
   });
   await db("revisions").where({ id: d.revisionId }).update({ status: "approved" });
   return d;

@@ -3,15 +3,10 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
+import { safeNext } from "@/app/_lib/safe-next";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
 import { findSignInRoles } from "@/db/queries/users";
-
-/** Only same-site paths are followed after sign-in. */
-function safeNext(value: FormDataEntryValue | null): string | null {
-  const next = typeof value === "string" ? value : "";
-  return next.startsWith("/") && !next.startsWith("//") ? next : null;
-}
 
 /** Where a sign-in with no `next` lands: a reviewing engineer who does not design lands on their review queue. */
 async function landing(userId: string): Promise<string> {
@@ -25,7 +20,8 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
   if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   const outcome = await signIn(parsed.data);
   if (!outcome.ok) return { message: outcome.message, values };
-  redirect(safeNext(form.get("next")) ?? (await landing(outcome.userId)));
+  const next = form.get("next");
+  redirect(typeof next === "string" && next ? safeNext(next) : await landing(outcome.userId));
 }
 
 export async function signOutAction(): Promise<void> {

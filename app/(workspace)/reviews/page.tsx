@@ -5,13 +5,16 @@ import { forPage } from "@/app/_lib/page-access";
 import { displayStatus } from "@/app/_lib/review/standing";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
+import { dateInWords } from "@/app/_lib/review/dates";
+import { openHoldsOfOrganisation } from "@/db/queries/holds";
 import { recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
 
 export const metadata: Metadata = { title: "Reviews" };
 
 export default async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
-  const [waiting, mine, decided] = await Promise.all([
+  const [holds, waiting, mine, decided] = await Promise.all([
+    hasRole(user, "engineer") ? openHoldsOfOrganisation(user.organisationId) : Promise.resolve([]),
     hasRole(user, "engineer") ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
     hasRole(user, "designer") ? submittedBy(user.organisationId, user.userId) : Promise.resolve(null),
     recentlyDecided(user.organisationId),
@@ -19,6 +22,21 @@ export default async function ReviewsPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-semibold">Reviews</h1>
+      {holds.length ? (
+        <section aria-labelledby="holds-h" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
+          <h2 id="holds-h" className="text-base font-semibold">On hold: the crew is waiting for an engineer ({holds.length})</h2>
+          <ul className="mt-2 divide-y divide-red-200">
+            {holds.map((h) => (
+              <li key={h.id} className="py-2 text-sm">
+                {h.revisionId ? <Link href={`/reviews/${h.revisionId}`} className="font-medium underline">{h.designName}, revision {h.number}</Link> : <span className="font-medium">{h.designName}</span>}
+                <span> · {h.projectName}</span>
+                <p>{h.reason}</p>
+                <p className="text-xs">Raised by {h.raisedByName} on {dateInWords(h.raisedAt, user.timeZone)}</p>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       {waiting ? <QueueTable title="Waiting for your review" rows={waiting} empty="Nothing is waiting for your review." show="submitted" /> : null}
       {mine ? <QueueTable title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
       <QueueTable title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />

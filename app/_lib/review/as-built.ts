@@ -1,10 +1,10 @@
-import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { ConflictError, ValidationError } from "@/app/_lib/errors";
 import { assertRole, type CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { deleteObject, putObject } from "@/app/_lib/storage";
+import { acceptUpload, revisionObjectKey, UPLOAD_KINDS } from "@/app/_lib/uploads";
 import type { DesignResult } from "@/engine";
 import { db } from "@/db/client";
 import { GROUND_FOUND, insertAsBuilt } from "@/db/queries/as-built";
@@ -31,7 +31,7 @@ export const asBuiltSchema = z.object({
 });
 export type AsBuiltInput = z.output<typeof asBuiltSchema>;
 
-export const PHOTO_LIMITS = { count: 6, bytes: 10 * 1024 * 1024 };
+export const PHOTO_LIMITS = { count: 6, bytes: UPLOAD_KINDS.asBuiltPhoto.maxBytes };
 
 /**
  * Why this hole stops the job, if it does: shallower or narrower than specified, or ground that
@@ -62,15 +62,15 @@ export async function recordAsBuilt(user: CurrentUser, revisionId: string, input
   }
   const real = photos.filter((p) => p.size > 0);
   if (real.length > PHOTO_LIMITS.count) throw ValidationError.field("photos", `Attach at most ${PHOTO_LIMITS.count} photos per hole`);
-  for (const p of real) {
-    if (!p.type.startsWith("image/")) throw ValidationError.field("photos", `${p.name} is not a photo: attach JPEG, PNG or other image files`);
-    if (p.size > PHOTO_LIMITS.bytes) throw ValidationError.field("photos", `${p.name} is over 10 MB: attach photos up to 10 MB each`);
-  }
+  // The one upload policy: sniffed by content, size and pixel limits, refusals naming the file.
+  const accepted = [];
+  for (const p of real) accepted.push(await acceptUpload(p, "asBuiltPhoto", "photos"));
   const keys: string[] = [];
+  let committed = false;
   try {
-    for (const p of real) {
-      const key = `orgs/${user.organisationId}/revisions/${revisionId}/as-built/${randomUUID()}`;
-      await putObject(key, new Uint8Array(await p.arrayBuffer()), p.type);
+    for (const p of accepted) {
+      const key = revisionObjectKey(user.organisationId, revisionId, "as-built");
+      await putObject(key, p.bytes, p.type.contentType);
       keys.push(key);
     }
     const reasons = holdReasons(revision.result, input);
@@ -81,12 +81,13 @@ export async function recordAsBuilt(user: CurrentUser, revisionId: string, input
         : null;
       return { entryId, holdId };
     });
+    committed = true;
     await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: out.holdId ? "design-held" : "as-built-recorded", subject: revisionId, detail: { postId: input.postId } });
     if (out.holdId) await mailHold(revisionId, revision.designName, revision.projectName, user.name, reasons);
     return { ...out, reasons };
   } catch (error) {
-    // A failed save leaves no orphaned photos behind.
-    await Promise.allSettled(keys.map((k) => deleteObject(k)));
+    // Photos whose entry was never saved are removed; photos of a saved entry are never touched.
+    if (!committed) await Promise.allSettled(keys.map((k) => deleteObject(k)));
     throw error;
   }
 }

@@ -1,11 +1,15 @@
 import { z } from "zod";
 import { ConflictError } from "@/app/_lib/errors";
 import { assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { env } from "@/app/_lib/env";
+import { sendMail } from "@/app/_lib/mail";
+import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
-import { clearHoldRow, getHold } from "@/db/queries/holds";
+import { clearHoldRow, getHold, holdAudience } from "@/db/queries/holds";
 
 export const clearHoldSchema = z.object({
-  note: z.string().trim().min(3, { error: "Say how the hold was resolved (3 to 2000 characters)" }).max(2000, { error: "The note must be at most 2000 characters" }),
+  note: z.string().trim().min(3, { error: "Say how the hold was resolved and what the crew is to do (3 to 2000 characters)" }).max(2000, { error: "The note must be at most 2000 characters" }),
+  confirm: z.literal(true, { error: "Tick the box to confirm that work may go on as your note says" }),
 });
 
 /** A hold of the user's organisation, or of a project an outside engineer is engaged on (404 otherwise). */
@@ -13,10 +17,27 @@ export async function holdFor(user: CurrentUser, holdId: string) {
   return assertOwnedOrEngaged(user, await getHold(holdId), (h) => ({ designId: h.designId }), "That hold");
 }
 
-/** Only an engineer clears a hold, saying how it was resolved (e.g. deepened hole inspected). */
-export async function clearHold(user: CurrentUser, holdId: string, note: string): Promise<void> {
+/**
+ * Only an engineer clears a hold, saying how it was resolved and what the crew is to do (e.g.
+ * "pour as dug"). The designer and every installer who logged a hole on the revision are e-mailed
+ * the note; it shows on the field spec and in the as-built log from then on.
+ */
+export async function clearHold(user: CurrentUser, holdId: string, note: string): Promise<{ told: string[] }> {
   const hold = await holdFor(user, holdId);
   assertRole(user, "engineer");
   if (!(await clearHoldRow(hold.id, user.userId, note))) throw new ConflictError("This hold was already cleared.");
   await recordAudit({ organisationId: hold.organisationId, actorUserId: user.userId, action: "hold-cleared", subject: hold.designId, detail: { holdId, note } });
+  const where = await db("designs as d").join("projects as p", "p.id", "d.project_id").where("d.id", hold.designId).first("d.name as designName", "p.name as projectName");
+  const people = hold.revisionId ? await holdAudience(hold.revisionId) : [];
+  const text = [
+    `${user.name} cleared the hold on "${where?.designName}" (${where?.projectName}).`,
+    "",
+    `The hold was: ${hold.reason}`,
+    "",
+    `What to do now (the engineer's note): ${note}`,
+    "",
+    ...(hold.revisionId ? [`Field spec: ${env.appUrl}/field/${hold.revisionId}`] : []),
+  ].join("\n");
+  for (const p of people) await sendMail({ to: p.email, subject: `Hold cleared: ${where?.designName} (${where?.projectName})`, text });
+  return { told: people.map((p) => p.name) };
 }

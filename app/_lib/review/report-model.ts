@@ -4,6 +4,7 @@
  */
 import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
+import { userText } from "./report-text";
 
 export interface Table {
   title: string;
@@ -32,7 +33,7 @@ export function criteriaTable(ctx: RevisionContext): Table {
   if (!ctx.criteria) return { title: "Design criteria card", columns: ["Criterion", "Value", "Source", "Checked on"], rows: [], note: "No criteria card is applied to this project: the inputs below were entered by the designer." };
   const rows = Object.entries(ctx.criteria.values).map(([key, value]) => {
     const src = (ctx.criteria!.sources[key] ?? {}) as { source?: string; checkedOn?: string };
-    return [CRITERIA_LABELS[key] ?? key, String(value), src.source ?? "no source given", src.checkedOn ?? "—"];
+    return [CRITERIA_LABELS[key] ?? key, String(value), userText(src.source ?? "no source given"), src.checkedOn ?? "—"];
   });
   return { title: `Design criteria card: ${ctx.criteria.jurisdiction} (${ctx.criteria.state})`, columns: ["Criterion", "Value", "Source", "Checked on"], rows };
 }
@@ -67,6 +68,8 @@ export function loadsTable(r: DesignResult): Table {
   return {
     title: `Loads per post at grade (ASD combinations, tilt ${fmt(r.geometry.tiltDeg)}°)`,
     columns: ["Post", "Combination", "Shear (lb)", "Moment (lb-ft)", "Downward (lb)", "Wind uplift (lb)"],
+    // Beam reaction factors (continuous-beam share ÷ tributary share), when the result has them.
+    note: r.geometry.postLoadSharing ? `${r.geometry.postLoadSharing} Factors: ${r.geometry.posts.map((p) => `${p.id} ${fmt(p.reactionFactor, 3)}`).join(", ")}.` : undefined,
     rows: r.postLoads.flatMap((p) => p.combinations.map((c) => [p.postId, c.combination, fmt(c.shearLb, 0), fmt(c.momentAtGradeLbFt, 0), fmt(c.downwardLb, 0), fmt(c.windUpliftLb, 0)])),
   };
 }
@@ -85,7 +88,7 @@ export function checksTable(r: DesignResult): Table {
   return {
     title: `Footing checks: ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep, ${r.footing.post.size} in pipe post (controlled by ${r.footing.controllingCheck})`,
     columns: ["Check", "Demand", "Capacity", "Unit", "Ratio", "Result", "Source"],
-    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", c.source]),
+    rows: r.footing.checks.map((c) => [c.title, fmt(c.demand, 2), fmt(c.capacity, 2), c.unit, fmt(c.ratio, 2), c.pass ? "passes" : "FAILS", userText(c.source)]),
   };
 }
 

@@ -1,121 +1,235 @@
 /**
- * The calculation report as a PDF (pdfkit, built-in Helvetica). The defer-to-code statement and
- * the page number are drawn on every page after the content is laid out.
+ * The calculation report as an engineering document (pdfkit, Inter embedded so γ, ², ³, ≤, ×, °
+ * and ½ print): cover block, a one-page summary, the elevation to scale, inputs by label with
+ * units, criteria sources, the method with numbers substituted, the tables, cautions. Every page
+ * carries the defer-to-code caution, "page n of N", the revision id and (once approved) the QR code
+ * and short link of the public approval check; an unapproved revision says NOT APPROVED across
+ * every page.
  */
 import PDFDocument from "pdfkit";
+import QRCode from "qrcode";
 import { DEFER_TO_CODE, SITE_CAUTIONS } from "@/engine";
+import { fieldLabel } from "@/engine/field-labels";
 import type { RevisionContext } from "@/db/queries/reviews";
-import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputsTable, loadsTable, methodLines, windTable, type Table } from "./report-model";
+import { checkOutcome, ratioText } from "./check-outcome";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "./dates";
+import { drawElevation } from "./report-drawing";
+import { reportFont } from "./report-fonts";
+import { methodSteps } from "./report-method";
+import { checksTable, concreteLines, fmt, governingLines, loadsTable, windTable, type Table } from "./report-model";
+import { inputGroups, userText } from "./report-text";
 import type { Standing } from "./standing";
+import { verifyUrl } from "./verify";
 
-// The built-in fonts speak Windows-1252 only: spell out the few symbols the engine's words use.
-const SPELLED: Record<string, string> = { "≥": ">=", "≤": "<=", "Ω": "Omega", "→": "->", "≈": "~", "π": "pi", "−": "-", "√": "sqrt", "φ": "phi", "Δ": "delta", "θ": "theta", "°": "°" };
-export function pdfSafe(text: string): string {
-  return text.replace(/[^\x00-\xff–—‘’“”•…€™]/g, (c) => SPELLED[c] ?? "?");
-}
+const F = { regular: "Inter", bold: "Inter-SemiBold" };
 
 const MARGIN = 48;
-const FOOTER_HEIGHT = 64;
+const FOOTER_HEIGHT = 78;
+const INK = "#0f172a", ACCENT = "#0f3d3a", BAD = "#b91c1c";
+
+const CRITERIA_LABELS: Record<string, string> = {
+  buildingCode: "Building code", asceEdition: "ASCE 7 edition", riskCategory: "Risk category", windSpeedMph: "Basic wind speed",
+  exposure: "Exposure category", groundSnowPsf: "Ground snow load", frostDepthIn: "Frost depth", soilClass: "Presumptive soil class (IBC Table 1806.2)",
+};
+const CRITERIA_UNITS: Record<string, string> = { windSpeedMph: "mph", groundSnowPsf: "psf", frostDepthIn: "in" };
 
 export async function renderReportPdf(ctx: RevisionContext, standing: Standing, generatedAt = new Date()): Promise<Buffer> {
   const doc = new PDFDocument({
     size: "LETTER",
     margins: { top: MARGIN, left: MARGIN, right: MARGIN, bottom: MARGIN + FOOTER_HEIGHT },
     bufferPages: true,
-    info: { Title: pdfSafe(`Calculation report: ${ctx.projectName}, ${ctx.designName}, revision ${ctx.number}`), Author: "Pierwise" },
+    info: { Title: `Calculation report: ${ctx.projectName}, ${ctx.designName}, revision ${ctx.number}`, Author: "Pierwise" },
   });
+  doc.registerFont(F.regular, reportFont("Inter-Regular"));
+  doc.registerFont(F.bold, reportFont("Inter-SemiBold"));
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<void>((resolve) => doc.on("end", () => resolve()));
   const width = doc.page.width - 2 * MARGIN;
+  const bottom = () => doc.page.height - doc.page.margins.bottom;
   const r = ctx.result;
+  const tz = ctx.timeZone;
+  const a = standing.approval;
+  const outcome = checkOutcome(r);
+  const approved = ctx.status === "approved" && a;
 
-  const heading = (text: string) => {
-    if (doc.y > doc.page.height - doc.page.margins.bottom - 60) doc.addPage();
-    doc.moveDown(0.6).font("Helvetica-Bold").fontSize(12).fillColor("#0f3d3a").text(pdfSafe(text), MARGIN, doc.y, { width }).moveDown(0.2);
-    doc.font("Helvetica").fontSize(9).fillColor("black");
+  const heading = (text: string, size = 12) => {
+    if (doc.y > bottom() - 60) doc.addPage();
+    doc.moveDown(0.6).font(F.bold).fontSize(size).fillColor(ACCENT).text(text, MARGIN, doc.y, { width }).moveDown(0.2);
+    doc.font(F.regular).fontSize(9).fillColor(INK);
   };
-  const line = (text: string, options: { bold?: boolean } = {}) => {
-    doc.font(options.bold ? "Helvetica-Bold" : "Helvetica").fontSize(9).text(pdfSafe(text), MARGIN, doc.y, { width });
+  const line = (text: string, o: { bold?: boolean; colour?: string; size?: number; indent?: number } = {}) => {
+    doc.font(o.bold ? F.bold : F.regular).fontSize(o.size ?? 9).fillColor(o.colour ?? INK).text(userText(text), MARGIN + (o.indent ?? 0), doc.y, { width: width - (o.indent ?? 0) });
+    doc.fillColor(INK);
   };
-  const table = (t: Table, widths: number[]) => {
+  const table = (t: Table | { title: string; columns: string[]; rows: string[][]; note?: string }, widths: number[], o: { redWhen?: (row: string[]) => boolean } = {}) => {
     heading(t.title);
     if (t.note) line(t.note);
-    const total = widths.reduce((a, b) => a + b, 0);
+    const total = widths.reduce((x, y) => x + y, 0);
     const cols = widths.map((w) => (w / total) * width);
-    const row = (cells: string[], bold: boolean) => {
-      doc.font(bold ? "Helvetica-Bold" : "Helvetica").fontSize(8);
-      const h = Math.max(...cells.map((c, i) => doc.heightOfString(pdfSafe(c), { width: cols[i] - 4 })));
-      if (doc.y + h > doc.page.height - doc.page.margins.bottom) doc.addPage();
+    const row = (cells: string[], bold: boolean, colour = INK) => {
+      doc.font(bold ? F.bold : F.regular).fontSize(8);
+      const texts = cells.map(userText);
+      const h = Math.max(...texts.map((c, i) => doc.heightOfString(c, { width: cols[i] - 4 })));
+      if (doc.y + h > bottom()) doc.addPage();
       const y = doc.y;
       let x = MARGIN;
-      cells.forEach((c, i) => {
-        doc.text(pdfSafe(c), x, y, { width: cols[i] - 4 });
+      texts.forEach((c, i) => {
+        doc.fillColor(colour).text(c, x, y, { width: cols[i] - 4 });
         x += cols[i];
       });
-      doc.y = y + h + 2;
+      doc.moveTo(MARGIN, y + h + 1).lineTo(MARGIN + width, y + h + 1).lineWidth(0.3).stroke("#cbd5e1");
+      doc.y = y + h + 3;
     };
     row(t.columns, true);
-    for (const cells of t.rows) row(cells, false);
-    doc.font("Helvetica").fontSize(9);
+    for (const cells of t.rows) row(cells, false, o.redWhen?.(cells) ? BAD : INK);
+    doc.font(F.regular).fontSize(9).fillColor(INK);
+  };
+  const pairs = (rows: [string, string][], labelWidth = 150, o: { boldValues?: boolean } = {}) => {
+    for (const [k, v] of rows) {
+      doc.font(F.regular).fontSize(9);
+      const h = Math.max(doc.heightOfString(userText(k), { width: labelWidth - 6 }), doc.heightOfString(userText(v), { width: width - labelWidth }));
+      if (doc.y + h > bottom()) doc.addPage();
+      const y = doc.y;
+      doc.fillColor("#475569").text(userText(k), MARGIN, y, { width: labelWidth - 6 });
+      doc.font(o.boldValues ? F.bold : F.regular).fillColor(INK).text(userText(v), MARGIN + labelWidth, y, { width: width - labelWidth });
+      doc.y = y + h + 2;
+    }
   };
 
-  doc.font("Helvetica-Bold").fontSize(16).text("Pierwise calculation report", MARGIN, MARGIN);
-  doc.font("Helvetica").fontSize(10).text(pdfSafe(`${ctx.projectName} (${ctx.projectState})${ctx.projectAddress ? `, ${ctx.projectAddress}` : ""}`));
-  doc.text(pdfSafe(`Design "${ctx.designName}", revision ${ctx.number}`));
-  doc.fontSize(8).text(`Revision id ${ctx.id}`).text(`Content hash ${ctx.contentHash}`);
-  doc.text(pdfSafe(`Saved ${ctx.createdAt.toISOString()} by ${ctx.authorName ?? "unknown"}; engine ${ctx.engineVersion}; report generated ${generatedAt.toISOString()}`));
-
-  heading(`Status: ${standing.label}`);
-  if (standing.supersededBy) line(`Superseded by revision ${standing.supersededBy.number}: do not build from this revision.`, { bold: true });
-  for (const h of standing.holds) line(`ON HOLD since ${h.raisedAt.toISOString()} (raised by ${h.raisedByName}): ${h.reason}`, { bold: true });
-  if (standing.approval) {
-    const a = standing.approval;
-    line(`Approved by ${a.engineerName}, licence ${a.licenceNumber} (${a.licenceState}), on ${a.decidedAt?.toISOString()}.${a.letterFileKey ? " Signed letter on file." : ""}`, { bold: true });
-  } else if (ctx.status !== "approved") {
-    line("Not approved: not for construction.", { bold: true });
+  // ── Cover block ────────────────────────────────────────────────────────────────────────────
+  doc.font(F.bold).fontSize(17).fillColor(ACCENT).text("Calculation report: preliminary footing sizing", MARGIN, MARGIN, { width });
+  doc.font(F.regular).fontSize(10).fillColor(INK).text("Wind loads and concrete post footings of a ground-mounted fixed-tilt solar array", { width }).moveDown(0.5);
+  pairs([
+    ["Project", `${ctx.projectName}${ctx.factsPinned ? " (as approved)" : ""}`],
+    ["Site", [ctx.projectAddress, ctx.projectState].filter(Boolean).join(", ")],
+    ["Design", ctx.designName],
+    ["Revision", `${ctx.number}, saved by ${ctx.authorName ?? "unknown"} on ${dateTimeInWords(ctx.createdAt, tz)}`],
+    ["Content hash", ctx.contentHash],
+    ["Status", `${standing.label}${standing.holds.length ? ", ON HOLD" : ""}`],
+    ["Contractor", ctx.organisationName],
+  ]);
+  if (approved) {
+    pairs([
+      ["Approved by", `${a.engineerName}, licence ${a.licenceNumber} (${a.licenceState}), valid through ${calendarDateInWords(a.licenceExpiresOn)}`],
+      ["Approved on", dateTimeInWords(a.decidedAt, tz)],
+      ["Approval check", a.verifyCode ? verifyUrl(a.verifyCode) : "—"],
+    ], 150, { boldValues: true });
+    if (a.overrides.length) {
+      doc.moveDown(0.3);
+      line(`APPROVED ALTHOUGH ${a.overrides.length === 1 ? "A CHECK FAILS" : `${a.overrides.length} CHECKS FAIL`}: the engineer's reasons`, { bold: true, colour: BAD, size: 10 });
+      for (const o of a.overrides) line(`${o.title} (ratio ${ratioText(o.ratio)}): ${o.reason}`, { colour: BAD, indent: 10 });
+    }
+  } else {
+    doc.moveDown(0.3);
+    line("NOT APPROVED: not for construction. A licensed engineer has not approved this revision.", { bold: true, colour: BAD, size: 11 });
   }
-  for (const rv of standing.reviews) {
-    const what = rv.decision === "approve" ? "approved" : rv.decision === "request_changes" ? "requested changes" : "not yet decided";
-    line(`Submitted ${rv.submittedAt.toISOString()} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${rv.decidedAt.toISOString()} by ${rv.engineerName}` : ""}.`);
-    for (const c of rv.comments) line(`    Comment${c.fieldPath ? ` on ${c.fieldPath}` : ""}: ${c.body}`);
+  if (standing.supersededBy) line(`Superseded by revision ${standing.supersededBy.number}: do not build from this revision.`, { bold: true, colour: BAD });
+  for (const h of standing.holds) line(`ON HOLD since ${dateTimeInWords(h.raisedAt, tz)} (raised by ${h.raisedByName}): ${h.reason}`, { bold: true, colour: BAD });
+  line(`Report generated ${dateTimeInWords(generatedAt, tz)}; calculation engine ${ctx.engineVersion}.`, { colour: "#475569", size: 8 });
+
+  // ── Summary ────────────────────────────────────────────────────────────────────────────────
+  heading("Summary", 14);
+  line(`Every post: hole ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep, ${r.footing.post.size} in standard pipe post (${outcome.posts} posts). Depth set by ${r.footing.controllingCheck === "lateral" ? "lateral embedment" : r.footing.controllingCheck === "uplift" ? "uplift" : "frost and minimum depth"}.`, { bold: true, size: 10 });
+  table({ title: "Footing per post", columns: ["Post", "Hole", "Above grade", "Below grade", "Post length"], rows: r.field.posts.map((p) => [p.id, `${fmt(r.footing.diameterIn)} in × ${fmt(p.embedmentIn)} in`, `${fmt(p.heightAboveGradeIn)} in`, `${fmt(p.embedmentIn)} in`, `${fmt(p.postLengthIn)} in`]) }, [1, 2, 1.4, 1.4, 1.4]);
+  heading("Concrete to order");
+  for (const c of concreteLines(r)) line(c);
+  table({ title: "Checks, governing first", columns: ["Check", "Ratio", "Result"], rows: [...r.footing.checks].sort((x, y) => y.ratio - x.ratio).map((c) => [c.title, ratioText(c.ratio), c.pass ? "passes (≤ 1.00)" : "FAILS (> 1.00)"]) }, [4, 1, 2], { redWhen: (row) => row[2].startsWith("FAILS") });
+  heading(`Warnings (${r.warnings.length})`);
+  if (r.warnings.length === 0) line("None: no method limit is crossed.");
+  for (const w of r.warnings) line(`${w.severity === "warning" ? "Warning" : "Note"}: ${w.message}`);
+
+  // ── Elevation ──────────────────────────────────────────────────────────────────────────────
+  doc.addPage();
+  heading("Side elevation of the governing post (to scale)", 14);
+  line("Looking along the array from its right end; the front (low edge) is on the left. Drawn from the same geometry as the elevation on screen.");
+  drawElevation(doc, r, { x: MARGIN, y: doc.y + 10, width, height: bottom() - doc.y - 20 }, F);
+
+  // ── Inputs and criteria ────────────────────────────────────────────────────────────────────
+  doc.addPage();
+  heading("Inputs of this revision", 14);
+  for (const g of inputGroups(ctx.input)) {
+    heading(g.title, 11);
+    pairs(g.rows, 190);
+  }
+  if (ctx.criteria) {
+    const c = ctx.criteria;
+    table({
+      title: `Design criteria card: ${c.jurisdiction} (${c.state})`,
+      columns: ["Criterion", "Value", "Source", "Checked on"],
+      rows: Object.entries(c.values).map(([key, value]) => {
+        const src = (c.sources[key] ?? {}) as { source?: string; checkedOn?: string };
+        return [CRITERIA_LABELS[key] ?? key, `${String(value)}${CRITERIA_UNITS[key] ? ` ${CRITERIA_UNITS[key]}` : ""}`, src.source ?? "no source given", src.checkedOn ? calendarDateInWords(src.checkedOn) : "—"];
+      }),
+    }, [2.6, 1.2, 4, 1.6]);
+  } else {
+    heading("Design criteria card");
+    line("No criteria card is applied to this project: the site values above were entered by the designer.");
   }
 
-  table(criteriaTable(ctx), [3, 2, 4, 1.4]);
-  table(inputsTable(ctx), [3, 4]);
-  heading("Method, editions and sections used");
-  for (const m of methodLines(r)) line(`• ${m}`);
+  // ── Method ─────────────────────────────────────────────────────────────────────────────────
+  heading("Method, with the governing case's numbers", 14);
+  line(`${r.references.asce}; ${r.references.ibc}; ${r.references.aisc}. ${r.wind.method}`);
+  for (const s of methodSteps(r)) {
+    heading(s.title, 10);
+    line(`Source: ${s.source}`, { colour: "#475569", size: 8 });
+    for (const l of s.lines) line(l, { indent: 10 });
+  }
+  heading("Sections used");
+  for (const s of r.references.sections) line(`• ${s}`);
+
+  // ── Tables ─────────────────────────────────────────────────────────────────────────────────
   table(windTable(r), [2.4, 1, 1, 1.1, 1.1, 1.2, 1.2, 1.2]);
   heading("Governing loads");
   for (const g of governingLines(r)) line(g);
   table(loadsTable(r), [0.8, 3, 1, 1.2, 1.2, 1.2]);
-  table(checksTable(r), [2.4, 1, 1, 0.7, 0.7, 0.8, 3]);
-  heading("Field dimensions per post");
-  for (const p of r.field.posts) line(`Post ${p.id}: ${fmt(p.heightAboveGradeIn)} in above grade + ${fmt(p.embedmentIn)} in embedded = ${fmt(p.postLengthIn)} in post; hole ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep`);
-  line(`Lowest-edge clearance ${fmt(r.geometry.minClearanceIn)} in at ${fmt(r.geometry.tiltDeg)}° tilt. ${r.field.note}`);
-  heading("Concrete");
-  for (const c of concreteLines(r)) line(c);
-  heading("Warnings");
-  if (r.warnings.length === 0) line("None: no method limit is crossed.");
-  for (const w of r.warnings) line(`[${w.severity}] ${w.message} (${w.code})`);
+  table(checksTable(r), [2.4, 1, 1, 0.7, 0.7, 0.8, 3], { redWhen: (row) => row[5] === "FAILS" });
+
+  // ── Review record and cautions ─────────────────────────────────────────────────────────────
+  heading("Review record");
+  if (standing.reviews.length === 0) line("Not submitted for review.");
+  for (const rv of standing.reviews) {
+    const what = rv.decision === "approve" ? "approved" : rv.decision === "request_changes" ? "requested changes" : "not yet decided";
+    line(`Submitted ${dateInWords(rv.submittedAt, tz)} by ${rv.submittedByName} to ${rv.engineerChosenName}: ${what}${rv.decidedAt ? ` on ${dateInWords(rv.decidedAt, tz)} by ${rv.engineerName}` : ""}.`.replace(/\.\.$/, "."));
+    for (const c of rv.comments) line(`Comment${c.fieldPath ? ` on ${fieldLabel(c.fieldPath)}` : ""}: ${c.body}`, { indent: 10 });
+  }
   heading("Cautions");
+  line(DEFER_TO_CODE, { bold: true });
   for (const c of SITE_CAUTIONS) line(`• ${c}`);
 
-  // Every page: the defer-to-code statement and "page i of n", drawn in the reserved bottom band.
+  // ── Every page: watermark, caution, page n of N, revision id, approval check QR ────────────
+  const qr = approved && a.verifyCode ? QRCode.create(verifyUrl(a.verifyCode), { errorCorrectionLevel: "M" }) : null;
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
-    const bottom = doc.page.margins.bottom;
+    const keep = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
+    if (!approved) {
+      doc.save().rotate(-35, { origin: [doc.page.width / 2, doc.page.height / 2] }).font(F.bold).fontSize(64).fillColor(BAD).fillOpacity(0.12)
+        .text("NOT APPROVED", 0, doc.page.height / 2 - 40, { width: doc.page.width, align: "center", lineBreak: false }).restore();
+      doc.fillOpacity(1);
+    }
     const top = doc.page.height - MARGIN - FOOTER_HEIGHT + 8;
-    doc.moveTo(MARGIN, top - 4).lineTo(doc.page.width - MARGIN, top - 4).strokeColor("#b45309").stroke();
-    doc.font("Helvetica-Bold").fontSize(8).fillColor("#78350f").text(pdfSafe(`Caution: ${DEFER_TO_CODE}`), MARGIN, top, { width });
-    doc.font("Helvetica").fontSize(8).fillColor("black")
-      .text(pdfSafe(`${ctx.projectName} · ${ctx.designName} · revision ${ctx.number} · ${standing.label}`), MARGIN, doc.page.height - MARGIN - 10, { width: width - 80 })
-      .text(`Page ${i - range.start + 1} of ${range.count}`, doc.page.width - MARGIN - 80, doc.page.height - MARGIN - 10, { width: 80, align: "right" });
-    doc.page.margins.bottom = bottom;
+    const textWidth = width - (qr ? 70 : 0);
+    doc.moveTo(MARGIN, top - 4).lineTo(doc.page.width - MARGIN, top - 4).lineWidth(0.8).stroke("#b45309");
+    doc.font(F.bold).fontSize(7.5).fillColor("#78350f").text(`Caution: ${DEFER_TO_CODE}`, MARGIN, top, { width: textWidth });
+    doc.font(F.regular).fontSize(7.5).fillColor(INK)
+      .text(`${ctx.projectName} · ${ctx.designName} · revision ${ctx.number} · ${approved ? standing.label : "NOT APPROVED"}`, MARGIN, doc.page.height - MARGIN - 32, { width: textWidth - 70, lineBreak: false })
+      .text(`Revision id ${ctx.id}`, MARGIN, doc.page.height - MARGIN - 22, { width: textWidth - 70, lineBreak: false });
+    if (qr) doc.text(`Approval check: ${verifyUrl(a!.verifyCode!)}`, MARGIN, doc.page.height - MARGIN - 12, { width: textWidth - 70, lineBreak: false });
+    doc.font(F.bold).text(`Page ${i - range.start + 1} of ${range.count}`, MARGIN + textWidth - 70, doc.page.height - MARGIN - 12, { width: 70, align: "right" });
+    if (qr) drawQr(doc, qr.modules, doc.page.width - MARGIN - 60, top - 2, 60);
+    doc.page.margins.bottom = keep;
   }
   doc.end();
   await done;
   return Buffer.concat(chunks);
+}
+
+/** The QR code as vector squares (crisp at any print size). */
+function drawQr(doc: PDFKit.PDFDocument, modules: { size: number; get: (r: number, c: number) => number | boolean }, x: number, y: number, size: number): void {
+  const cell = size / modules.size;
+  doc.save().fillColor("black");
+  for (let r = 0; r < modules.size; r++) for (let c = 0; c < modules.size; c++) if (modules.get(r, c)) doc.rect(x + c * cell, y + r * cell, cell, cell);
+  doc.fill().restore();
 }

@@ -1,3 +1,4 @@
+import { randomBytes } from "node:crypto";
 import { assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
@@ -7,9 +8,11 @@ import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
 import { engagedEngineers } from "@/db/queries/engagements";
 import {
-  designAuthorIds, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
+  designAuthorIds, factsOf, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
 } from "@/db/queries/reviews";
+import { confirmSignature, decideOverrides } from "./approval-signature";
+import { ratioText } from "./check-outcome";
 import { engineerEligibility, licenceEligibility } from "./eligibility";
 import type { ReviewBody } from "./schemas";
 
@@ -102,6 +105,11 @@ export async function decideRevision(
   body.comments.forEach((c, i) => {
     if (c.fieldPath && !inputKeys.has(c.fieldPath)) throw invalid(`comments.${i}.fieldPath`, `"${c.fieldPath}" is not an input of this revision; pin the comment to an input shown on the page or leave it unpinned`);
   });
+  const approving = body.decision === "approve";
+  if (!approving && body.overrides.length) throw invalid("overrides", "Overrides go with an approval; remove them to request changes");
+  const overrides = approving ? decideOverrides(revision.result, body.overrides) : [];
+  // Last, so a refused approval for any other reason never costs a password attempt.
+  if (approving) await confirmSignature(user, body.password);
 
   const to = body.decision === "approve" ? "approved" : "changes_requested";
   const submittedBy = await db.transaction(async (trx) => {
@@ -120,6 +128,8 @@ export async function decideRevision(
       licence: { number: eligible.licence.licenceNumber, state: eligible.licence.state, expiresOn: eligible.licence.expiresOn },
       letterFileKey,
       comments: body.comments,
+      // 16 random bytes: the public verify code cannot be guessed or walked.
+      approval: approving ? { overrides, facts: factsOf(revision), verifyCode: randomBytes(16).toString("base64url") } : undefined,
     });
     await setRevisionStatus(trx, revisionId, ["in_review"], to);
     return open.submittedBy;
@@ -134,6 +144,7 @@ export async function decideRevision(
       subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
       text: [
         `${user.name} (licence ${eligible.licence.licenceNumber}, ${eligible.licence.state}) ${words} revision ${revision.number} of "${revision.designName}" (${revision.projectName}).`,
+        ...(overrides.length ? ["", "Approved although these checks fail, for the reasons given:", ...overrides.map((o) => `- ${o.title} (ratio ${ratioText(o.ratio)}): ${o.reason}`)] : []),
         ...(body.comments.length ? ["", "Comments:", ...body.comments.map((c) => `- ${c.fieldPath ? `[${c.fieldPath}] ` : ""}${c.body}`)] : []),
         "",
         `Open the review: ${reviewUrl(revisionId)}`,

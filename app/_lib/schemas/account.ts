@@ -34,7 +34,9 @@ export const signUpSchema = z.object({
   name: personNameField,
   email: emailField,
   password: newPasswordField,
-  extraRoles: z.array(z.enum(["designer", "engineer", "installer"], { error: "Extra roles may be designer, engineer or installer." })).default([]),
+  // Not the reviewing-engineer role: nobody grants themselves the right to approve designs; another
+  // admin gives it, or an invitation carries it.
+  extraRoles: z.array(z.enum(["designer", "installer"], { error: "Extra roles may be designer or installer; another admin gives the reviewing-engineer role." })).default([]),
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 

@@ -21,10 +21,11 @@ export function SignUpForm() {
       <RoleCheckboxes
         name="extraRoles"
         legend="You will be the admin. Do you also…"
-        roles={["designer", "engineer", "installer"]}
+        roles={["designer", "installer"]}
         checked={v ? v.extraRoles.split(",") : ["designer"]}
         error={errors?.extraRoles}
       />
+      <p className="text-xs text-slate-600">The reviewing-engineer role, which approves designs, is given by another admin or comes with an invitation: nobody gives it to themselves.</p>
       <FormStatus state={state} />
       <SubmitButton pendingText="Creating…">Create organisation</SubmitButton>
     </form>

@@ -2,11 +2,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireRole } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { listAuditEvents, type AuditRow } from "@/db/queries/audit";
+import { auditCursorText, listAuditEvents, parseAuditCursor, type AuditRow } from "@/db/queries/audit";
 
 export const metadata: Metadata = { title: "Audit log" };
 
 const PER_PAGE = 25;
+const AUDIT_COUNT_LABEL = "10,000+";
 
 const ACTION_LABELS: Record<string, string> = {
   "sign-in": "Signed in",
@@ -33,12 +34,19 @@ function describe(row: AuditRow): string {
   return "";
 }
 
-export default async function AuditPage({ searchParams }: { searchParams: Promise<{ page?: string }> }) {
+type Search = { older?: string; newer?: string; oldest?: string };
+
+export default async function AuditPage({ searchParams }: { searchParams: Promise<Search> }) {
   const user = await forPage(() => requireRole("admin"), "/admin/audit");
-  const requested = Number.parseInt((await searchParams).page ?? "1", 10);
-  const page = Number.isFinite(requested) && requested > 0 ? requested : 1;
-  const { rows, total } = await listAuditEvents(user.organisationId, { offset: (page - 1) * PER_PAGE, limit: PER_PAGE });
-  const pages = Math.max(1, Math.ceil(total / PER_PAGE));
+  const search = await searchParams;
+  // Keyset pages: a long log costs the same on its last page as on its first.
+  const older = parseAuditCursor(search.older);
+  const newer = older ? undefined : parseAuditCursor(search.newer);
+  const oldest = !older && !newer && search.oldest === "1";
+  const { rows, total, totalCapped, hasOlder, hasNewer } = await listAuditEvents(user.organisationId, { limit: PER_PAGE, older, newer, oldest });
+  const newerHref = rows.length > 0 ? `/admin/audit?newer=${auditCursorText(rows[0].cursor)}` : "/admin/audit";
+  const olderHref = rows.length > 0 ? `/admin/audit?older=${auditCursorText(rows[rows.length - 1].cursor)}` : "/admin/audit";
+  const counted = totalCapped ? `${AUDIT_COUNT_LABEL} events` : `${total.toLocaleString("en-US")} ${total === 1 ? "event" : "events"}`;
   return (
     <>
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -92,10 +100,12 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
           </tbody>
         </table>
       </div>
-      <nav aria-label="Audit log pages" className="mt-3 flex items-center gap-4 text-sm">
-        {page > 1 ? <Link href={`/admin/audit?page=${page - 1}`} className="text-accent-700 underline">← Newer</Link> : <span className="text-slate-400">← Newer</span>}
-        <span>Page {Math.min(page, pages)} of {pages} · {total} events</span>
-        {page < pages ? <Link href={`/admin/audit?page=${page + 1}`} className="text-accent-700 underline">Older →</Link> : <span className="text-slate-400">Older →</span>}
+      <nav aria-label="Audit log pages" className="mt-3 flex flex-wrap items-center gap-4 text-sm">
+        {hasNewer ? <Link href="/admin/audit" className="text-accent-700 underline">Newest</Link> : <span className="text-slate-400">Newest</span>}
+        {hasNewer ? <Link href={newerHref} className="text-accent-700 underline">← Newer</Link> : <span className="text-slate-400">← Newer</span>}
+        <span>{counted}</span>
+        {hasOlder ? <Link href={olderHref} className="text-accent-700 underline">Older →</Link> : <span className="text-slate-400">Older →</span>}
+        {hasOlder ? <Link href="/admin/audit?oldest=1" className="text-accent-700 underline">Oldest</Link> : <span className="text-slate-400">Oldest</span>}
       </nav>
     </>
   );

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { assertOwned, assertRole, requireUser, type CurrentUser } from "@/app/_lib/auth";
+import { AccessError, assertOwned, assertRole, requireUser, type CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { forPage } from "@/app/_lib/page-access";
@@ -77,7 +77,20 @@ async function applyChange(form: FormData, change: (member: MemberRow) => Member
   return { ok: true, message: done.replace("{name}", member.name) };
 }
 
+/**
+ * Approving a design is a licensed engineer's signature: an admin cannot give the engineer role to
+ * their own membership (another admin does, or an invitation carries it), so nobody can make
+ * themselves an approver. The audit event names who granted it.
+ */
+function refuseSelfGrant(user: CurrentUser, member: MemberRow, roles: string[]): void {
+  if (member.userId === user.userId && roles.includes("engineer") && !member.roles.includes("engineer")) {
+    throw new AccessError(403, "You cannot give yourself the reviewing-engineer role: another admin must grant it.");
+  }
+}
+
 export async function changeRolesAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const { user, member } = await adminAndMember(form.get("membershipId"));
+  await forPage(async () => refuseSelfGrant(user, member, form.getAll("roles").map(String)), PAGE);
   return applyChange(form, () => {
     const parsed = changeRolesSchema.safeParse(changeRolesInput(form));
     if (!parsed.success) return { message: "Choose at least one role.", fieldErrors: z.flattenError(parsed.error).fieldErrors };

@@ -5,7 +5,12 @@ import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
 import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
+import { checkOutcome } from "@/app/_lib/review/check-outcome";
+import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
 import { fmt } from "@/app/_lib/review/report-model";
+import { verifyUrl } from "@/app/_lib/review/verify";
+import { CheckSummary } from "@/components/review/check-summary";
+import { holdsOfRevision } from "@/db/queries/holds";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { HoldBanner } from "@/components/review/hold-banner";
@@ -54,12 +59,15 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
   }
 
   const r = ctx.result;
-  const url = `${env.appUrl}/field/${ctx.id}`;
+  const a = standing.approval;
+  // The QR code and short link open the public approval check, so an inspector can confirm on the
+  // spot that this is the approved, current revision.
+  const url = a?.verifyCode ? verifyUrl(a.verifyCode) : `${env.appUrl}/field/${ctx.id}`;
   const qr = await QRCode.toString(url, { type: "svg", margin: 0, errorCorrectionLevel: "M" });
-  const entries = await asBuiltEntries(ctx.id);
+  const [entries, holds] = await Promise.all([asBuiltEntries(ctx.id), holdsOfRevision(ctx.id)]);
+  const cleared = holds.filter((h) => h.clearedAt);
   const x0 = r.geometry.posts[0]?.xFt ?? 0;
   const positions = new Map(r.geometry.posts.map((p) => [p.id, (p.xFt - x0) * 12]));
-  const a = standing.approval;
   const tilts = ctx.result.input.array.tiltSettingsDeg;
   // Revisions saved before the azimuth input carry none: say nothing rather than guess.
   const azimuthDeg = ctx.result.input.array.azimuthDeg as number | undefined;
@@ -74,20 +82,35 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} />
+      <HoldBanner holds={standing.holds} canClear={hasRole(user, "engineer")} timeZone={ctx.timeZone} />
 
       <header className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
           <h1 className="text-2xl font-semibold">{ctx.designName}</h1>
           <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">Revision {ctx.number} <StatusBadge status={standing.status} onHold={standing.holds.length > 0} /></p>
-          {a ? <p className="text-sm text-slate-700">Approved for construction by {a.engineerName}, licence {a.licenceNumber} ({a.licenceState}), {a.decidedAt?.toISOString().slice(0, 10)}</p> : null}
+          {a ? <p className="text-sm text-slate-700">Approved for construction by {a.engineerName}, licence {a.licenceNumber} ({a.licenceState}, valid through {calendarDateInWords(a.licenceExpiresOn)}), {dateInWords(a.decidedAt, ctx.timeZone)}</p> : null}
         </div>
-        <figure className="hidden w-24 shrink-0 text-center print:block">
+        <figure className="w-24 shrink-0 text-center">
           <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: qr }} />
-          <figcaption className="mt-1 text-[9px] leading-tight">Scan to open this spec online</figcaption>
+          <figcaption className="mt-1 text-[10px] leading-tight">Inspector: scan to check this approval</figcaption>
         </figure>
       </header>
+      {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
+      <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
+      {cleared.length ? (
+        <section aria-labelledby="cleared-h" className="rounded-lg border-2 border-sky-600 bg-sky-50 p-4 text-sky-950">
+          <h2 id="cleared-h" className="text-lg font-semibold">Engineer&apos;s instructions after a hold</h2>
+          <ul className="mt-2 space-y-2 text-base">
+            {cleared.map((h) => (
+              <li key={h.id}>
+                <p className="font-semibold">{h.clearNote}</p>
+                <p className="text-sm">Hold cleared by {h.clearedByName} on {dateTimeInWords(h.clearedAt, ctx.timeZone)}. The hold was: {h.reason}</p>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       <div className="no-print flex flex-wrap gap-2">
         <PrintButton />
         <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md border border-slate-300 bg-white px-4 py-3 text-base">Calculation report (PDF)</a>
@@ -149,7 +172,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         {hasRole(user, "installer", "engineer") ? (
           <div className="mt-2"><AsBuiltForm revisionId={ctx.id} postIds={r.field.posts.map((p) => p.id)} diameterIn={r.footing.diameterIn} depthIn={r.footing.depthIn} /></div>
         ) : <p className="mt-1 text-sm text-slate-600">The crew (installer role) records each hole here.</p>}
-        <AsBuiltLog entries={entries} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
+        <AsBuiltLog entries={entries} holds={holds} timeZone={ctx.timeZone} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
       </section>
     </div>
   );

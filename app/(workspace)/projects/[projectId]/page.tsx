@@ -49,6 +49,9 @@ export default async function ProjectPage({ params, searchParams }: Props) {
         </div>
         {canWrite ? <Link href={`/projects/${project.id}/edit`} className="rounded-md border border-slate-300 bg-white px-3 py-1.5 text-sm hover:bg-slate-50">Edit project</Link> : null}
       </div>
+      <p className="mt-3 max-w-2xl rounded-md border border-slate-200 bg-slate-50 px-3 py-2 text-sm text-slate-700">
+        An approved revision carries the project facts as they were approved (name, address, state and criteria card). Edits here show on new revisions only.
+      </p>
 
       <section aria-labelledby="card-heading" className="mt-6 rounded-lg border border-slate-200 bg-white p-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2">

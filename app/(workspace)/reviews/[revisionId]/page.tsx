@@ -2,12 +2,15 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
+import { checkOutcome } from "@/app/_lib/review/check-outcome";
+import { dateInWords } from "@/app/_lib/review/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
 import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputRows, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
 import { ownedRevision } from "@/app/_lib/review/workflow";
 import { fieldLabel } from "@/components/design/fields";
 import { inputChanges } from "@/components/design/revision-diff";
+import { CheckSummary } from "@/components/review/check-summary";
 import { HoldBanner } from "@/components/review/hold-banner";
 import { PlainTable } from "@/components/review/plain-table";
 import { ReviewPreview } from "@/components/review/review-preview";
@@ -62,15 +65,19 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   const pinned = new Map<string, { body: string; when: Date }[]>();
   for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
   const inputs = inputRows(ctx.input);
+  const outcome = checkOutcome(r);
 
   return (
     <div className="space-y-6">
       <header className="space-y-2">
         <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
+        <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
+          lead={outcome.failing.length && ctx.status !== "approved" ? "A failing check can still be submitted and approved, but only with the engineer's written reason for each one." : undefined} />
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <span>Status:</span> <StatusBadge status={standing.status} onHold={standing.holds.length > 0} />
-          <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {ctx.createdAt.toISOString().slice(0, 10)}</span>
+          <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {dateInWords(ctx.createdAt, ctx.timeZone)}</span>
+          {ctx.factsPinned ? <span className="text-slate-600">· project facts as approved</span> : null}
         </div>
         <div className="no-print flex flex-wrap gap-2 text-sm">
           <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800">Download calculation report (PDF)</a>
@@ -83,7 +90,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </header>
-      <HoldBanner holds={standing.holds} canClear={isEngineer} />
+      <HoldBanner holds={standing.holds} canClear={isEngineer} timeZone={ctx.timeZone} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
@@ -164,12 +171,12 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
 
         <aside className="order-1 min-w-0 space-y-4 lg:order-2">
           {isEngineer ? (
-            <DecisionPanel open={canDecide} revisionId={ctx.id} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
+            <DecisionPanel open={canDecide} revisionId={ctx.id} failing={outcome.failing} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}
-              licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} and the time. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
+              licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} (valid through ${eligibility.licence.expiresOn}), the time and the project facts as they stand now. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
           ) : null}
-          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} /> : null}
-          <ReviewHistory standing={standing} revisionId={ctx.id} />
+          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} /> : null}
+          <ReviewHistory standing={standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
         </aside>
       </div>
     </div>

@@ -58,7 +58,7 @@ export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revi
       </div>
       <div>
         <label htmlFor="photos" className="block text-sm font-medium">Photos of the hole (up to 6)</label>
-        <input id="photos" name="photos" type="file" accept="image/*" capture="environment" multiple className="block w-full text-base" />
+        <input id="photos" name="photos" type="file" accept="image/jpeg,image/png,image/webp" capture="environment" multiple className="block w-full text-base" />
         {errorLine("photos")}
       </div>
       <p className="text-sm text-slate-600">A hole shallower or narrower than the spec, or rock, water, fill or caving, puts the job on hold until the engineer clears it.</p>

@@ -1,8 +1,10 @@
 import { GROUND_FOUND_LABELS } from "@/app/_lib/review/ground-labels";
+import { dateTimeInWords } from "@/app/_lib/review/dates";
 import type { AsBuiltEntry } from "@/db/queries/as-built";
+import type { HoldRecord } from "@/db/queries/holds";
 
 /** What the crew recorded, hole by hole, with what differs from the spec said in words. */
-export function AsBuiltLog({ entries, depthIn, diameterIn }: { entries: AsBuiltEntry[]; depthIn: number; diameterIn: number }) {
+export function AsBuiltLog({ entries, holds = [], timeZone, depthIn, diameterIn }: { entries: AsBuiltEntry[]; holds?: HoldRecord[]; timeZone?: string; depthIn: number; diameterIn: number }) {
   if (entries.length === 0) return <p className="mt-3 text-sm text-slate-600">No hole recorded yet.</p>;
   return (
     <ul className="mt-4 space-y-3">
@@ -17,7 +19,12 @@ export function AsBuiltLog({ entries, depthIn, diameterIn }: { entries: AsBuiltE
             <p className="font-semibold">Post {e.postId}: {e.measuredDiameterIn} in × {e.measuredDepthIn} in deep, ground {GROUND_FOUND_LABELS[e.groundFound].toLowerCase()}</p>
             <p>{problems.length ? <strong className="text-red-800">Does not match the spec: {problems.join(", ")}</strong> : "Matches the spec"}</p>
             {e.notes ? <p className="text-slate-700">{e.notes}</p> : null}
-            <p className="text-xs text-slate-500">{e.recordedByName}, {e.recordedAt.toISOString().slice(0, 16).replace("T", " ")} UTC</p>
+            <p className="text-xs text-slate-500">{e.recordedByName}, {dateTimeInWords(e.recordedAt, timeZone)}</p>
+            {holds.filter((h) => h.asBuiltEntryId === e.id).map((h) => (
+              <p key={h.id} className={`mt-1 rounded p-2 ${h.clearedAt ? "bg-sky-100 text-sky-950" : "bg-red-100 font-semibold text-red-900"}`}>
+                {h.clearedAt ? <>Hold cleared by {h.clearedByName}, {dateTimeInWords(h.clearedAt, timeZone)}: <strong>{h.clearNote}</strong></> : "On hold: waiting for the engineer."}
+              </p>
+            ))}
             {e.photoKeys.length ? (
               <div className="mt-2 flex flex-wrap gap-2">
                 {e.photoKeys.map((_, i) => (

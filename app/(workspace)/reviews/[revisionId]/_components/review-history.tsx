@@ -1,9 +1,10 @@
+import { ratioText } from "@/app/_lib/review/check-outcome";
+import { calendarDateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
 import type { Standing } from "@/app/_lib/review/standing";
 
-const when = (d: Date | null) => (d ? `${d.toISOString().slice(0, 16).replace("T", " ")} UTC` : "");
-
 /** Every submission of this revision and what was decided, with the approval record in full. */
-export function ReviewHistory({ standing, revisionId }: { standing: Standing; revisionId: string }) {
+export function ReviewHistory({ standing, revisionId, timeZone }: { standing: Standing; revisionId: string; timeZone: string }) {
+  const when = (d: Date | null) => (d ? dateTimeInWords(d, timeZone) : "");
   const a = standing.approval;
   return (
     <section aria-labelledby="history-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -11,8 +12,14 @@ export function ReviewHistory({ standing, revisionId }: { standing: Standing; re
       {a ? (
         <div className="mt-2 rounded-md border border-emerald-400 bg-emerald-50 p-3 text-sm">
           <p className="font-semibold">Approved for construction</p>
-          <p>{a.engineerName}, licence {a.licenceNumber} ({a.licenceState})</p>
+          <p>{a.engineerName}, licence {a.licenceNumber} ({a.licenceState}, valid through {calendarDateInWords(a.licenceExpiresOn)})</p>
           <p>{when(a.decidedAt)}</p>
+          {a.overrides.length ? (
+            <div className="mt-2 rounded border-2 border-red-600 bg-white p-2 text-red-950">
+              <p className="font-semibold">Approved although {a.overrides.length === 1 ? "a check fails" : `${a.overrides.length} checks fail`}:</p>
+              <ul className="mt-1 space-y-1">{a.overrides.map((o) => <li key={o.checkId}><strong>{o.title}</strong> (ratio {ratioText(o.ratio)}): {o.reason}</li>)}</ul>
+            </div>
+          ) : null}
           {a.letterFileKey ? <p><a className="underline" href={`/api/revisions/${revisionId}/letter`}>Signed letter</a></p> : null}
         </div>
       ) : null}

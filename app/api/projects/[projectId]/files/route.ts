@@ -4,7 +4,7 @@ import { requireUser } from "@/app/_lib/auth";
 import { assertCanWrite, projectFor } from "@/app/_lib/designs";
 import { listQueryFrom } from "@/app/_lib/schemas/project";
 import { deleteObject, putObject } from "@/app/_lib/storage";
-import { displayName, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, objectKeys, photoThumbnail, sniffType } from "@/app/_lib/uploads";
+import { acceptUpload, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, objectKeys, photoThumbnail } from "@/app/_lib/uploads";
 import { getProjectFile, insertProjectFile, listProjectFiles } from "@/db/queries/project-files";
 
 export const dynamic = "force-dynamic";
@@ -28,9 +28,8 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
   const project = await projectFor(user, (await params).projectId);
   assertCanWrite(user);
-  const tooLarge = `File must be at most ${MAX_UPLOAD_LABEL}`;
   // Refuse an oversized body from its declared length before reading it (multipart adds a little).
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_UPLOAD_BYTES + 64 * 1024) throw refuse("file", tooLarge);
+  if (Number(request.headers.get("content-length") ?? 0) > MAX_UPLOAD_BYTES + 64 * 1024) throw refuse("file", `File must be at most ${MAX_UPLOAD_LABEL}`);
   let form: FormData;
   try {
     form = await request.formData();
@@ -39,19 +38,16 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
   }
   const file = form.get("file");
   if (!(file instanceof File) || file.size === 0) throw refuse("file", "Choose a file to upload (JPEG, PNG, WebP or PDF)");
-  if (file.size > MAX_UPLOAD_BYTES) throw refuse("file", tooLarge);
   const description = String(form.get("description") ?? "").trim();
   if (description.length > 300) throw refuse("description", "Description must be at most 300 characters");
 
-  const bytes = new Uint8Array(await file.arrayBuffer());
-  const type = sniffType(bytes);
-  if (!type) throw refuse("file", "File must be a JPEG, PNG or WebP photo or a PDF; this file's content is none of those (its name does not count)");
+  const { bytes, type, name } = await acceptUpload(file, "projectFile", "file");
   let thumbnail: Uint8Array | null = null;
   if (type.kind === "photo") {
     try {
       thumbnail = await photoThumbnail(bytes);
     } catch {
-      throw refuse("file", `This ${type.label} could not be read; it may be damaged. Export it again and upload the copy`);
+      throw refuse("file", `${name} could not be read as a ${type.label}; it may be damaged. Export it again and upload the copy`);
     }
   }
 
@@ -60,7 +56,7 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
   try {
     if (thumbnail) await putObject(keys.thumbnail, thumbnail, "image/webp");
     await insertProjectFile({
-      id: keys.fileId, projectId: project.id, organisationId: user.organisationId, kind: type.kind, originalName: displayName(file.name),
+      id: keys.fileId, projectId: project.id, organisationId: user.organisationId, kind: type.kind, originalName: name,
       contentType: type.contentType, sizeBytes: bytes.byteLength, objectKey: keys.original, thumbnailKey: thumbnail ? keys.thumbnail : null,
       description, uploadedBy: user.userId,
     });
@@ -71,4 +67,4 @@ export const POST = apiRoute<Context>(async (request, { params }) => {
   }
   const saved = await getProjectFile(keys.fileId);
   return Response.json({ file: { ...saved, objectKey: undefined, thumbnailKey: undefined, hasThumbnail: Boolean(thumbnail) } }, { status: 201 });
-});
+}, { body: "multipart" });

@@ -2,6 +2,7 @@ import { apiRoute } from "@/app/_lib/api";
 import { AccessError, requireUser } from "@/app/_lib/auth";
 import { isUuid, projectFor } from "@/app/_lib/designs";
 import { getObject } from "@/app/_lib/storage";
+import { fileResponse } from "@/app/_lib/uploads";
 import { getProjectFile } from "@/db/queries/project-files";
 
 export const dynamic = "force-dynamic";
@@ -9,7 +10,7 @@ type Context = { params: Promise<{ projectId: string; fileId: string }> };
 
 /**
  * Download an upload (or `?variant=thumbnail` for a photo's thumbnail) after the access check.
- * Photos open in the browser; PDFs download. The stored, sniffed type is sent with nosniff.
+ * Photos open in the browser; PDFs download.
  */
 export const GET = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
@@ -22,17 +23,6 @@ export const GET = apiRoute<Context>(async (request, { params }) => {
   const wantsThumbnail = new URL(request.url).searchParams.get("variant") === "thumbnail";
   if (wantsThumbnail && !file.thumbnailKey) return Response.json({ errors: [{ path: "variant", message: "Only photos have thumbnails" }] }, { status: 404 });
   const object = await getObject(wantsThumbnail ? file.thumbnailKey! : file.objectKey);
-  const contentType = wantsThumbnail ? "image/webp" : file.contentType;
-  const disposition = file.kind === "photo" ? "inline" : "attachment";
-  const asciiName = file.originalName.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  return new Response(object.body as BodyInit, {
-    headers: {
-      "content-type": contentType,
-      "content-length": String(object.body.byteLength),
-      "content-disposition": `${disposition}; filename="${asciiName}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
-      "x-content-type-options": "nosniff",
-      "cache-control": "private, max-age=300",
-      "content-security-policy": "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; sandbox",
-    },
-  });
+  // Photos open in the browser; PDFs download (fileResponse re-sniffs and sets the safety headers).
+  return fileResponse(object.body, { fileName: wantsThumbnail ? `thumbnail-${file.originalName}.webp` : file.originalName, inlinePhotos: true });
 });

@@ -19,6 +19,8 @@ function Section({ title, children, id }: { title: string; children: React.React
 
 const th = "px-2 py-1 text-left text-xs font-semibold text-slate-600 whitespace-nowrap";
 const td = "px-2 py-1 tabular-nums whitespace-nowrap";
+/** A post's continuous-beam reaction ÷ its tributary share (results saved before it was added have none). */
+const fmtFactor = (f: number | undefined) => (f === undefined ? "—" : `${f.toFixed(3)} ×`);
 
 export function FootingHeadline({ result, units }: { result: DesignResult; units: UnitSystem }) {
   const f = result.footing;
@@ -97,7 +99,7 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
       <Section title="Loads on each post (ASD, worst combination)" id="res-posts">
         <div className="overflow-x-auto">
           <table className="min-w-full text-sm">
-            <thead><tr><th className={th}>Post</th><th className={th}>Tilt</th><th className={th}>Shear</th><th className={th}>Moment at grade</th><th className={th}>Uplift</th><th className={th}>Down</th></tr></thead>
+            <thead><tr><th className={th}>Post</th><th className={th}>Tilt</th><th className={th}>Beam reaction factor</th><th className={th}>Shear</th><th className={th}>Moment at grade</th><th className={th}>Uplift</th><th className={th}>Down</th></tr></thead>
             <tbody>
               {result.postLoads.map((p) => {
                 const max = (get: (r: (typeof p.combinations)[number]) => number) => Math.max(...p.combinations.map((r) => Math.abs(get(r))));
@@ -105,6 +107,7 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
                   <tr key={`${p.postId}-${p.tiltDeg}`}>
                     <td className={td}>{p.postId}</td>
                     <td className={td}>{p.tiltDeg}°</td>
+                    <td className={td}>{fmtFactor(result.geometry.posts.find((g) => g.id === p.postId)?.reactionFactor)}</td>
                     <td className={td}>{q(max((r) => r.shearLb), "lb")}</td>
                     <td className={td}>{q(max((r) => r.momentAtGradeLbFt), "lbFt")}</td>
                     <td className={td}>{q(max((r) => r.windUpliftLb), "lb")}</td>

@@ -1,0 +1,119 @@
+/**
+ * The list behaviours that keep a large organisation's pages cheap (issue 19) still show the right
+ * rows: the field list's current-then-superseded order from designs.approved_revision_id, the
+ * design count kept by a trigger, the footing columns written with the revision, project search
+ * through the criteria card, and the audit log's keyset pages.
+ */
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/client";
+import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
+import { auditCursorText, listAuditEvents, parseAuditCursor } from "@/db/queries/audit";
+import { listProjects } from "@/db/queries/projects";
+import { listDesigns } from "@/db/queries/designs";
+import { listRevisions } from "@/db/queries/revisions";
+import { approvedSpecs } from "@/db/queries/review-queue";
+import { twoPostDesignInput } from "@/engine";
+import { addRevision, DESIGNER, ENGINEER, makeDesign, userId } from "../support/review-fixtures";
+
+async function approve(revisionId: string): Promise<void> {
+  const engineer = await userId(ENGINEER);
+  await db("revisions").where({ id: revisionId }).update({ status: "in_review" });
+  const [review] = await db("reviews").insert({ revision_id: revisionId, organisation_id: DEMO_ORG_ID, engineer_id: engineer, submitted_by: await userId(DESIGNER) }).returning("id");
+  await db("reviews").where({ id: review.id }).update({ decision: "approve", decided_by: engineer, decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.", licence_number: "PE-000000-DEMO", licence_state: "CO",
+    verify_code: `list-test-${review.id}`, facts_snapshot: JSON.stringify({ projectName: "x", projectAddress: "", projectState: "CO", criteria: null }) });
+  await db("revisions").where({ id: revisionId }).update({ status: "approved" });
+}
+
+describe("field list", () => {
+  it("lists the newest approval of a design as current and the older approval as superseded, with the footing from columns", async () => {
+    const { designId, revisionId: first } = await makeDesign({ name: "Field order probe" });
+    await approve(first);
+    expect((await db("designs").where({ id: designId }).first("approved_revision_id")).approved_revision_id).toBe(first);
+    const second = await addRevision(designId, { ...twoPostDesignInput, posts: { ...twoPostDesignInput.posts, holeDiameterIn: 36 } });
+    await approve(second);
+    expect((await db("designs").where({ id: designId }).first("approved_revision_id")).approved_revision_id).toBe(second);
+
+    const specs = await approvedSpecs(DEMO_ORG_ID);
+    const mine = specs.filter((s) => s.revisionId === first || s.revisionId === second);
+    expect(mine.map((s) => [s.revisionId, s.superseded])).toEqual([[second, false], [first, true]]);
+    // Every current spec comes before every superseded one.
+    expect(specs.findIndex((s) => s.superseded)).toBeGreaterThanOrEqual(specs.filter((s) => !s.superseded).length);
+    const stored = await db("revisions").where({ id: second }).first("result");
+    const shown = mine[0];
+    expect(shown.depthIn).toBe(stored.result.footing.depthIn);
+    expect(shown.diameterIn).toBe(stored.result.footing.diameterIn);
+    expect(shown.posts).toBe(stored.result.field.posts.length);
+    expect(shown.approvedAt).toBeInstanceOf(Date);
+  });
+
+  it("never lists another organisation's approvals", async () => {
+    const other = await db("organisations").whereNot({ id: DEMO_ORG_ID }).first("id");
+    const specs = await approvedSpecs(other.id);
+    const demoRevisions = new Set((await db("revisions").where({ organisation_id: DEMO_ORG_ID, status: "approved" }).select("id")).map((r) => r.id));
+    expect(specs.filter((s) => demoRevisions.has(s.revisionId))).toEqual([]);
+  });
+});
+
+describe("project and revision lists", () => {
+  it("keeps each project's design count as designs are added and removed", async () => {
+    const { projectId } = await makeDesign({ projectName: "Count probe site" });
+    const designer = await userId(DESIGNER);
+    const count = async () => (await db("projects").where({ id: projectId }).first("design_count")).design_count;
+    expect(await count()).toBe(1);
+    const [extra] = await db("designs").insert({ project_id: projectId, organisation_id: DEMO_ORG_ID, name: "Second array", created_by: designer }).returning("id");
+    expect(await count()).toBe(2);
+    const list = await listProjects(DEMO_ORG_ID, { q: "Count probe site" });
+    expect(list.rows.map((r) => [r.name, r.designCount])).toEqual([["Count probe site", 2]]);
+    await db("designs").where({ id: extra.id }).delete();
+    expect(await count()).toBe(1);
+  });
+
+  it("finds projects by the jurisdiction of their criteria card and by words of name and address", async () => {
+    const [card] = await db("criteria_cards").insert({ organisation_id: DEMO_ORG_ID, jurisdiction: "Quillback Township (test)", state: "CO", values: JSON.stringify({}), created_by: await userId(DESIGNER) }).returning("id");
+    await makeDesign({ projectName: "Plain name site", criteriaCardId: card.id });
+    expect((await listProjects(DEMO_ORG_ID, { q: "quillback" })).rows.map((r) => r.name)).toEqual(["Plain name site"]);
+    expect((await listProjects(DEMO_ORG_ID, { q: "plain NAME" })).rows.map((r) => r.jurisdiction)).toEqual(["Quillback Township (test)"]);
+    expect((await listProjects(DEMO_ORG_ID, { q: "1 Test Lane" })).total).toBeGreaterThan(0);
+  });
+
+  it("shows footing depth, diameter and pass from the stored columns, sorted by depth", async () => {
+    const { designId, projectId } = await makeDesign();
+    await addRevision(designId, { ...twoPostDesignInput, posts: { ...twoPostDesignInput.posts, holeDiameterIn: 36 } });
+    const stored = await db("revisions").where({ design_id: designId }).orderBy("number").select("number", "result");
+    const page = await listRevisions(designId, { sort: "depthIn", dir: "asc" });
+    const expected = [...stored].sort((a, b) => a.result.footing.depthIn - b.result.footing.depthIn);
+    expect(page.rows.map((r) => [r.number, r.depthIn, r.diameterIn, r.pass])).toEqual(
+      expected.map((r) => [r.number, r.result.footing.depthIn, r.result.footing.diameterIn, r.result.footing.pass]));
+    const designs = await listDesigns(projectId);
+    expect(designs.rows[0].depthIn).toBe(stored[1].result.footing.depthIn);
+  });
+});
+
+describe("audit log keyset pages", () => {
+  it("walks older and newer from any page and reaches the oldest page directly", async () => {
+    const [org] = await db("organisations").insert({ name: "Keyset Paging Co" }).returning("id");
+    // Two events share each second, so the id must break ties in the order.
+    await db("audit_events").insert(Array.from({ length: 23 }, (_, i) => ({ organisation_id: org.id, action: "sign-in", subject: `e${i}`, at: new Date(Date.UTC(2026, 0, 1, 0, 0, Math.floor(i / 2), 0)) })));
+    const seen: string[] = [];
+    let page = await listAuditEvents(org.id, { limit: 5 });
+    expect(page.hasNewer).toBe(false);
+    seen.push(...page.rows.map((r) => r.subject!));
+    while (page.hasOlder) {
+      page = await listAuditEvents(org.id, { limit: 5, older: parseAuditCursor(auditCursorText(page.rows.at(-1)!.cursor)) });
+      seen.push(...page.rows.map((r) => r.subject!));
+    }
+    expect(seen).toEqual(Array.from({ length: 23 }, (_, i) => `e${22 - i}`));
+    const oldest = await listAuditEvents(org.id, { limit: 5, oldest: true });
+    expect(oldest.rows.map((r) => r.subject)).toEqual(["e4", "e3", "e2", "e1", "e0"]);
+    expect([oldest.hasOlder, oldest.hasNewer]).toEqual([false, true]);
+    const newer = await listAuditEvents(org.id, { limit: 5, newer: oldest.rows[0].cursor });
+    expect(newer.rows.map((r) => r.subject)).toEqual(["e9", "e8", "e7", "e6", "e5"]);
+    expect(newer.total).toBe(23);
+    expect(newer.totalCapped).toBe(false);
+  });
+
+  it("ignores a malformed or oversized cursor instead of failing", async () => {
+    for (const text of ["", "abc", "1.2.3", "99999999999999999999.1", "1;drop", undefined]) expect(parseAuditCursor(text)).toBeUndefined();
+    expect(parseAuditCursor("1733100000000000.42")).toEqual({ atMicros: "1733100000000000", id: "42" });
+  });
+});

@@ -1,0 +1,90 @@
+/**
+ * A failing design decided in a browser: the review page opens with the footing and every failing
+ * check (desktop and phone); the engineer approves only with a reason per failing check and their
+ * password; the installer's field spec shows the reasons; the inspector's phone opens the public
+ * approval check without signing in. Screenshots to /tmp/shots with SCREENSHOTS=1 (the review
+ * page's top as the viewport shows it, the verify page on a phone).
+ */
+import fs from "node:fs";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { sizeDesign, twoPostDesignInput, type DesignInputDraft } from "@/engine";
+import { db } from "@/db/client";
+import { DESKTOP, PHONE, baseUrl, launch, signedInContext } from "../support/browser";
+import { DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
+
+let browser: Browser;
+const contexts: BrowserContext[] = [];
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  for (const c of contexts) await c.close();
+  await browser?.close();
+  await db.destroy();
+});
+
+async function as(email: string | null, viewport = DESKTOP): Promise<Page> {
+  const context = email ? await signedInContext(browser, email, viewport) : await browser.newContext({ viewport, baseURL: baseUrl() });
+  contexts.push(context);
+  const page = await context.newPage();
+  page.on("pageerror", (e) => console.error(`[${email}] page error: ${e.message}`));
+  return page;
+}
+/** What the screen shows without scrolling: the point of "at the top". */
+async function top(page: Page, name: string) {
+  if (process.env.SCREENSHOTS !== "1") return;
+  fs.mkdirSync("/tmp/shots", { recursive: true });
+  await page.screenshot({ path: `/tmp/shots/${name}.png` });
+}
+
+// A 24 in hole: shallower than frost and too short laterally, so checks fail (IBC §1809.5; IBC §1807.3.2.1 Eq. 18-1).
+const SHALLOW: DesignInputDraft = { ...twoPostDesignInput, posts: { ...twoPostDesignInput.posts, fixedDepthIn: 24 } };
+
+describe("approval check", () => {
+  it("shows failing checks first, approves them only with reasons and a password, and lets anyone verify the approval", async () => {
+    const failing = sizeDesign(SHALLOW).footing.checks.filter((c) => !c.pass);
+    expect(failing.length).toBeGreaterThan(0);
+    const { revisionId } = await makeDesign({ input: SHALLOW, projectName: "Failing checks ranch (demo)", name: "Shallow holes" });
+    const designer = await as(DESIGNER);
+    await designer.goto(`${baseUrl()}/reviews/${revisionId}`);
+    await designer.getByText("You can still submit it to ask for the engineer's judgement").waitFor();
+    const submitted = await designer.request.post(`/api/revisions/${revisionId}/submit`, { data: { engineerId: await userId(ENGINEER) } });
+    expect(submitted.status()).toBe(200);
+
+    const engineer = await as(ENGINEER);
+    for (const [label, viewport] of [["desktop", DESKTOP], ["phone", PHONE]] as const) {
+      await engineer.setViewportSize(viewport);
+      await engineer.goto(`${baseUrl()}/reviews/${revisionId}`);
+      const summary = engineer.getByRole("region", { name: "Footing and checks" });
+      await summary.waitFor();
+      expect(await summary.isVisible()).toBe(true); // in view without scrolling
+      for (const c of failing) expect(await summary.textContent()).toContain(c.title);
+      await top(engineer, `review-top-failing-${label}`);
+    }
+    await engineer.setViewportSize(DESKTOP);
+    await engineer.getByLabel("Approve for construction").check();
+    await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
+    await engineer.getByRole("button", { name: "Sign and approve" }).click();
+    await engineer.getByText(/give your reason for each failing check/).first().waitFor();
+    for (let i = 0; i < failing.length; i++) await engineer.locator(`#override-${i}`).fill(`Accepted after a site visit: rock at 20 in (check ${i + 1}).`);
+    await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
+    await engineer.getByRole("button", { name: "Sign and approve" }).click();
+    await engineer.getByText("Approved: the revision is pinned and the designer has been e-mailed.").waitFor();
+
+    const installer = await as(INSTALLER, PHONE);
+    await installer.goto(`${baseUrl()}/field/${revisionId}`);
+    await installer.getByText("Accepted after a site visit: rock at 20 in (check 1).").waitFor();
+    const link = await installer.getByRole("link", { name: /\/verify\// }).getAttribute("href");
+    expect(link).toMatch(/\/verify\/[A-Za-z0-9_-]{22}$/);
+
+    const inspector = await as(null, PHONE);
+    await inspector.goto(link!);
+    await inspector.getByRole("heading", { name: "Approved and current" }).waitFor();
+    expect(await inspector.getByText("PE-000000-DEMO, CO").isVisible()).toBe(true); // demo licence (invented)
+    await top(inspector, "verify-phone");
+    await inspector.goto(`${baseUrl()}/verify/not-a-real-code-at-all`);
+    await inspector.getByRole("heading", { name: "No such approval" }).waitFor();
+    await top(inspector, "verify-unknown-phone");
+  });
+});
