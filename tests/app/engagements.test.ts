@@ -22,7 +22,7 @@ import { db } from "@/db/client";
 import { engineerQueue } from "@/db/queries/engineer-queue";
 import { OTHER_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { DEMO_CARD_ID, DEMO_PROJECT_ID, OTHER_PROJECT_ID } from "@/db/seeds/02_demo_projects";
-import { OUTSIDE_ENGAGED_PROJECT_ID, OUTSIDE_ENGINEER_EMAIL } from "@/db/seeds/03_demo_outside_engineer";
+import { OUTSIDE_ENGAGED_PROJECT_ID, OUTSIDE_ENGINEER_EMAIL } from "@/db/seeds/04_demo_outside_engineer";
 import { firstLink, mailTo } from "../support/mailbox";
 import { actAs, jsonRequest, params } from "../support/next-context";
 import { freshDesign, freshFile } from "../support/project-fixtures";
@@ -228,7 +228,7 @@ describe("what an engaged engineer may do", () => {
     await engage(d.projectId, stranger, "accepted");
     await actAs(stranger.email);
     // Engaged on the project, but the review was submitted to someone else.
-    expect((await call(review, "POST", { revisionId: d.revisionId }, { decision: "approve" })).status).toBe(403);
+    expect((await call(review, "POST", { revisionId: d.revisionId }, { decision: "request-changes", comments: "Not mine to decide." })).status).toBe(403);
 
     await actAs(engineer.email);
     const queue = await engineerQueue({ userId: engineer.userId, organisationId: engineer.organisationId }, {}, { state: "waiting" });
@@ -281,6 +281,7 @@ describe("the engineer's queue across contractors", () => {
     const [approval] = await db("reviews").insert({
       revision_id: onHold.revisionId, organisation_id: (await db("projects").where({ id: onHold.projectId }).first("organisation_id")).organisation_id, engineer_id: engineer.userId,
       submitted_by: designer, decision: "approve", decided_by: engineer.userId, decided_at: db.fn.now(), engineer_name: "Test", licence_number: "PE-T", licence_state: "CO",
+      verify_code: crypto.randomUUID(), facts_snapshot: JSON.stringify({ projectName: "Queue test site", projectAddress: "1 Test Lane (invented)", projectState: "CO", criteria: null }),
     }).returning("organisation_id");
     await db("design_holds").insert({ design_id: onHold.designId, organisation_id: approval.organisation_id, revision_id: onHold.revisionId, reason: "Hole P1 shallower than specified.", raised_by: designer });
 

@@ -2,6 +2,8 @@ import type { Knex } from "knex";
 import crypto from "node:crypto";
 import { hashPassword } from "../../app/_lib/password";
 import { DEMO_ORG_ID, DEMO_PASSWORD } from "./01_demo_accounts";
+import { designInputSchema, ENGINE_VERSION, sizeParsedDesign } from "../../engine";
+import { createRevision } from "../queries/revisions";
 import { DEMO_SLOPED_PROJECT_ID } from "./02_demo_projects";
 
 /**
@@ -30,9 +32,18 @@ export async function seed(knex: Knex): Promise<void> {
     invited_by: designer, responded_at: knex.fn.now(),
   });
 
-  // The hillside design's newest revision, submitted to the outside engineer.
+  // The hillside design was approved and then put on hold (03_demo_reviews.ts): its revision 3, with
+  // wider holes, waits for the outside engineer's review.
   const latest = await knex("revisions as r").join("designs as d", "d.id", "r.design_id")
-    .where("d.project_id", OUTSIDE_ENGAGED_PROJECT_ID).orderBy("r.number", "desc").first("r.id");
-  await knex("revisions").where({ id: latest.id }).update({ status: "in_review" });
-  await knex("reviews").insert({ revision_id: latest.id, organisation_id: DEMO_ORG_ID, engineer_id: engineer.id, submitted_by: designer });
+    .where("d.project_id", OUTSIDE_ENGAGED_PROJECT_ID).orderBy("r.number", "desc").first("r.id", "r.design_id as designId", "r.input");
+  const input = designInputSchema.parse(typeof latest.input === "string" ? JSON.parse(latest.input) : latest.input);
+  // The hole diameter may be "auto" (sized by the engine): then take the diameter it chose.
+  const diameterIn = input.posts.holeDiameterIn === "auto" ? sizeParsedDesign(input).footing.diameterIn : input.posts.holeDiameterIn;
+  const wider = designInputSchema.parse({ ...input, posts: { ...input.posts, holeDiameterIn: diameterIn + 6 } });
+  const revision = await createRevision({
+    designId: latest.designId, organisationId: DEMO_ORG_ID, baseRevisionId: latest.id, authorId: designer,
+    input: wider, result: sizeParsedDesign(wider), engineVersion: ENGINE_VERSION, note: "Holes 6 in wider after the shallow P2 hole; for the outside engineer's review.",
+  }, knex);
+  await knex("revisions").where({ id: revision.id }).update({ status: "in_review" });
+  await knex("reviews").insert({ revision_id: revision.id, organisation_id: DEMO_ORG_ID, engineer_id: engineer.id, submitted_by: designer });
 }
