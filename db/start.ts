@@ -116,6 +116,7 @@ async function main(): Promise<void> {
     mailWebPort: ports.mailWeb,
     s3Port: ports.s3,
     s3Directory: path.join(dataDir, "files"),
+    mailDirectory: path.join(dataDir, "mail"),
     bucket: "pierwise-uploads",
   });
 

@@ -54,6 +54,7 @@ export function designContext(input: DesignInput): DesignContext {
     fixedDepthIn: posts.fixedDepthIn,
     waterTableDepthFt: site.waterTableDepthFt,
     sideFrictionPsf: posts.sideFrictionPsf,
+    netBearingSoilPcf: posts.bearingPressure === "net" ? posts.soilUnitWeightPcf : undefined,
   };
   return { tilts, clearanceTiltDeg, states, main, rows, pipe, footing };
 }

@@ -7,7 +7,7 @@
  */
 
 /** Display unit kinds a field is shown in (components/design/units.ts converts each). */
-export type FieldUnit = "in" | "ft" | "mph" | "psf" | "psfPerFt" | "pcf" | "ksi" | "lbMass" | "deg" | "pct";
+export type FieldUnit = "in" | "ft" | "mph" | "psf" | "psfPerFt" | "pcf" | "ksi" | "psi" | "lbMass" | "deg" | "pct";
 
 export interface FieldLabel {
   label: string;
@@ -70,6 +70,11 @@ export const FIELD_LABELS: Record<string, FieldLabel> = {
   "posts.wasteAllowancePct": { label: "Concrete waste allowance", unit: "pct", help: "Extra concrete for ragged holes and spillage; 5–10 % is usual." },
   "posts.subtractPostDisplacement": { label: "Subtract post volume", message: "Subtract post displacement", help: "Take the steel's volume out of the concrete order." },
   "posts.depthIncrementIn": { label: "Round depth up to", message: "Depth increment", unit: "in", help: "Depths are rounded up to this step so the crew marks whole numbers." },
+  "posts.bearingPressure": { label: "Bearing check on", message: "Bearing pressure basis", help: "Gross (default, conservative): pier weight counted, no credit for the soil dug out. Net: the engineer's option, crediting the weight of the soil removed; use only with a net allowable value." },
+  "posts.soilUnitWeightPcf": { label: "Soil unit weight (net bearing)", message: "Soil unit weight", unit: "pcf", help: "Weight of the soil the pier replaces, credited only when bearing is checked on net pressure; 100–120 pcf is usual." },
+  "posts.concreteStrengthPsi": { label: "Concrete strength f'c at 28 days", message: "Concrete strength", unit: "psi", help: "Specified compressive strength for the footing concrete; 4,000 psi is usual for post footings. Never below the 2,000 psi minimum for post backfill (IBC §1807.3.3)." },
+  "posts.maxAggregateIn": { label: "Largest aggregate", message: "Maximum aggregate size", unit: "in", help: "Largest stone in the mix, as the engineer sets it; ¾ in is usual for augered holes." },
+  "posts.slumpIn": { label: "Slump", unit: "in", help: "Workability the engineer sets; about 4 in fills an augered hole around a post without honeycombing." },
   "posts.sideFrictionPsf": { label: "Side friction", unit: "psf", help: "Engineer's skin friction against uplift. Leave blank to count concrete weight only." },
   projectName: { label: "Project name on print-outs", help: "" },
 };

@@ -37,3 +37,6 @@ export { previewGeometry, type PreviewGeometry, type Point3Ft } from "./geometry
 export { levelingCuts, type LevelingCuts } from "./field/leveling-cuts";
 export { UNIT_TABLE, toMetric, fromMetric, isCustomaryUnit, type CustomaryUnit } from "./units";
 export { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE } from "./notices";
+export { concreteFromHolesAsDug, type ConcreteAsDug, type HoleAsDug, type HoleAsDugConcrete } from "./concrete/as-dug";
+export { concreteSpecification, CODE_MINIMUM_STRENGTH_PSI, COLD_WEATHER_GUIDANCE, type ConcreteSpecification } from "./concrete/concrete-spec";
+export { continuousBeamShares } from "./geometry/continuous-beam";

@@ -115,6 +115,12 @@ export const postsSchema = z.object({
   subtractPostDisplacement: flag(messageName("posts.subtractPostDisplacement")).default(false),
   depthIncrementIn: num(messageName("posts.depthIncrementIn"), 1, 12, "in").default(6),
   sideFrictionPsf: num(messageName("posts.sideFrictionPsf"), 0, 2000, "psf").optional(),
+  // Added later: each has a default so revisions saved before them still parse.
+  bearingPressure: choice(messageName("posts.bearingPressure"), ["gross", "net"]).default("gross"),
+  soilUnitWeightPcf: num(messageName("posts.soilUnitWeightPcf"), 60, 150, "pcf").default(110),
+  concreteStrengthPsi: num(messageName("posts.concreteStrengthPsi"), 2000, 10000, "psi").default(4000),
+  maxAggregateIn: num(messageName("posts.maxAggregateIn"), 0.25, 1.5, "in").default(0.75),
+  slumpIn: num(messageName("posts.slumpIn"), 1, 9, "in").default(4),
 }, { error: "Posts must be given: number of posts, pipe size and hole" });
 
 export const designInputSchema = z

@@ -7,6 +7,7 @@
  */
 import { concreteForHole } from "./concrete/concrete-for-hole";
 import { concreteOrder } from "./concrete/concrete-order";
+import { concreteSpecification } from "./concrete/concrete-spec";
 import { designContext } from "./design-context";
 import type { CheckId, FootingCheck } from "./footing/checks";
 import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
@@ -93,11 +94,16 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
       suggestedPipeSize: smallestPipeFor(checkById(ev.checks, "postBending").demand, posts.yieldKsi),
     },
-    concrete: { perHole: hole, job },
+    concrete: {
+      perHole: hole, job,
+      specification: concreteSpecification({ strengthPsi: posts.concreteStrengthPsi, maxAggregateIn: posts.maxAggregateIn, slumpIn: posts.slumpIn, frostDepthIn: input.site.frostDepthIn }),
+    },
     options: { diameterSweep: sweep, tiltEnvelope: envelope },
     field: {
       posts: main.posts.map((p) => ({ id: p.id, heightAboveGradeIn: p.heightAboveGradeFt * 12, embedmentIn: ev.depthIn, postLengthIn: p.heightAboveGradeFt * 12 + ev.depthIn })),
       note: "Post length = height above its own grade + embedment, post standing on the hole bottom. Set posts level with a laser and use the cut list to trim or shim.",
+      // Each tilt setting the rack will be used at (posts set for the steepest), lowest edge above grade.
+      tiltSettings: ctx.states.map((s) => ({ tiltDeg: s.tiltDeg, lowestEdgeIn: s.heights.lowestEdgeFt * 12, minClearanceIn: s.heights.minClearanceIn, highestEdgeIn: s.heights.highestEdgeFt * 12 })),
     },
     warnings: collectWarnings(input, ctx.states, ev, extra),
     geometryPreview: previewGeometry(drawState, {

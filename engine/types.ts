@@ -2,6 +2,7 @@
  * The shape of a whole design result. Every length, force and pressure names its unit.
  */
 import type { ConcreteOrder } from "./concrete/concrete-order";
+import type { ConcreteSpecification } from "./concrete/concrete-spec";
 import type { HoleConcrete } from "./concrete/concrete-for-hole";
 import type { DepthCheckId, FootingCheck, Governing } from "./footing/checks";
 import type { PipeMoment } from "./footing/pipe";
@@ -90,9 +91,18 @@ export interface DesignResult {
     /** Smallest standard pipe whose allowable moment covers the bending demand (null: none listed does). */
     suggestedPipeSize: PipeMoment["size"] | null;
   };
-  concrete: { perHole: HoleConcrete; job: ConcreteOrder };
+  concrete: { perHole: HoleConcrete; job: ConcreteOrder; specification: ConcreteSpecification };
   options: { diameterSweep: SweepRow[]; tiltEnvelope: { rows: TiltEnvelopeRow[]; governingTiltDeg: number } | null };
-  field: { posts: { id: string; heightAboveGradeIn: number; embedmentIn: number; postLengthIn: number }[]; note: string };
+  field: {
+    posts: { id: string; heightAboveGradeIn: number; embedmentIn: number; postLengthIn: number }[];
+    note: string;
+    /**
+     * Every tilt setting used (the design tilt and the rack's seasonal settings, ascending): its lowest
+     * and highest edge above grade under the array centre and the smallest gap to the ground anywhere
+     * under it (in). The posts are set so the steepest setting keeps the clearance asked for.
+     */
+    tiltSettings: { tiltDeg: number; lowestEdgeIn: number; minClearanceIn: number; highestEdgeIn: number }[];
+  };
   warnings: DesignWarning[];
   /** The 3D preview's drawing data (ft). */
   geometryPreview: PreviewGeometry;

@@ -38,6 +38,8 @@ export function collectWarnings(input: DesignInput, states: ArrayLoadState[], ev
   add(out, "WIND_ALONG_ROWS_NOT_CHECKED", WIND_ALONG_ROWS_NOT_CHECKED);
   if (input.site.edition === "7-22") add(out, "FREE_ROOF_FOR_7_22", "ASCE 7-22 has provisions specific to ground-mounted solar; this engine uses the free-roof method for 7-22 as for 7-16.", "info");
   if (input.posts.isolatedPoleIncrease) add(out, "LATERAL_DOUBLED", "IBC §1806.3.4 doubling of lateral bearing is applied: valid only for isolated poles not adversely affected by ½ in motion at grade.");
+  if (input.posts.bearingPressure === "net")
+    add(out, "NET_BEARING_USED", `Bearing is checked on net pressure (soil removed credited at ${input.posts.soilUnitWeightPcf} pcf): an engineer's option, valid only against a net allowable bearing value.`);
   if (input.posts.sideFrictionPsf) add(out, "SIDE_FRICTION_USED", `Side friction of ${input.posts.sideFrictionPsf} psf is counted against uplift: an engineer's value, not a presumptive one.`);
   if (input.site.waterTableDepthFt !== undefined && input.site.waterTableDepthFt * 12 < ev.depthIn)
     add(out, "WATER_TABLE", "The footing reaches the water table: buoyant concrete weight was used for uplift; the hole may need casing or tremie concrete.");

@@ -73,7 +73,7 @@ async function main(): Promise<number> {
   const ports = { smtp: await freePort(), mailWeb: await freePort(), s3: await freePort(), app: await freePort() };
   standIns = await startStandIns({
     smtpPort: ports.smtp, mailWebPort: ports.mailWeb, s3Port: ports.s3,
-    s3Directory: path.join(workDir, "files"), bucket: "pierwise-test",
+    s3Directory: path.join(workDir, "files"), mailDirectory: path.join(workDir, "mail"), bucket: "pierwise-test",
   });
   const env: NodeJS.ProcessEnv = {
     ...process.env,

@@ -3,7 +3,7 @@ import { hasAcceptedEngagement, type ProjectScope } from "@/db/queries/engagemen
 import { findActiveMember, type MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
-import { getSession } from "./session";
+import { readSession } from "./session";
 
 /**
  * The data-access checks. Every page, server action and route handler that reads or writes data
@@ -18,7 +18,7 @@ export { AccessError };
 
 /** The signed-in, active member for this request, or null. Cached per request. */
 export const currentUser = cache(async (): Promise<CurrentUser | null> => {
-  const session = await getSession();
+  const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
   const member = await findActiveMember(session.userId, session.organisationId);
   // A password reset ends every session that began before it.

@@ -1,4 +1,5 @@
-import { defaultDesignInput, type DesignInputDraft } from "@/engine";
+import { defaultDesignInput } from "@/engine/default-design";
+import type { DesignInputDraft } from "@/engine/schema";
 import type { CriteriaCardValues } from "@/db/queries/criteria-cards";
 
 /**

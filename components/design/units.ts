@@ -1,9 +1,9 @@
-import { toMetric, fromMetric, type CustomaryUnit } from "@/engine";
+import { toMetric, fromMetric, type CustomaryUnit } from "@/engine/units";
 
 /**
  * Imperial/metric display at the edges. The engine and the saved revisions stay in US customary
  * units; these helpers convert only what is shown and what is typed, with the engine's factors
- * (engine/units.ts, from mathjs).
+ * (engine/units.ts: exact constants, checked against mathjs in tests).
  */
 export type UnitSystem = "imperial" | "metric";
 
@@ -30,6 +30,7 @@ export const DISPLAY_UNITS = {
   psfPerFt: u("psf/ft", "kPa/m", "psfPerFt", 1, 0, 1),
   pcf: u("pcf", "kN/m³", "pcf", 1, 0, 1),
   ksi: u("ksi", "MPa", "ksi", 1, 0, 0),
+  psi: u("psi", "MPa", "ksi", 1 / 1000, 0, 1),
   mph: u("mph", "m/s", "mph", 1, 0, 1),
   ft3: u("ft³", "m³", "ft3", 1, 2, 3),
   yd3: u("yd³", "m³", "yd3", 1, 2, 2),

@@ -2,9 +2,17 @@
 import dynamic from "next/dynamic";
 import type { CSSProperties } from "react";
 import type { DesignPreviewProps } from "./design-preview";
+import { webglAvailable } from "./webgl-support";
 
-/** Keeps three.js and the scene out of the host page's first load. */
-const DesignPreviewChunk = dynamic<DesignPreviewProps>(() => import("./design-preview"), {
+/**
+ * Keeps three.js and the scene out of the host page's first load. Where WebGL is there, the scene
+ * chunk is requested together with the preview shell rather than after it arrives (one round
+ * trip instead of two before the first draw); without WebGL it is never fetched.
+ */
+const DesignPreviewChunk = dynamic<DesignPreviewProps>(() => {
+  if (webglAvailable()) void import("./scene");
+  return import("./design-preview");
+}, {
   ssr: false,
   // As tall as the preview will be (toolbar, canvas, caption), so the page does not jump.
   loading: () => (

@@ -1,7 +1,8 @@
 "use client";
 import dynamic from "next/dynamic";
-import { useMemo, useState } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import type { DesignInput } from "@/engine/schema";
+import type { PreviewGeometry } from "@/engine/geometry/preview";
 import type { DesignResult } from "@/engine/types";
 import { sizeParsedDesign } from "@/engine/size-design";
 import { Caution } from "@/components/ui/caution";
@@ -48,6 +49,18 @@ const Scene = dynamic(() => import("./scene").then((m) => m.Scene), {
   ),
 });
 
+/**
+ * The same geometry object for as long as its contents are equal: a new result whose drawing did
+ * not change (most keystrokes in the editor) then leaves the scene untouched — no re-render, no
+ * redraw.
+ */
+function useStableGeometry(geometry: PreviewGeometry): PreviewGeometry {
+  const last = useRef<{ key: string; geometry: PreviewGeometry } | null>(null);
+  const key = JSON.stringify(geometry);
+  if (last.current?.key !== key) last.current = { key, geometry };
+  return last.current.geometry;
+}
+
 /** The 3D preview of the array, grade and footings, with a 2D elevation where WebGL is missing. */
 export default function DesignPreview({ input, result, unitSystem, readOnly = false, height = 440, showCaution = true }: DesignPreviewProps) {
   const settings = useMemo(
@@ -58,11 +71,14 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
   // A choice lapses when the design's own tilt is edited or the setting leaves the list, so an edit
   // in the editor always shows at once.
   const tiltDeg = chosen && chosen.designTiltDeg === input.array.tiltDeg && settings?.includes(chosen.tiltDeg) ? chosen.tiltDeg : null;
-  const { geometry, error } = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
+  const atTilt = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
+  const geometry = useStableGeometry(atTilt.geometry);
+  const error = atTilt.error;
   const figures = useMemo(() => previewFigures(geometry, unitSystem), [geometry, unitSystem]);
   // Why the 3D scene is not shown (null while it is): no WebGL up front, or it failed or was lost later.
   const [noScene, setNoScene] = useState<string | null>(() => (webglAvailable() ? null : "This browser has WebGL turned off, so the 3D preview cannot be drawn."));
   const [view, setView] = useState<{ name: ViewName; seq: number }>({ name: "home", seq: 0 });
+  const onContextLost = useCallback(() => setNoScene("The 3D preview lost its graphics context."), []);
 
   const fallback = (reason: string) => <ElevationFallback geometry={geometry} figures={figures} height={height} reason={reason} />;
   const shownTilt = geometry.panelPlane.tiltDeg;
@@ -81,7 +97,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
       <div className="relative" style={{ height }}>
         {noScene === null ? (
           <PreviewErrorBoundary fallback={fallback(SCENE_FAILED)} onError={() => setNoScene(SCENE_FAILED)}>
-            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={() => setNoScene("The 3D preview lost its graphics context.")} />
+            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={onContextLost} />
           </PreviewErrorBoundary>
         ) : (
           fallback(noScene)

@@ -1,5 +1,5 @@
 "use client";
-import { Billboard, Line, Text } from "@react-three/drei";
+import { Billboard, Text } from "@react-three/drei";
 import { useFrame } from "@react-three/fiber";
 import { useMemo, useRef, useState } from "react";
 import { Vector3, type Group, type PerspectiveCamera } from "three";
@@ -10,7 +10,8 @@ import type { Bounds } from "./camera-framing";
 import type { Vec3 } from "./scene-mapping";
 import { latinOnly, windSceneLabel, type PreviewFigures } from "./preview-labels";
 import { COLOURS, FONT_URL } from "./scene-style";
-import { MATERIALS, UNIT_CONE, UNIT_CYLINDER } from "./shared-resources";
+import { SceneLine } from "./scene-line";
+import { LINE_MATERIALS, MATERIALS, UNIT_CONE, UNIT_CYLINDER } from "./shared-resources";
 
 // Lay out label text on the main thread: the worker the text builder would start is made from a
 // blob: URL and loads code into itself, which the content-security policy (proxy.ts) refuses.
@@ -62,12 +63,13 @@ function Label({ at, text, color, px = 13, side = "auto" }: { at: Vec3; text: st
   );
 }
 
-function Dimension({ d, color, text }: { d: DimensionLine; color: string; text: string }) {
+function Dimension({ d, kind, text }: { d: DimensionLine; kind: "clearance" | "embedment"; text: string }) {
+  const material = LINE_MATERIALS[kind];
   return (
     <group>
-      <Line points={[d.from, d.to]} color={color} lineWidth={2} depthTest={false} depthWrite={false} transparent renderOrder={15} />
-      {d.ticks.map((t, i) => <Line key={i} points={t} color={color} lineWidth={2} depthTest={false} depthWrite={false} transparent renderOrder={15} />)}
-      <Label at={d.labelAt} text={text} color={color} />
+      <SceneLine points={[d.from, d.to]} material={material} renderOrder={15} />
+      {d.ticks.map((t, i) => <SceneLine key={i} points={t} material={material} renderOrder={15} />)}
+      <Label at={d.labelAt} text={text} color={COLOURS[kind]} />
     </group>
   );
 }
@@ -95,8 +97,8 @@ export function Annotations({ g, figures, bounds }: { g: PreviewGeometry; figure
 
   return (
     <group>
-      <Dimension d={clearance} color={COLOURS.clearance} text={`Clearance ${figures.clearance}`} />
-      <Dimension d={embedment} color={COLOURS.embedment} text={`Embedment ${figures.embedment}`} />
+      <Dimension d={clearance} kind="clearance" text={`Clearance ${figures.clearance}`} />
+      <Dimension d={embedment} kind="embedment" text={`Embedment ${figures.embedment}`} />
       {wind ? (
         <group>
           <Arrow tail={wind.tail} head={wind.head} radiusFt={size * 0.18} material={MATERIALS.wind} />

@@ -1,12 +1,12 @@
 "use client";
-import { Line } from "@react-three/drei";
 import { useThree } from "@react-three/fiber";
 import { useLayoutEffect, useMemo, useRef } from "react";
 import { Matrix4, Quaternion, Vector3, type InstancedMesh } from "three";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { beamSegment, footingUprights, groundMesh, moduleInstances, panelQuaternion, postUprights, railSegments, type Segment } from "./scene-mapping";
-import { COLOURS, DRAW } from "./scene-style";
-import { MATERIALS, UNIT_BOX, UNIT_CYLINDER } from "./shared-resources";
+import { DRAW } from "./scene-style";
+import { SceneLine } from "./scene-line";
+import { LINE_MATERIALS, MATERIALS, UNIT_BOX, UNIT_CYLINDER } from "./shared-resources";
 
 /** Grade: the engine's sloped ground patch, part-transparent so the footings below it show. */
 export function Ground({ g }: { g: PreviewGeometry }) {
@@ -19,7 +19,7 @@ export function Ground({ g }: { g: PreviewGeometry }) {
           <bufferAttribute attach="index" args={[new Uint16Array(mesh.indices), 1]} />
         </bufferGeometry>
       </mesh>
-      <Line points={mesh.outline} color={COLOURS.groundEdge} lineWidth={1.5} />
+      <SceneLine points={mesh.outline} material={LINE_MATERIALS.groundEdge} />
     </group>
   );
 }

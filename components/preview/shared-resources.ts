@@ -4,6 +4,7 @@
  * never dispose them.
  */
 import { BoxGeometry, ConeGeometry, CylinderGeometry, DoubleSide, MeshBasicMaterial, MeshStandardMaterial } from "three";
+import { LineMaterial } from "three/examples/jsm/lines/LineMaterial.js";
 import { COLOURS } from "./scene-style";
 
 export const UNIT_BOX = new BoxGeometry(1, 1, 1);
@@ -22,4 +23,11 @@ export const MATERIALS = {
   north: new MeshBasicMaterial({ color: COLOURS.north }),
   /** Labels draw over everything (text colour is set per label by the text library). */
   label: new MeshBasicMaterial({ depthTest: false, depthWrite: false, transparent: true, toneMapped: false }),
+};
+
+/** Screen-width lines (px): the ground's edge, and the dimension lines drawn over everything. */
+export const LINE_MATERIALS = {
+  groundEdge: new LineMaterial({ color: COLOURS.groundEdge, linewidth: 1.5 }),
+  clearance: new LineMaterial({ color: COLOURS.clearance, linewidth: 2, depthTest: false, depthWrite: false, transparent: true }),
+  embedment: new LineMaterial({ color: COLOURS.embedment, linewidth: 2, depthTest: false, depthWrite: false, transparent: true }),
 };

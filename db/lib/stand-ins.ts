@@ -1,4 +1,5 @@
 import fs from "node:fs";
+import path from "node:path";
 import { MailDev } from "maildev";
 // s3rver ships CommonJS without types.
 // @ts-expect-error no type declarations for s3rver
@@ -22,9 +23,18 @@ export async function startStandIns(options: {
   mailWebPort: number;
   s3Port: number;
   s3Directory: string;
+  /**
+   * Where the SMTP stand-in keeps the e-mails it catches (a `mail` folder beside s3Directory when
+   * not given). Never maildev's default, one shared /tmp/maildev: whoever made it first owns it,
+   * so another user's run could not deliver mail, and runs would see each other's mail.
+   */
+  mailDirectory?: string;
   bucket: string;
 }): Promise<StandIns> {
+  const mailDirectory = options.mailDirectory ?? path.join(path.dirname(options.s3Directory), "mail");
+  fs.mkdirSync(mailDirectory, { recursive: true });
   const mail = new MailDev({
+    mailDirectory,
     smtp: options.smtpPort,
     ip: "127.0.0.1",
     web: options.mailWebPort,

@@ -1,6 +1,6 @@
 import { db } from "../client";
 import { acceptedProjectIds } from "./engagements";
-import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { likePattern, listPage, type ListPage, type ListQuery } from "./list-page";
 import { isUuid } from "../ids";
 
 /** A customer site. */
@@ -57,6 +57,12 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
       w.where("p.organisation_id", organisationId);
       if (engagedUserId) w.orWhereIn("p.id", acceptedProjectIds(engagedUserId));
     });
+  // Cards whose jurisdiction matches, looked up first (a few rows, trigram index): projects then
+  // match by card id through their own index, which the planner can OR with the trigram index.
+  const q = (query.q ?? "").trim().slice(0, 200);
+  const cardIds: string[] = q
+    ? await db("criteria_cards").where("organisation_id", organisationId).whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [likePattern(q)]).pluck("id")
+    : [];
   const page = await listPage<ProjectRow>(base, query, {
     sortable: PROJECT_SORTS,
     defaultSort: "updatedAt",
@@ -66,7 +72,7 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
     match: (w, pattern) =>
       w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
-        .orWhereIn("p.criteria_card_id", db("criteria_cards").where("organisation_id", organisationId).whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [pattern]).select("id")),
+        .orWhereIn("p.criteria_card_id", cardIds),
     select: (qb) =>
       qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount"),
   });

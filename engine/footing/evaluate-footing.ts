@@ -28,6 +28,8 @@ export interface FootingContext {
   fixedDepthIn?: number;
   waterTableDepthFt?: number;
   sideFrictionPsf?: number;
+  /** Net bearing (engineer's option): soil unit weight credited per ft of depth; undefined = gross. */
+  netBearingSoilPcf?: number;
 }
 
 export interface FootingDepth {
@@ -118,6 +120,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   const frostIn = need.frost;
   const d = depthIn / 12;
   const concreteLb = pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d);
+  const overburdenPsf = ctx.netBearingSoilPcf ? ctx.netBearingSoilPcf * d : 0;
   // Checks at the design depth: the worst row of each.
   const lateralRows = ctx.lateralRows;
   let latRatio = -1, latRow: FactoredPostLoad | null = null;
@@ -137,7 +140,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
       const cap = r.deadFactor * (pier + deadOf(r)) + friction * d;
       if (r.windUpliftLb / cap > upRatio) { upDemand = r.windUpliftLb; upCapRow = cap; upRatio = r.windUpliftLb / cap; upRow = r; }
     }
-    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * pier, diameterFt: b });
+    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * pier, diameterFt: b, overburdenPsf });
     if (psf > brgPsf) { brgPsf = psf; brgRow = r; }
     if (Math.abs(r.momentAtGradeLbFt) > bendM || !bendRow) { bendM = Math.abs(r.momentAtGradeLbFt); bendRow = r; }
   }
@@ -146,7 +149,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
     lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
     makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
     makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (depth of footings, 12 in minimum), §1809.5 (frost protection)", null, need.frost),
-    makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.soil.source, brgRow && gov(brgRow)),
+    makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.netBearingSoilPcf ? `${ctx.soil.source}; net pressure, soil removed credited at ${ctx.netBearingSoilPcf} pcf (engineer's option)` : ctx.soil.source, brgRow && gov(brgRow)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 backfill (value as recalled; confirm against the printed code)", null),
     makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),
   ];
@@ -159,9 +162,10 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
 export function bearingRatio(ctx: FootingContext, diameterIn: number, depthIn: number): number {
   const b = diameterIn / 12, d = depthIn / 12;
   const concreteLb = pierConcreteWeightLb({ diameterFt: b, concretePcf: ctx.concretePcf, waterTableDepthFt: ctx.waterTableDepthFt }, d);
+  const overburdenPsf = ctx.netBearingSoilPcf ? ctx.netBearingSoilPcf * d : 0;
   let worst = 0;
   for (const r of ctx.rows) {
-    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * (concreteLb + ctx.pipe.weightLbPerFt * (r.postHeightAboveGradeFt + d)), diameterFt: b });
+    const psf = bearingPressurePsf({ downwardLb: r.downwardLb, pierWeightLb: r.deadFactor * (concreteLb + ctx.pipe.weightLbPerFt * (r.postHeightAboveGradeFt + d)), diameterFt: b, overburdenPsf });
     if (psf > worst) worst = psf;
   }
   return worst / ctx.soil.verticalPsf;

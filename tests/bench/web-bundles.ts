@@ -1,6 +1,6 @@
 /**
  * First-load JS per route for bench:web: every script the browser fetches while a route loads on
- * an empty cache, until the network is idle, summed after gzip -9 (the size on the wire with a
+ * an empty cache, until the network is idle (link prefetches of other routes refused), summed after gzip -9 (the size on the wire with a
  * well-configured server). Measured in a browser with WebGL off, so the 3D scene never loads: the
  * figure is the page's own weight; the editor's scene is measured on its own in web-editor.ts.
  */
@@ -18,6 +18,9 @@ export const gzipKb = (body: Buffer) => zlib.gzipSync(body, { level: 9 }).length
 
 export async function scriptsWhileLoading(context: BrowserContext, url: string): Promise<Map<string, number>> {
   const page = await context.newPage();
+  // Link prefetches fetch other routes' chunks at idle, a different set on each run: refused here,
+  // so the figure is the route's own first load.
+  await page.route("**/*", (route) => (route.request().headers()["next-router-prefetch"] ? route.abort() : route.continue()));
   const sizes = new Map<string, number>();
   const pending: Promise<void>[] = [];
   page.on("response", (response) => {

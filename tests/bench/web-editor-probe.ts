@@ -6,16 +6,23 @@
  */
 export const EDITOR_PROBE = String.raw`
 (() => {
-  const b = (window.__bench = { programs: [], draws: [], firstDraw: null, longTasks: [], events: [], keys: [] });
+  const b = (window.__bench = { programs: [], offscreenPrograms: 0, draws: [], firstDraw: null, longTasks: [], events: [], keys: [] });
   for (const C of [window.WebGLRenderingContext, window.WebGL2RenderingContext]) {
     if (!C) continue;
     const p = C.prototype;
+    // Only the page's own canvases count: the text library draws glyph outlines on a detached
+    // canvas of its own, which is not the scene's first draw.
     const createProgram = p.createProgram;
-    p.createProgram = function () { b.programs.push(performance.now()); return createProgram.apply(this, arguments); };
+    p.createProgram = function () {
+      if (this.canvas && this.canvas.isConnected) b.programs.push(performance.now());
+      else b.offscreenPrograms += 1;
+      return createProgram.apply(this, arguments);
+    };
     for (const name of ["drawElements", "drawArrays", "drawElementsInstanced", "drawArraysInstanced"]) {
       const f = p[name];
       if (!f) continue;
       p[name] = function () {
+        if (!(this.canvas && this.canvas.isConnected)) return f.apply(this, arguments);
         const t = performance.now();
         if (b.firstDraw === null) b.firstDraw = t;
         b.draws.push(t);
@@ -58,6 +65,7 @@ export const EDITOR_PROBE = String.raw`
 
 export interface ProbeState {
   programs: number[];
+  offscreenPrograms: number;
   draws: number[];
   firstDraw: number | null;
   longTasks: { start: number; duration: number }[];

@@ -16,6 +16,7 @@ export interface EditorFigures {
   loadLongestTaskMs: number;
   programsAtFirstDraw: number;
   programsAfterFirstDraw: number;
+  offscreenPrograms: number;
   keystrokes: number;
   keyToResultMs: number;
   keyToResultPaintMs: number;
@@ -80,6 +81,7 @@ export async function measureEditor(context: BrowserContext, url: string, keystr
     loadLongestTaskMs: Math.max(0, ...loadTasks.map((t) => t.duration)),
     programsAtFirstDraw: firstDraw === null ? 0 : loaded.programs.filter((t) => t <= firstDraw).length,
     programsAfterFirstDraw: firstDraw === null ? 0 : typed.programs.filter((t) => t > firstDraw).length,
+    offscreenPrograms: typed.offscreenPrograms,
     keystrokes: keys.length,
     keyToResultMs: median(done.map((k) => k.resultAt! - k.t)),
     keyToResultPaintMs: median(done.map((k) => k.paintAt! - k.t)),

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { designInputSchema, siteSchema } from "@/engine";
+import { designInputSchema, siteSchema } from "@/engine/schema";
 
 /**
  * Schemas for projects, criteria cards, designs, revisions and table queries: one per input,

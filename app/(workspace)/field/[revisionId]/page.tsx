@@ -18,6 +18,7 @@ import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { SITE_CAUTIONS } from "@/engine/notices";
 import { asBuiltEntries } from "@/db/queries/as-built";
+import { pourFromAsBuilt } from "@/app/_lib/review/as-dug";
 import { AsBuiltForm } from "./_components/as-built-form";
 import { AsBuiltLog } from "./_components/as-built-log";
 import { Checklist } from "./_components/checklist";
@@ -72,6 +73,10 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
   // Revisions saved before the azimuth input carry none: say nothing rather than guess.
   const azimuthDeg = ctx.result.input.array.azimuthDeg as number | undefined;
   const big = "text-2xl font-bold tabular-nums";
+  // Results saved before these were added carry none: show nothing rather than guess.
+  const tiltSettings = (r.field.tiltSettings ?? []) as NonNullable<typeof r.field.tiltSettings>;
+  const spec = r.concrete.specification as typeof r.concrete.specification | undefined;
+  const asDug = pourFromAsBuilt(r, entries);
 
   return (
     <div className="field-spec mx-auto max-w-3xl space-y-4">
@@ -122,9 +127,23 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <div><p className="text-sm text-slate-600">Diameter</p><p className={big}>{quarterIn(r.footing.diameterIn)}</p></div>
           <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p><p className="text-sm">{ftIn(r.footing.depthIn)}</p></div>
           <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{r.footing.post.size} in std. pipe, {r.field.posts.length} posts</p></div>
-          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
+          <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 && tiltSettings.length === 0 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
           <div className="col-span-2"><p className="text-sm text-slate-600">Lowest panel edge above grade (hold at least)</p><p className={big}>{quarterIn(r.geometry.minClearanceIn)}</p></div>
         </div>
+        {tiltSettings.length > 1 ? (
+          <div className="mt-3">
+            <h3 className="text-base font-semibold">Tilt settings the rack is used at</h3>
+            <p className="text-sm text-slate-600">Posts are set for the steepest setting ({fmt(tiltSettings[tiltSettings.length - 1].tiltDeg)}°); the footing is sized for the worst of them.</p>
+            <table className="mt-1 w-full text-base">
+              <thead><tr className="text-left text-sm text-slate-600"><th className="py-1 pr-3 font-medium">Setting</th><th className="py-1 pr-3 font-medium">Lowest edge above grade</th><th className="py-1 font-medium">Closest to the ground</th></tr></thead>
+              <tbody>
+                {tiltSettings.map((t) => (
+                  <tr key={t.tiltDeg} className="border-t border-slate-200"><td className="py-1 pr-3 font-semibold tabular-nums">{fmt(t.tiltDeg)}°</td><td className="py-1 pr-3 tabular-nums">{ftIn(t.lowestEdgeIn)}</td><td className="py-1 tabular-nums">{ftIn(t.minClearanceIn)}</td></tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : null}
       </section>
 
       <section aria-labelledby="posts-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -152,6 +171,39 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (the holes take {fmt(r.concrete.job.totalYd3, 2)} yd³; with {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste {fmt(r.concrete.job.withWasteYd3, 2)} yd³, ordered up to the next ¼ yd³)</p>
         <p className="text-base">or <strong>{r.concrete.job.bags80Lb} bags of 80 lb</strong> premix ({r.concrete.job.bags60Lb} × 60 lb)</p>
         <p className="text-sm text-slate-600">About {fmt(r.concrete.perHole.volumeFt3, 1)} ft³ and {r.concrete.perHole.bags80Lb} × 80 lb bags per hole.</p>
+        {asDug ? (
+          <div className="mt-3 rounded-md border-2 border-accent-700 p-3">
+            <h3 className="text-base font-semibold">For the holes as dug</h3>
+            <p className="text-base"><strong className="text-xl">{fmt(asDug.concrete.orderYd3, 2)} yd³</strong> ready-mix (designed: {fmt(r.concrete.job.orderYd3, 2)} yd³), or <strong>{asDug.concrete.bags80Lb} bags of 80 lb</strong> (designed: {r.concrete.job.bags80Lb})</p>
+            <p className="text-sm text-slate-600">The holes take {fmt(asDug.concrete.totalYd3, 2)} yd³ less the posts; with {fmt(asDug.concrete.wasteAllowancePct, 0)}% waste {fmt(asDug.concrete.withWasteYd3, 2)} yd³. {asDug.loggedPostIds.length} of {r.field.posts.length} holes from the as-built log; the rest at the designed size.</p>
+            <table className="mt-1 w-full text-sm">
+              <thead><tr className="text-left text-slate-600"><th className="py-1 pr-2 font-medium">Hole</th><th className="py-1 pr-2 font-medium">As dug</th><th className="py-1 pr-2 font-medium">Concrete</th><th className="py-1 font-medium">Weight</th></tr></thead>
+              <tbody>
+                {asDug.concrete.holes.map((h) => (
+                  <tr key={h.postId} className="border-t border-slate-200">
+                    <td className="py-1 pr-2 font-semibold">{h.postId}</td>
+                    <td className="py-1 pr-2 tabular-nums">{quarterIn(h.diameterIn)} × {quarterIn(h.depthIn)}{asDug.loggedPostIds.includes(h.postId) ? "" : " (designed)"}</td>
+                    <td className="py-1 pr-2 tabular-nums">{fmt(h.concreteFt3, 1)} ft³ ({h.bags80Lb} × 80 lb)</td>
+                    <td className="py-1 tabular-nums">{fmt(h.weightLb, 0)} lb</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : null}
+        {spec ? (
+          <div className="mt-3">
+            <h3 className="text-base font-semibold">Mix to order</h3>
+            <p className="text-base">Strength <strong>{spec.compressiveStrengthPsi.toLocaleString("en-US")} psi</strong> at 28 days · largest stone <strong>{spec.maxAggregateIn} in</strong> · slump <strong>{spec.slumpIn} in</strong></p>
+            <p className="text-sm text-slate-600">Never weaker than {spec.codeMinimumPsi.toLocaleString("en-US")} psi, the code minimum for concrete around posts.</p>
+            {spec.coldWeather.length ? (
+              <div className="mt-2 rounded-md border border-sky-300 bg-sky-50 p-2 text-sky-950">
+                <p className="font-semibold">Cold site: the ground here freezes</p>
+                <ul className="list-disc pl-5 text-sm">{spec.coldWeather.map((c) => <li key={c}>{c}</li>)}</ul>
+              </div>
+            ) : null}
+          </div>
+        ) : null}
       </section>
 
       <section aria-labelledby="check-h" className="rounded-lg border border-slate-200 bg-white p-4">

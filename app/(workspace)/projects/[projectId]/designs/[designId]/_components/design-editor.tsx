@@ -3,16 +3,19 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
+import { memo, useEffect, useMemo, useState } from "react";
 import { FormProvider, useForm, useWatch, type FieldValues } from "react-hook-form";
 import { applyCriteriaCard } from "@/app/_lib/design-defaults";
 import { formatQuantity, type UnitSystem } from "@/components/design/units";
 import { DesignPreviewLazy } from "@/components/preview";
 import { Caution } from "@/components/ui/caution";
 import type { CriteriaCardValues } from "@/db/queries/criteria-cards";
-import { designInputSchema, type DesignInput, type DesignInputDraft, type DesignResult } from "@/engine";
+// The engine's modules themselves, not its index: the editor needs validation and sizing only.
+import { designInputSchema, type DesignInput, type DesignInputDraft } from "@/engine/schema";
+import type { DesignResult } from "@/engine/types";
 import { ArrayGroup, PostsGroup, SiteGroup } from "./input-groups";
 import { FootingHeadline, ResultsPanel } from "./results-panel";
+import { useAfterPaint } from "./use-after-paint";
 import { useLiveResult, type LiveStatus } from "./use-live-result";
 
 /**
@@ -30,16 +33,18 @@ export interface EditorProps {
   card: { label: string; values: CriteriaCardValues } | null;
 }
 
+// Each field follows its own value (useController), so the groups need not re-render at every keystroke.
+const SiteInputs = memo(SiteGroup);
+const ArrayInputs = memo(ArrayGroup);
+const PostsInputs = memo(PostsGroup);
+
 type Conflict = { message: string; latestRevisionId: string | null; latestNumber: number | null };
 const UNITS_KEY = "pierwise-units";
 
 const STATUS_TEXT: Record<LiveStatus, string> = {
   saved: "Showing the saved revision.",
-  waiting: "Updating…",
-  loading: "Updating…",
   fresh: "Up to date with your inputs (not saved yet).",
   invalid: "",
-  error: "",
 };
 
 export function DesignEditor(props: EditorProps) {
@@ -60,15 +65,15 @@ export function DesignEditor(props: EditorProps) {
   const setFieldErrors = (errors: { path: string; message: string }[]) => {
     for (const e of errors) form.setError(e.path.replace(/^input\./, "") as never, { type: "server", message: e.message });
   };
-  const live = useLiveResult(values, props.initialResult, initialKey, setFieldErrors);
+  const [saved, setSaved] = useState({ key: initialKey, result: props.initialResult });
+  const live = useLiveResult(values, saved, setFieldErrors);
 
   const [base, setBase] = useState({ id: props.baseRevisionId, number: props.baseNumber });
   const [note, setNote] = useState("");
   const [saving, setSaving] = useState(false);
   const [saveMessage, setSaveMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [conflict, setConflict] = useState<Conflict | null>(null);
-  const [savedKey, setSavedKey] = useState(initialKey);
-  const dirty = JSON.stringify(values) !== savedKey;
+  const dirty = JSON.stringify(values) !== saved.key;
 
   async function save(input: DesignInput, baseId = base.id) {
     setSaving(true);
@@ -82,7 +87,8 @@ export function DesignEditor(props: EditorProps) {
       const json = await response.json().catch(() => ({}));
       if (response.status === 201) {
         setBase({ id: json.revision.id, number: json.revision.number });
-        setSavedKey(JSON.stringify(form.getValues()));
+        // The server's own result for what was saved: compared with the live one from here on.
+        setSaved({ key: JSON.stringify(form.getValues()), result: json.revision.result ?? live.result });
         setConflict(null);
         setNote("");
         setSaveMessage({ ok: true, text: `Saved as revision ${json.revision.number}.` });
@@ -103,13 +109,21 @@ export function DesignEditor(props: EditorProps) {
   }
 
   const onSubmit = form.handleSubmit((input) => save(input), () => setSaveMessage({ ok: false, text: "Not saved: fix the fields marked in red first." }));
-  const applyCard = props.card ? () => {
-    const next = applyCriteriaCard(form.getValues(), props.card!.values);
-    form.setValue("site", next.site, { shouldValidate: true, shouldDirty: true });
-  } : null;
+  // Stable across keystrokes, so the memoised input groups do not re-render with every change
+  // (each field follows its own value).
+  const cardOffer = useMemo(() => props.card ? {
+    label: props.card.label,
+    apply: () => {
+      const next = applyCriteriaCard(form.getValues(), props.card!.values);
+      form.setValue("site", next.site, { shouldValidate: true, shouldDirty: true });
+    },
+  } : null, [props.card, form]);
 
-  const result = live.result;
-  const stale = live.status === "invalid" || live.status === "error";
+  // A read-only revision shows what was saved (the record) even where today's engine differs.
+  const result = props.readOnly && live.savedDiffers ? saved.result : live.result;
+  // The 3D preview follows once the numbers are painted, so a keystroke never waits for a redraw.
+  const previewResult = useAfterPaint(result);
+  const stale = live.status === "invalid";
   const statusLine = stale ? live.message : STATUS_TEXT[live.status];
 
   return (
@@ -128,9 +142,9 @@ export function DesignEditor(props: EditorProps) {
           </div>
 
           <fieldset disabled={props.readOnly} className="space-y-4">
-            <SiteGroup units={units} card={props.card && applyCard ? { label: props.card.label, apply: applyCard } : null} />
-            <ArrayGroup units={units} />
-            <PostsGroup units={units} />
+            <SiteInputs units={units} card={cardOffer} />
+            <ArrayInputs units={units} />
+            <PostsInputs units={units} />
           </fieldset>
 
           {!props.readOnly ? (
@@ -167,14 +181,22 @@ export function DesignEditor(props: EditorProps) {
           <div className="flex items-center justify-between gap-2">
             <h2 className="text-base font-semibold">Results</h2>
             <p aria-live="polite" role="status" className={`text-xs ${stale ? "font-medium text-red-700" : "text-slate-500"}`}>
-              {live.status === "loading" || live.status === "waiting" ? <span className="mr-1 inline-block h-2 w-2 animate-pulse rounded-full bg-accent-600" /> : null}
               {statusLine}
             </p>
           </div>
-          <div className={`space-y-3 transition-opacity ${stale || live.status === "loading" ? "opacity-60" : ""}`}>
+          {live.savedDiffers ? (
+            <p role="alert" className="rounded-md border border-amber-300 bg-amber-50 px-3 py-2 text-sm text-amber-950">
+              <span className="font-medium">Saved result differs from the live one.</span>{" "}
+              {saved.result.engineVersion !== live.result.engineVersion
+                ? `The saved revision was sized by engine ${saved.result.engineVersion}; this page runs engine ${live.result.engineVersion}.`
+                : "Both come from the same engine version."}{" "}
+              {props.readOnly ? "The saved result is shown." : "The live result is shown; saving again stores the server's result for these inputs."}
+            </p>
+          ) : null}
+          <div className={`space-y-3 transition-opacity ${stale ? "opacity-60" : ""}`}>
             <FootingHeadline result={result} units={units} />
             {/* 3D preview slot (components/preview, built by the preview engineer). */}
-            <DesignPreviewLazy input={result.input} result={result} unitSystem={units} readOnly={props.readOnly} height={300} showCaution={false} />
+            <DesignPreviewLazy input={previewResult.input} result={previewResult} unitSystem={units} readOnly={props.readOnly} height={300} showCaution={false} />
             <ResultsPanel result={result} units={units} />
           </div>
         </aside>
@@ -183,7 +205,7 @@ export function DesignEditor(props: EditorProps) {
         <div className="fixed inset-x-0 bottom-0 z-20 border-t border-amber-300 bg-amber-50/95 px-3 py-2 text-xs text-amber-950 shadow-lg backdrop-blur lg:hidden">
           <p className="font-semibold text-slate-900">
             {formatQuantity(result.footing.diameterIn, "in", units, { decimals: 0 })} dia × {formatQuantity(result.footing.depthFt, "ft", units)} · {result.footing.pass ? "passes" : "FAILS a check"}
-            {stale ? " · results paused" : live.status === "loading" ? " · updating…" : ""}
+            {stale ? " · results paused" : ""}
           </p>
           <p><strong>Caution:</strong> preliminary sizing only. The code, the authority having jurisdiction and a licensed engineer govern.{" "}<Link href="#res-checks" className="underline">Details</Link></p>
         </div>

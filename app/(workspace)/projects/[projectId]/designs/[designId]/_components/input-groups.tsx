@@ -2,7 +2,7 @@
 
 import { useFormContext, useWatch } from "react-hook-form";
 import type { UnitSystem } from "@/components/design/units";
-import { PIPE_SIZES } from "@/engine";
+import { PIPE_SIZES } from "@/engine/footing/pipe";
 import { CheckField, ListField, NumberField, SelectField } from "./editor-fields";
 
 /** The three input groups of the editor: Site, Array, Posts and footings. */
@@ -119,6 +119,11 @@ export function PostsGroup({ units }: { units: UnitSystem }) {
           {auto ? <NumberField name="posts.maxAutoDepthIn" units={units} /> : null}
           <CheckField name="posts.isolatedPoleIncrease" />
           <CheckField name="posts.subtractPostDisplacement" />
+          <SelectField name="posts.bearingPressure" options={[["gross", "Gross pressure (default)"], ["net", "Net pressure: soil removed credited (engineer's option)"]]} />
+          <NumberField name="posts.soilUnitWeightPcf" units={units} />
+          <NumberField name="posts.concreteStrengthPsi" units={units} />
+          <NumberField name="posts.maxAggregateIn" units={units} />
+          <NumberField name="posts.slumpIn" units={units} />
         </>
       }
     >

@@ -1,0 +1,48 @@
+/**
+ * The concrete the footings are poured with, as the field spec and report state it: specified
+ * compressive strength at 28 days (default 4,000 psi [common practice for these footings], never
+ * below the 2,000 psi IBC §1807.3.3 sets for concrete backfill around embedded posts [memory]),
+ * maximum aggregate size and slump as the engineer sets them, and cold-weather guidance when the
+ * ground at the site freezes (a frost depth above zero) [common practice].
+ *
+ * @example concreteSpecification({ strengthPsi: 4000, maxAggregateIn: 0.75, slumpIn: 4, frostDepthIn: 36 }).coldSite // true
+ */
+import { requireRange } from "../errors";
+
+export const CODE_MINIMUM_STRENGTH_PSI = 2000;
+export const CODE_MINIMUM_SOURCE = "IBC §1807.3.3 backfill: concrete of at least 2,000 psi";
+
+/** What the crew does when pouring in cold weather [common practice]. */
+export const COLD_WEATHER_GUIDANCE = [
+  "Cold weather (air near or below 40 °F): ask for a non-chloride accelerator in the mix; chloride accelerators corrode the steel post.",
+  "Do not pour onto frozen ground, ice or snow in the hole; thaw and clean the bottom first.",
+  "Protect the fresh concrete from freezing (insulating blankets over the holes) until it has gained strength, at least the first 2 days.",
+];
+
+export interface ConcreteSpecification {
+  compressiveStrengthPsi: number;
+  codeMinimumPsi: number;
+  codeMinimumSource: string;
+  maxAggregateIn: number;
+  slumpIn: number;
+  /** True when the site's ground freezes (frost depth above zero): cold-weather guidance applies. */
+  coldSite: boolean;
+  coldWeather: string[];
+  /** One line a supplier can read. */
+  summary: string;
+}
+
+export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: number; slumpIn: number; frostDepthIn: number }): ConcreteSpecification {
+  requireRange("posts.concreteStrengthPsi", a.strengthPsi, CODE_MINIMUM_STRENGTH_PSI, 10000, "Concrete strength", "psi");
+  const coldSite = a.frostDepthIn > 0;
+  return {
+    compressiveStrengthPsi: a.strengthPsi,
+    codeMinimumPsi: CODE_MINIMUM_STRENGTH_PSI,
+    codeMinimumSource: CODE_MINIMUM_SOURCE,
+    maxAggregateIn: a.maxAggregateIn,
+    slumpIn: a.slumpIn,
+    coldSite,
+    coldWeather: coldSite ? COLD_WEATHER_GUIDANCE : [],
+    summary: `f'c ${a.strengthPsi.toLocaleString("en-US")} psi at 28 days, aggregate ${a.maxAggregateIn} in maximum, slump ${a.slumpIn} in`,
+  };
+}
