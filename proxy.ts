@@ -7,6 +7,12 @@ import { securityHeaders } from "@/app/_lib/security-headers";
  * nonce from there and puts it on its scripts), and sets the security headers on the answer.
  */
 export function proxy(request: NextRequest) {
+  // A path that is not valid percent-encoding cannot name anything: 400 here, not a 500 deeper in.
+  try {
+    decodeURIComponent(request.nextUrl.pathname);
+  } catch {
+    return Response.json({ errors: [{ path: "", message: "The address is not valid: it has a broken %-escape." }] }, { status: 400, headers: { "x-content-type-options": "nosniff" } });
+  }
   const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(16))).toString("base64");
   const headers = securityHeaders({
     nonce,

@@ -1,6 +1,6 @@
 /**
  * Pierwise calculation engine: preliminary wind-load and concrete-footing sizing for ground-mounted
- * fixed-tilt solar arrays. Pure TypeScript (zod and mathjs only). See engine/README.md.
+ * fixed-tilt solar arrays. Pure TypeScript (zod only; unit factors are constants). See engine/README.md.
  */
 export { ENGINE_VERSION } from "./version";
 export { sizeDesign, sizeParsedDesign } from "./size-design";

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { messageName } from "./field-labels";
+import { arrayWidthFt } from "./geometry/array-dimensions";
 import { choice, flag, num } from "./schema-helpers";
 import { PIPE_SIZES } from "./footing/pipe";
 
@@ -126,8 +127,7 @@ export const postsSchema = z.object({
 export const designInputSchema = z
   .object({ site: siteSchema, array: arraySchema, posts: postsSchema, projectName: z.string().max(120).optional() }, { error: "A design must be an object with site, array and posts sections" })
   .superRefine((v, ctx) => {
-    const alongWidthIn = v.array.orientation === "portrait" ? v.array.moduleWidthIn : v.array.moduleLengthIn;
-    const widthFt = (v.array.columns * alongWidthIn + (v.array.columns - 1) * v.array.gapIn) / 12;
+    const widthFt = arrayWidthFt(v.array);
     if (v.posts.spacingFt === undefined) {
       const min = Math.max(2, Math.ceil(widthFt / 40 - 1e-9));
       const max = Math.max(2, Math.floor(widthFt + 1e-9));

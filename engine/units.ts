@@ -1,6 +1,7 @@
 /**
  * Unit conversion at the edges. The engine works in US customary units (ft, in, lb, psf, mph);
- * the app converts to metric for display with `toMetric`. Every factor is a constant built from
+ * the app converts to metric for display with `toMetric` and back with
+ * `fromMetric`. Every factor is a constant built from
  * the exact definitions below, so this module costs nothing to load in the browser (no unit
  * library). tests/engine/unit-factors.test.ts checks each factor against mathjs, which stays the
  * authority, through the `mathjs` expression kept beside it. An unknown unit throws, naming it.

@@ -1,5 +1,5 @@
 import { AccessError, ConflictError, validationIssues, ValidationError, type FieldIssue } from "./errors";
-import { guardRequest, readLimitedText, RequestError, type GuardOptions } from "./request-guards";
+import { assertNoControlCharacters, guardRequest, isConnectionFailure, readLimitedText, RequestError, ServiceUnavailableError, type GuardOptions } from "./request-guards";
 
 /** One problem in an API answer: `{ errors: [{ path, message }] }`. */
 export type FieldError = FieldIssue;
@@ -13,11 +13,14 @@ export function errorResponse(status: number, errors: FieldError[]): Response {
 /** Reads a JSON body; a body that is not JSON is a 422 naming the body, not a 500. */
 export async function readJson(request: Request): Promise<unknown> {
   const text = await readLimitedText(request); // 413 past 1 MB, before parsing
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw ValidationError.field("", "The request body must be JSON.");
   }
+  assertNoControlCharacters(value); // 422 naming the field (NUL cannot be stored)
+  return value;
 }
 
 /**
@@ -27,6 +30,8 @@ export async function readJson(request: Request): Promise<unknown> {
  */
 export function apiErrorResponse(error: unknown): Response {
   if (error instanceof RequestError) return errorResponse(error.status, [{ path: error.path, message: error.message }]);
+  // The database (or another service) is down: say so with a 503 rather than a 500.
+  if (isConnectionFailure(error)) return errorResponse(503, [{ path: "", message: new ServiceUnavailableError("The database").message }]);
   if (error instanceof AccessError) return errorResponse(error.status, [{ path: "", message: error.message }]);
   const issues = validationIssues(error);
   if (issues) return errorResponse(422, issues);

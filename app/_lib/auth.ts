@@ -4,6 +4,7 @@ import { findActiveMember, type MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
 import { readSession } from "./session";
+import { sessionIsOpen } from "@/db/queries/sessions";
 
 /**
  * The data-access checks. Every page, server action and route handler that reads or writes data
@@ -20,6 +21,8 @@ export { AccessError };
 export const currentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
+  // The cookie is only a pointer: its server-side record must still be open (sign-out ends it).
+  if (!session.sessionId || !(await sessionIsOpen(session.sessionId, session.userId))) return null;
   const member = await findActiveMember(session.userId, session.organisationId);
   // A password reset ends every session that began before it.
   if (member?.passwordChangedAt && (session.signedInAt ?? 0) < new Date(member.passwordChangedAt).getTime()) return null;

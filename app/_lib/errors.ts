@@ -52,7 +52,12 @@ export class ConflictError extends Error {
 
 /** Field issues of a zod error, with dotted paths ("input.site.windSpeedMph"). */
 export function zodIssues(error: ZodError, prefix: string[] = []): FieldIssue[] {
-  return error.issues.map((issue) => ({ path: [...prefix, ...issue.path.map(String)].join("."), message: issue.message }));
+  return error.issues.flatMap((issue) =>
+    // An unknown key is named as its own path, so the caller sees which field is not accepted.
+    issue.code === "unrecognized_keys"
+      ? issue.keys.map((key) => ({ path: [...prefix, ...issue.path.map(String), key].join("."), message: /^Unrecognized key/.test(issue.message) ? `${key} is not a field that can be set here` : `${key} is not a field that can be set here. ${issue.message}` }))
+      : [{ path: [...prefix, ...issue.path.map(String)].join("."), message: issue.message }],
+  );
 }
 
 /** The field issues of a validation failure (ours or a zod parse), or null for any other error. */

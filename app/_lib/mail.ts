@@ -1,5 +1,6 @@
 import nodemailer from "nodemailer";
 import { env } from "./env";
+import { SERVICE_TIMEOUT_MS, withDeadline } from "./request-guards";
 
 export interface OutgoingMail {
   to: string;
@@ -25,6 +26,7 @@ export function smtpTransportOptions(smtp: typeof env.smtp) {
 
 /** Sends one e-mail through the configured SMTP server (the local stand-in in development and tests). */
 export async function sendMail(mail: OutgoingMail): Promise<void> {
-  const transport = nodemailer.createTransport(smtpTransportOptions(env.smtp));
-  await transport.sendMail({ from: env.mailFrom, ...mail });
+  // Bounded waits at every step, so a frozen mail server costs a request ~10 s, not minutes.
+  const transport = nodemailer.createTransport({ ...smtpTransportOptions(env.smtp), connectionTimeout: SERVICE_TIMEOUT_MS, greetingTimeout: SERVICE_TIMEOUT_MS, socketTimeout: SERVICE_TIMEOUT_MS });
+  await withDeadline("The mail server", () => transport.sendMail({ from: env.mailFrom, ...mail }));
 }

@@ -87,3 +87,61 @@ export async function readLimitedText(request: Request): Promise<string> {
   }
   return new TextDecoder("utf-8", { fatal: false }).decode(Buffer.concat(chunks));
 }
+
+// eslint-disable-next-line no-control-regex
+const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
+
+/**
+ * Every string in a JSON body, keys included, free of control characters other than tab and
+ * line breaks: PostgreSQL cannot store NUL in text, and none of the others belongs in a field.
+ * Throws a 422 naming the first field that has one.
+ */
+export function assertNoControlCharacters(value: unknown, path: string[] = [], depth = 0): void {
+  if (depth > 64) throw new RequestError(422, "The request body is nested too deeply.");
+  if (typeof value === "string") {
+    if (CONTROL.test(value)) throw new RequestError(422, "Must not contain control characters (such as NUL); remove them and send again.", path.join("."));
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((v, i) => assertNoControlCharacters(v, [...path, String(i)], depth + 1));
+    return;
+  }
+  if (value && typeof value === "object") {
+    for (const [k, v] of Object.entries(value)) {
+      if (CONTROL.test(k)) throw new RequestError(422, "Field names must not contain control characters.", path.join("."));
+      assertNoControlCharacters(v, [...path, k], depth + 1);
+    }
+  }
+}
+
+/** How long a call to the file store or the mail server may take before the request gives up. */
+export const SERVICE_TIMEOUT_MS = 10_000;
+
+/** A service the app depends on (database, file store, mail) is down or too slow: 503, nothing to fix in the input. */
+export class ServiceUnavailableError extends RequestError {
+  constructor(what: string) {
+    super(503, `${what} is not answering right now; nothing was changed. Try again in a minute.`);
+  }
+}
+
+/** Runs a call to a service with a deadline; failure to connect or to answer in time becomes a 503. */
+export async function withDeadline<T>(what: string, run: (signal: AbortSignal) => Promise<T>): Promise<T> {
+  const signal = AbortSignal.timeout(SERVICE_TIMEOUT_MS);
+  // Raced against the deadline too, for clients that ignore the signal.
+  const deadline = new Promise<never>((_, reject) => signal.addEventListener("abort", () => reject(signal.reason), { once: true }));
+  try {
+    return await Promise.race([run(signal), deadline]);
+  } catch (error) {
+    if (signal.aborted || isConnectionFailure(error)) throw new ServiceUnavailableError(what);
+    throw error;
+  }
+}
+
+/** Errors that mean "could not reach it", from Node sockets, the S3 client, nodemailer, pg and knex's pool. */
+export function isConnectionFailure(error: unknown): boolean {
+  const e = error as { code?: string; name?: string; message?: string } | null;
+  if (!e) return false;
+  if (["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EHOSTUNREACH", "ENOTFOUND", "EPIPE", "ESOCKET", "ECONNECTION", "ETIMEOUT", "57P01", "57P02", "57P03", "53300"].includes(e.code ?? "")) return true;
+  if (e.name === "KnexTimeoutError" || e.name === "TimeoutError" || e.name === "AbortError") return true;
+  return /Connection terminated|connect ECONNREFUSED|the database system is (starting up|shutting down)/i.test(e.message ?? "");
+}

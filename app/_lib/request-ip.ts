@@ -1,7 +1,39 @@
 import { headers } from "next/headers";
 
-/** The caller's address as the proxy in front reports it, else "local" (the app listens on loopback). */
+/** Set by db/lib/peer-address.cjs from the socket; a client's own copy is overwritten. */
+export const PEER_HEADER = "x-pierwise-peer-address";
+
+/** "::ffff:192.0.2.1" and "192.0.2.1" are the same IPv4 address. */
+function plain(address: string): string {
+  const a = address.trim();
+  return a.startsWith("::ffff:") && a.includes(".") ? a.slice(7) : a;
+}
+
+/** Addresses of the reverse proxies in front of the app (TRUSTED_PROXIES, comma-separated), if any. */
+function trustedProxies(): Set<string> {
+  return new Set((process.env.TRUSTED_PROXIES ?? "").split(",").map(plain).filter(Boolean));
+}
+
+/**
+ * The caller's address: the socket's, unless that socket is a trusted proxy, in which case the
+ * last X-Forwarded-For entry that is not itself a trusted proxy (entries further left were
+ * written by the client and prove nothing). Without the socket header (a development server
+ * started without the preload) every caller is "local": never a value the client chose.
+ */
+export function clientAddress(h: Headers): string {
+  const peer = h.get(PEER_HEADER);
+  if (!peer) return "local";
+  const trusted = trustedProxies();
+  let address = plain(peer);
+  if (!trusted.has(address)) return address;
+  const chain = (h.get("x-forwarded-for") ?? "").split(",").map(plain).filter(Boolean);
+  while (chain.length) {
+    address = chain.pop()!;
+    if (!trusted.has(address)) return address;
+  }
+  return address;
+}
+
 export async function requestIp(): Promise<string> {
-  const h = await headers();
-  return h.get("x-forwarded-for")?.split(",")[0]?.trim() || h.get("x-real-ip") || "local";
+  return clientAddress(await headers());
 }

@@ -7,6 +7,8 @@ export interface SessionData {
   userId?: string;
   organisationId?: string;
   signedInAt?: number;
+  /** The user_sessions row this cookie belongs to; a cookie without an open row is signed out. */
+  sessionId?: string;
 }
 
 export function sessionOptions(): SessionOptions {
@@ -31,9 +33,8 @@ export async function getSession() {
  * Unsealed session cookies, by their sealed text. Unsealing (key derivation, HMAC check,
  * decryption) costs about 1 ms of CPU, more than a whole calculation; the same cookie always
  * unseals to the same data, so each is unsealed once and kept until its seal expires (at most
- * 5 minutes, at most 1000 cookies). Sign-out and password changes are unaffected: sign-out
- * clears the cookie, and `currentUser` checks the member and the password date in the database
- * on every request.
+ * 5 minutes, at most 1000 cookies). Sign-out and password changes are unaffected: `currentUser`
+ * checks the session record, the member and the password date in the database on every request.
  */
 const unsealed = new Map<string, { data: SessionData; until: number }>();
 const UNSEALED_MAX = 1000;

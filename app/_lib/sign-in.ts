@@ -1,10 +1,15 @@
 import { recordAudit } from "@/db/queries/audit";
-import { clearFailures, recordFailure, secondsUntilAllowed } from "@/db/queries/sign-in-throttle";
+import { attemptSucceeded, reserveAttempt, THROTTLE } from "@/db/queries/sign-in-throttle";
+import { env } from "./env";
+import { sendMail } from "./mail";
+import { db } from "@/db/client";
 import { findSignInCandidate } from "@/db/queries/users";
 import { hashPassword, verifyPassword } from "./password";
 import { requestIp } from "./request-ip";
 import type { SignInInput } from "./schemas/account";
 import { getSession } from "./session";
+import { startSession } from "./start-session";
+import { endSession } from "@/db/queries/sessions";
 
 export type SignInOutcome = { ok: true; userId: string } | { ok: false; status: 401 | 429; message: string };
 
@@ -16,26 +21,23 @@ let decoyHash: Promise<string> | undefined;
 /** Checks credentials with throttling and audit, then starts a fresh session (renewed at sign-in). */
 export async function signIn(input: SignInInput): Promise<SignInOutcome> {
   const ip = await requestIp();
-  const wait = await secondsUntilAllowed(input.email, ip);
-  if (wait > 0) {
-    const minutes = Math.ceil(wait / 60);
+  // Reserved before the password is checked, so parallel guesses are counted one by one.
+  const attempt = await reserveAttempt(input.email, ip);
+  if (!attempt.ok) {
+    const minutes = Math.ceil(attempt.waitSeconds / 60);
     return { ok: false, status: 429, message: `Too many failed sign-ins. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}, or reset your password.` };
   }
   const candidate = await findSignInCandidate(input.email);
   decoyHash ??= hashPassword("decoy-password-for-timing");
   const valid = await verifyPassword(candidate?.passwordHash ?? (await decoyHash), input.password);
   if (!candidate || !valid) {
-    await recordFailure(input.email, ip);
+    // The reservation stays as the recorded failure.
     await recordAudit({ organisationId: candidate?.organisationId, action: "sign-in-failed", subject: input.email, ip });
+    if (attempt.ceilingReached && candidate) await warnOwner(candidate.userId, candidate.organisationId, input.email);
     return { ok: false, status: 401, message: BAD_CREDENTIALS };
   }
-  await clearFailures(input.email);
-  const session = await getSession();
-  session.destroy();
-  session.userId = candidate.userId;
-  session.organisationId = candidate.organisationId;
-  session.signedInAt = Date.now();
-  await session.save();
+  await attemptSucceeded(attempt.attemptId, input.email, ip);
+  await startSession(candidate.userId, candidate.organisationId);
   await recordAudit({ organisationId: candidate.organisationId, actorUserId: candidate.userId, action: "sign-in", ip });
   return { ok: true, userId: candidate.userId };
 }
@@ -45,5 +47,29 @@ export async function signOut(): Promise<void> {
   if (session.userId) {
     await recordAudit({ organisationId: session.organisationId, actorUserId: session.userId, action: "sign-out", ip: await requestIp() });
   }
+  // The record ends too, so a copy of the cookie is worthless from now on.
+  if (session.sessionId) await endSession(session.sessionId);
   session.destroy();
+}
+
+/**
+ * Many wrong passwords on one account from many places: the owner hears of it once per window
+ * (the audit log records that the e-mail went out, which is also how "once" is kept).
+ */
+async function warnOwner(userId: string, organisationId: string, email: string): Promise<void> {
+  const recent = await db("audit_events")
+    .where({ action: "sign-in-attack-warned", subject: email })
+    .where("at", ">", db.raw(`now() - make_interval(mins => ?)`, [THROTTLE.windowMinutes]))
+    .first("id");
+  if (recent) return;
+  await recordAudit({ organisationId, actorUserId: userId, action: "sign-in-attack-warned", subject: email });
+  await sendMail({
+    to: email,
+    subject: "Many failed sign-ins on your Pierwise account",
+    text: [
+      `In the last ${THROTTLE.windowMinutes} minutes there were at least ${THROTTLE.perAccountCeiling} wrong passwords for this account, from several places.`,
+      "You can still sign in as usual. If this was not you, choose a longer password:",
+      `${env.appUrl}/reset`,
+    ].join("\n"),
+  }).catch((error) => console.error("sign-in warning mail failed", error));
 }

@@ -1,4 +1,4 @@
-import { ratioText, type CheckOutcome, type CheckOverride } from "@/app/_lib/review/check-outcome";
+import { ratioText, type CheckOutcome, type CheckOverride } from "./check-outcome";
 
 const inches = (n: number) => `${Number(n.toFixed(2))} in`;
 

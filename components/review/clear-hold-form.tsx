@@ -1,12 +1,14 @@
 "use client";
 
 import { useActionState } from "react";
-import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
 
-export function ClearHoldForm({ holdId }: { holdId: string }) {
-  const [state, action] = useActionState<ActionState, FormData>(clearHoldAction, {});
+/** The server action that clears a hold; the route that owns it passes it in (components import nothing from app/). */
+export type ClearHoldAction = (prev: ActionState, form: FormData) => Promise<ActionState>;
+
+export function ClearHoldForm({ holdId, clearAction }: { holdId: string; clearAction: ClearHoldAction }) {
+  const [state, action] = useActionState<ActionState, FormData>(clearAction, {});
   const error = state.fieldErrors?.note;
   return (
     <form action={action} className="no-print mt-2 space-y-2 rounded-md border border-red-200 bg-white p-3 text-slate-900">

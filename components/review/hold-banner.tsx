@@ -1,12 +1,12 @@
-import { dateTimeInWords } from "@/app/_lib/review/dates";
 import type { HoldRecord } from "@/db/queries/holds";
-import { ClearHoldForm } from "./clear-hold-form";
+import { ClearHoldForm, type ClearHoldAction } from "./clear-hold-form";
+import { dateTimeInWords } from "@/components/ui/dates";
 
 /**
  * A design on hold, shown at the top of every screen of that design until an engineer clears it.
- * Engineers get the clear form beside each hold.
+ * Engineers get the clear form beside each hold: the page passes `clearAction` only to them.
  */
-export function HoldBanner({ holds, canClear = false, timeZone }: { holds: HoldRecord[]; canClear?: boolean; timeZone?: string }) {
+export function HoldBanner({ holds, clearAction, timeZone }: { holds: HoldRecord[]; clearAction?: ClearHoldAction; timeZone?: string }) {
   if (holds.length === 0) return null;
   return (
     <section role="alert" aria-label="Design on hold" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
@@ -17,7 +17,7 @@ export function HoldBanner({ holds, canClear = false, timeZone }: { holds: HoldR
           <li key={h.id} className="text-sm">
             <p className="font-semibold">{h.reason}</p>
             <p className="text-xs">Raised by {h.raisedByName} on {dateTimeInWords(h.raisedAt, timeZone)}</p>
-            {canClear ? <ClearHoldForm holdId={h.id} /> : null}
+            {clearAction ? <ClearHoldForm holdId={h.id} clearAction={clearAction} /> : null}
           </li>
         ))}
       </ul>

@@ -1,4 +1,10 @@
-import type { Table } from "@/app/_lib/review/report-model";
+/** A plain table of text, as the review page and the PDF report both show it (app/_lib/review/report-model.ts builds them). */
+export interface Table {
+  title: string;
+  columns: string[];
+  rows: string[][];
+  note?: string;
+}
 
 /** A report table on screen: scrolls sideways on a phone rather than squeezing the numbers. */
 export function PlainTable({ table, numericFrom = 1, id }: { table: Table; numericFrom?: number; id?: string }) {

@@ -1,3 +1,5 @@
+import { fileURLToPath } from "node:url";
+
 /**
  * The environment the Next server reads (see app/_lib/env.ts). The start script and the test
  * runner both build it here, so the two cannot drift apart.
@@ -24,5 +26,7 @@ export function appEnvironment(options: {
     S3_ACCESS_KEY_ID: "S3RVER",
     S3_SECRET_ACCESS_KEY: "S3RVER",
     NEXT_TELEMETRY_DISABLED: "1",
+    // The web server learns each caller's socket address (db/lib/peer-address.cjs, read by app/_lib/request-ip.ts).
+    NODE_OPTIONS: [process.env.NODE_OPTIONS, `--require ${JSON.stringify(fileURLToPath(new URL("./peer-address.cjs", import.meta.url)))}`].filter(Boolean).join(" "),
   };
 }

@@ -13,6 +13,8 @@ export async function migrateToLatest(databaseUrl: string, clusterDir: string, o
   const migrator = knex({
     ...knexConfig,
     connection: databaseUrl,
+    // knex prints its own two lines about a failed migration; the one message below says it all.
+    log: { warn: () => {}, error: () => {}, deprecate: () => {}, debug: () => {} },
     migrations: {
       ...knexConfig.migrations,
       ...overrides,
@@ -32,6 +34,13 @@ export async function migrateToLatest(databaseUrl: string, clusterDir: string, o
       throw new StartupError(
         `the ${where} has migrations this checkout does not have (${missing[1]}): it was last used by a newer Pierwise. ` +
           `Fix: update this checkout (git pull) before starting; nothing was changed.`,
+      );
+    }
+    if (/already locked|take lock/i.test(message)) {
+      throw new StartupError(
+        `the ${where} is being migrated by another process (its knex_migrations_lock is taken). ` +
+          `Fix: wait for it and start again; if none is running (one was killed mid-way), run ` +
+          `\`node --import tsx node_modules/knex/bin/cli.js --knexfile knexfile.ts migrate:unlock\` with DATABASE_URL set; nothing was changed.`,
       );
     }
     if (!current) {

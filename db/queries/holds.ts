@@ -32,11 +32,6 @@ export async function openHolds(designId: string): Promise<HoldRecord[]> {
   return holdsQuery().where("h.design_id", designId).whereNull("h.cleared_at").orderBy("h.raised_at", "asc");
 }
 
-/** Every hold on a design, newest first (for the history on the review page). */
-export async function allHolds(designId: string): Promise<HoldRecord[]> {
-  return holdsQuery().where("h.design_id", designId).orderBy("h.raised_at", "desc");
-}
-
 export async function getHold(holdId: string): Promise<(HoldRecord & { organisationId: string }) | undefined> {
   if (!isUuid(holdId)) return undefined;
   return holdsQuery().select("h.organisation_id as organisationId").where("h.id", holdId).first();

@@ -55,7 +55,8 @@ export async function listPage<T>(
       for (const column of opts.search) w.orWhereRaw(`${column}::text ILIKE ? ESCAPE '\\'`, [likePattern(q)]);
     });
   }
-  const sort = query.sort && query.sort in opts.sortable ? query.sort : opts.defaultSort;
+  // Own keys only: "__proto__", "constructor" and "toString" are "in" every object.
+  const sort = query.sort && Object.hasOwn(opts.sortable, query.sort) ? query.sort : opts.defaultSort;
   const dir = query.dir === "asc" || query.dir === "desc" ? query.dir : (opts.defaultDir ?? "asc");
   const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(query.pageSize ?? 20)));
   const page = Math.max(1, Math.floor(query.page ?? 1));

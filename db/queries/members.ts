@@ -74,6 +74,11 @@ export async function changeMembership(membershipId: string, change: MembershipC
     const before = toMember(await trx("memberships as m").join("users as u", "u.id", "m.user_id").where("m.id", membershipId).first(memberColumns));
     if ("roles" in change) await trx("memberships").where("id", membershipId).update({ roles: rolesLiteral(trx, change.roles) });
     else await trx("memberships").where("id", membershipId).update({ deactivated_at: change.active ? null : trx.fn.now() });
+    // A deactivated member's sessions in this organisation end with the membership.
+    if ("active" in change && !change.active) {
+      const member = await trx("memberships").where("id", membershipId).first("user_id");
+      await trx("user_sessions").where({ user_id: member.user_id, organisation_id: target.organisation_id }).whereNull("ended_at").update({ ended_at: trx.fn.now() });
+    }
     return { ok: true, before } as const;
   });
 }

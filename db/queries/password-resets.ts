@@ -47,6 +47,8 @@ export async function consumePasswordReset(tokenHash: string, passwordHash: stri
     // The app's clock, not the database's: the new session started right after compares against it.
     const [user] = await trx("users").where("id", userId).update({ password_hash: passwordHash, password_changed_at: new Date() }).returning("email");
     await trx("sign_in_failures").where("email", user.email).delete();
+    // Every session of the old password ends with it (a reset may follow a stolen password).
+    await trx("user_sessions").where("user_id", userId).whereNull("ended_at").update({ ended_at: trx.fn.now() });
     const membership = await trx("memberships").where("user_id", userId).orderBy("created_at").first("organisation_id");
     return { ok: true, userId, email: user.email, organisationId: membership?.organisation_id ?? null } as const;
   });

@@ -36,17 +36,6 @@ export async function organisationEngineers(organisationId: string): Promise<(Or
   return Promise.all(rows.map(async (r) => ({ ...r, roles: parseRoles(r.roles), licences: await listLicences(r.userId) })));
 }
 
-/** E-mail addresses of the organisation's active members holding a role. */
-export async function emailsWithRole(organisationId: string, role: Role): Promise<string[]> {
-  const rows = await db("memberships as m")
-    .join("users as u", "u.id", "m.user_id")
-    .where("m.organisation_id", organisationId)
-    .whereNull("m.deactivated_at")
-    .whereRaw("?::member_role = ANY(m.roles)", [role])
-    .select("u.email");
-  return rows.map((r) => r.email as string);
-}
-
 export async function userEmailAndName(userId: string): Promise<{ email: string; name: string } | undefined> {
   return db("users").where({ id: userId }).first("email", "name");
 }

@@ -3,7 +3,7 @@ import type { DesignResult } from "@/engine";
 import { db } from "../client";
 import { isUuid } from "../ids";
 
-/** Revision statuses as stored; "superseded" is derived (see `isSuperseded`). */
+/** Revision statuses as stored; "superseded" is derived (see `displayStatus` in app/_lib/review/standing.ts). */
 export type RevisionStatus = "draft" | "in_review" | "approved" | "changes_requested";
 
 /** A revision with what review, field spec and report need around it: design, project, criteria. */

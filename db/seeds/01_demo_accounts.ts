@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { hashPassword } from "../../app/_lib/password";
+import { hashPassword } from "../password";
 import type { Role } from "../roles";
 
 /**

@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { applyCriteriaCard } from "../../app/_lib/design-defaults";
+import { applyCriteriaCard } from "../design-defaults";
 import { defaultDesignInput, designInputSchema, ENGINE_VERSION, sizeParsedDesign, twoPostDesignInput, type DesignInputDraft } from "../../engine";
 import type { CriteriaCardValues, CriteriaSources } from "../queries/criteria-cards";
 import { createDesignWithRevision } from "../queries/designs";

@@ -9,6 +9,7 @@
  * @example concreteFromHolesAsDug({ holes: [{ postId: "P1", diameterIn: 24, depthIn: 60 }, { postId: "P2", diameterIn: 24, depthIn: 60 }] }).totalYd3 // 1.164
  */
 import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 import { bagsFor, FT3_PER_YD3 } from "./concrete-for-hole";
 
 export interface HoleAsDug {
@@ -43,8 +44,8 @@ export function concreteFromHolesAsDug(a: { holes: HoleAsDug[]; postOutsideDiame
   const pcf = a.unitWeightPcf ?? 145;
   const waste = a.wasteAllowancePct ?? 10;
   const od = a.postOutsideDiameterIn ?? 0;
-  requireRange("posts.concreteUnitWeightPcf", pcf, 90, 160, "Concrete unit weight", "pcf");
-  requireRange("posts.wasteAllowancePct", waste, 0, 100, "Concrete waste allowance", "%");
+  requireInput("posts.concreteUnitWeightPcf", pcf, "pcf");
+  requireInput("posts.wasteAllowancePct", waste, "%");
   requireRange("posts.outsideDiameterIn", od, 0, 24, "Post outside diameter", "in");
   const holes = a.holes.map((h) => {
     requireRange("measuredDiameterIn", h.diameterIn, Math.max(4, od + 0.01), 120, `Measured diameter of hole ${h.postId} (must exceed the post)`, "in");

@@ -9,6 +9,7 @@
  *   // { volumeFt3: 15.708, volumeYd3: 0.582, weightLb: 2277.7, bags80Lb: 27, … }
  */
 import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 
 export const FT3_PER_YD3 = 27;
 export const BAG_YIELD_FT3 = { 40: 0.3, 60: 0.45, 80: 0.6 } as const;
@@ -38,7 +39,7 @@ export function concreteForHole(a: {
   requireRange("posts.holeDiameterIn", a.diameterIn, 4, 120, "Hole diameter", "in");
   requireRange("posts.depthIn", a.depthIn, 0, 720, "Hole depth", "in");
   const pcf = a.unitWeightPcf ?? 145;
-  requireRange("posts.concreteUnitWeightPcf", pcf, 90, 160, "Concrete unit weight", "pcf");
+  requireInput("posts.concreteUnitWeightPcf", pcf, "pcf");
   const d = a.depthIn / 12;
   const gross = (Math.PI * (a.diameterIn / 12) ** 2 * d) / 4;
   const od = a.postOutsideDiameterIn ?? 0;

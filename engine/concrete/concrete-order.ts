@@ -6,7 +6,7 @@
  * @example concreteOrder({ hole: concreteForHole({ diameterIn: 24, depthIn: 60 }), holes: 2, wasteAllowancePct: 10 })
  *   // { totalYd3: 1.164, orderYd3: 1.5, bags80Lb: 58, … }
  */
-import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 import { bagsFor, FT3_PER_YD3, type HoleConcrete } from "./concrete-for-hole";
 
 export interface ConcreteOrder {
@@ -34,14 +34,14 @@ function orderYd3For(withWasteFt3: number): number {
  * sweep, which shows that one figure and need not build the whole order per diameter.
  */
 export function concreteOrderYd3(a: { holeVolumeFt3: number; holes: number; wasteAllowancePct: number }): number {
-  requireRange("posts.count", a.holes, 1, 1000, "Number of holes", "");
-  requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
+  requireInput("posts.count", a.holes);
+  requireInput("posts.wasteAllowancePct", a.wasteAllowancePct, "%");
   return orderYd3For(a.holeVolumeFt3 * a.holes * (1 + a.wasteAllowancePct / 100));
 }
 
 export function concreteOrder(a: { hole: HoleConcrete; holes: number; wasteAllowancePct: number }): ConcreteOrder {
-  requireRange("posts.count", a.holes, 1, 1000, "Number of holes", "");
-  requireRange("posts.wasteAllowancePct", a.wasteAllowancePct, 0, 100, "Concrete waste allowance", "%");
+  requireInput("posts.count", a.holes);
+  requireInput("posts.wasteAllowancePct", a.wasteAllowancePct, "%");
   const totalFt3 = a.hole.volumeFt3 * a.holes;
   const withWasteFt3 = totalFt3 * (1 + a.wasteAllowancePct / 100);
   return {

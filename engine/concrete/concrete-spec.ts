@@ -7,7 +7,7 @@
  *
  * @example concreteSpecification({ strengthPsi: 4000, maxAggregateIn: 0.75, slumpIn: 4, frostDepthIn: 36 }).coldSite // true
  */
-import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 
 export const CODE_MINIMUM_STRENGTH_PSI = 2000;
 export const CODE_MINIMUM_SOURCE = "IBC §1807.3.3 backfill: concrete of at least 2,000 psi";
@@ -32,8 +32,15 @@ export interface ConcreteSpecification {
   summary: string;
 }
 
+/** 4000 → "4,000" (toLocaleString is slow on this per-design path). */
+function thousands(n: number): string {
+  const [whole, frac] = String(n).split(".");
+  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  return frac ? `${grouped}.${frac}` : grouped;
+}
+
 export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: number; slumpIn: number; frostDepthIn: number }): ConcreteSpecification {
-  requireRange("posts.concreteStrengthPsi", a.strengthPsi, CODE_MINIMUM_STRENGTH_PSI, 10000, "Concrete strength", "psi");
+  requireInput("posts.concreteStrengthPsi", a.strengthPsi, "psi");
   const coldSite = a.frostDepthIn > 0;
   return {
     compressiveStrengthPsi: a.strengthPsi,
@@ -43,6 +50,6 @@ export function concreteSpecification(a: { strengthPsi: number; maxAggregateIn: 
     slumpIn: a.slumpIn,
     coldSite,
     coldWeather: coldSite ? COLD_WEATHER_GUIDANCE : [],
-    summary: `f'c ${a.strengthPsi.toLocaleString("en-US")} psi at 28 days, aggregate ${a.maxAggregateIn} in maximum, slump ${a.slumpIn} in`,
+    summary: `f'c ${thousands(a.strengthPsi)} psi at 28 days, aggregate ${a.maxAggregateIn} in maximum, slump ${a.slumpIn} in`,
   };
 }

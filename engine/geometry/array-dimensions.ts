@@ -24,6 +24,12 @@ export interface ArrayDimensions {
   surfaceAreaFt2: number;
 }
 
+/** Across the rows: modules side by side plus the gaps between them. Also what the schema checks post counts against. */
+export function arrayWidthFt(a: { orientation: Orientation; moduleLengthIn: number; moduleWidthIn: number; columns: number; gapIn: number }): number {
+  const alongWidthIn = a.orientation === "portrait" ? a.moduleWidthIn : a.moduleLengthIn;
+  return (a.columns * alongWidthIn + (a.columns - 1) * a.gapIn) / 12;
+}
+
 export function arrayDimensions(a: {
   moduleLengthIn: number;
   moduleWidthIn: number;
@@ -41,7 +47,7 @@ export function arrayDimensions(a: {
   const portrait = a.orientation === "portrait";
   const moduleAlongSlopeIn = portrait ? a.moduleLengthIn : a.moduleWidthIn;
   const moduleAlongWidthIn = portrait ? a.moduleWidthIn : a.moduleLengthIn;
-  const widthFt = (a.columns * moduleAlongWidthIn + (a.columns - 1) * a.gapIn) / 12;
+  const widthFt = arrayWidthFt(a);
   const slopeLengthFt = (a.rows * moduleAlongSlopeIn + (a.rows - 1) * a.gapIn) / 12;
   return {
     moduleAlongSlopeIn,

@@ -14,6 +14,7 @@
  *   // lowestEdgeFt 2, meanHeightFt 4.5, highestEdgeFt 7, postHeightAboveGradeFt [4, 4]
  */
 import { requireRange } from "../errors";
+import { requireInput } from "../input-ranges";
 
 export interface GradeHeights {
   /** Heights are relative to grade at the array centre (ft). */
@@ -63,7 +64,7 @@ export function gradeHeights(a: {
   slopeAcrossPct: number;
   postXFt: number[];
 }): GradeHeights {
-  requireRange("array.lowestEdgeClearanceIn", a.clearanceIn, 0, 240, "Lowest edge clearance", "in");
+  requireInput("array.lowestEdgeClearanceIn", a.clearanceIn, "in");
   requireRange("site.slopeAlongPct", a.slopeAlongPct, -50, 50, "Ground slope along the array", "%");
   requireRange("site.slopeAcrossPct", a.slopeAcrossPct, -50, 50, "Ground slope across the array", "%");
   const design = tightestCorner(a.widthFt, a.slopeLengthFt, rad(a.clearanceTiltDeg), a.slopeAlongPct, a.slopeAcrossPct);

@@ -99,6 +99,8 @@ const MATRIX: MatrixRow[] = [
       return { args: formArgs({ state: "NM" }) };
     },
   },
+  // Hardening: every signed-in person may end all of their own sessions; signed out goes to sign-in.
+  { file: "app/(workspace)/account/actions.ts", name: "signOutEverywhereAction", expect: everyone(SIGN_IN), setup: async () => ({ args: [] }) },
 
   // ── projects, criteria cards, designs, revisions, uploads (issue 5) ─────────────────────────────
   { file: "app/api/calc/route.ts", name: "POST", expect: MEMBERS, setup: async () => ({ body: defaultDesignInput }) },
@@ -161,6 +163,10 @@ const MATRIX: MatrixRow[] = [
   {
     file: "app/(workspace)/field/[revisionId]/actions.ts", name: "recordAsBuiltAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
     setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, postId: "P1", measuredDiameterIn: "30", measuredDepthIn: "100", groundFound: "as_expected" }) }),
+  },
+  {
+    file: "app/(workspace)/field/[revisionId]/actions.ts", name: "tickChecklistAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, itemKey: "utility-locate", ticked: "true" }) }),
   },
   // ── outside reviewing engineers (issue 14); the contractor's projects here are ones they are not engaged on ──
   ...engagementRows,

@@ -69,3 +69,11 @@ describe("the cheaper signed-in check of POST /api/calc", () => {
     expect((await calc(jsonRequest("POST", "/api/calc?sections=footing", defaultDesignInput), {})).status).toBe(401);
   });
 });
+
+describe("the section names", () => {
+  it("cover every top-level part of a result, so a new part can be asked for by name", async () => {
+    const { ALWAYS_SENT, RESULT_SECTIONS } = await import("@/app/_lib/calc-sections");
+    const keys = Object.keys(sizeDesign(defaultDesignInput));
+    expect([...ALWAYS_SENT, ...RESULT_SECTIONS]).toEqual(expect.arrayContaining(keys));
+  });
+});

@@ -36,6 +36,26 @@ describe("a failing migration at start-up", () => {
     expect(Number((await db(history).count({ n: "*" }))[0].n)).toBe(0);
   });
 
+  it("says when another process holds the migration lock, and how to free it if none does", async () => {
+    const lockDir = fs.mkdtempSync(path.join(os.tmpdir(), "pierwise-migrations-lock-"));
+    const lockHistory = `${history}_l`;
+    try {
+      fs.writeFileSync(path.join(lockDir, "20990102000000_noop.cjs"), "exports.up = async () => {};\nexports.down = async () => {};\n");
+      const overrides = { directory: lockDir, loadExtensions: [".cjs"], tableName: lockHistory };
+      // A first run makes the history and lock tables; then a killed run's lock is left taken.
+      await db.schema.createTable(lockHistory, (t) => { t.increments("id"); t.string("name"); t.integer("batch"); t.timestamp("migration_time"); });
+      await db.schema.createTable(`${lockHistory}_lock`, (t) => { t.increments("index"); t.integer("is_locked"); });
+      await db(`${lockHistory}_lock`).insert({ is_locked: 1 });
+      const failure = await migrateToLatest(process.env.DATABASE_URL!, "/the/cluster/folder", overrides).then(() => null, (e: Error) => e.message);
+      expect(failure).toMatch(/is being migrated by another process/);
+      expect(failure).toMatch(/migrate:unlock/);
+    } finally {
+      fs.rmSync(lockDir, { recursive: true, force: true });
+      await db.schema.dropTableIfExists(lockHistory);
+      await db.schema.dropTableIfExists(`${lockHistory}_lock`);
+    }
+  });
+
   it("refuses a database that has migrations this checkout lacks, and says to update the checkout", async () => {
     const empty = fs.mkdtempSync(path.join(os.tmpdir(), "pierwise-migrations-none-"));
     try {

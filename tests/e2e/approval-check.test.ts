@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sizeDesign, twoPostDesignInput, type DesignInputDraft } from "@/engine";
 import { db } from "@/db/client";
 import { DESKTOP, PHONE, baseUrl, launch, signedInContext } from "../support/browser";
-import { DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
+import { DESIGNER, ENGINEER, INSTALLER, makeDesign } from "../support/review-fixtures";
 
 let browser: Browser;
 const contexts: BrowserContext[] = [];
@@ -49,8 +49,8 @@ describe("approval check", () => {
     const designer = await as(DESIGNER);
     await designer.goto(`${baseUrl()}/reviews/${revisionId}`);
     await designer.getByText("You can still submit it to ask for the engineer's judgement").waitFor();
-    const submitted = await designer.request.post(`/api/revisions/${revisionId}/submit`, { data: { engineerId: await userId(ENGINEER) } });
-    expect(submitted.status()).toBe(200);
+    await designer.getByRole("button", { name: "Submit for review" }).click();
+    await designer.getByText("Submitted for review: the engineer has been e-mailed.").waitFor();
 
     const engineer = await as(ENGINEER);
     for (const [label, viewport] of [["desktop", DESKTOP], ["phone", PHONE]] as const) {
@@ -66,7 +66,7 @@ describe("approval check", () => {
     await engineer.getByLabel("Approve for construction").check();
     await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
     await engineer.getByRole("button", { name: "Sign and approve" }).click();
-    await engineer.getByText(/give your reason for each failing check/).first().waitFor();
+    await engineer.getByText("Give the reason you accept this check (10 to 2,000 characters)").first().waitFor();
     for (let i = 0; i < failing.length; i++) await engineer.locator(`#override-${i}`).fill(`Accepted after a site visit: rock at 20 in (check ${i + 1}).`);
     await engineer.getByLabel("Your password, to sign the approval").fill("pierwise-demo");
     await engineer.getByRole("button", { name: "Sign and approve" }).click();

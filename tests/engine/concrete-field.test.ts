@@ -91,3 +91,13 @@ describe("tilt settings as the rack allows them", () => {
     expect(r.footing.depthIn).toBe(Math.max(...r.options.tiltEnvelope!.rows.map((x) => x.requiredDepthIn)));
   });
 });
+
+describe("the report states the mix", () => {
+  it("adds the specification and cold-weather lines to the concrete lines", async () => {
+    const { concreteLines } = await import("../../app/_lib/review/report-model");
+    // defaults [common practice]: 4,000 psi, ¾ in, 4 in; 2,000 psi minimum IBC §1807.3.3 [memory]
+    const lines = concreteLines(sizeDesign(defaultDesignInput)).join("\n");
+    expect(lines).toMatch(/Mix: f'c 4,000 psi at 28 days, aggregate 0\.75 in maximum, slump 4 in \(not below 2,000 psi/);
+    expect(lines).toMatch(/non-chloride accelerator/);
+  });
+});

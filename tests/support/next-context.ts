@@ -42,6 +42,8 @@ export function resetRequest(options: { ip?: string } = {}): void {
   jar.clear();
   requestHeaders.clear();
   requestHeaders.set("x-forwarded-for", options.ip ?? "203.0.113.10");
+  // The socket address the server's preload would stamp (db/lib/peer-address.cjs): the address requestIp() trusts.
+  requestHeaders.set("x-pierwise-peer-address", options.ip ?? "203.0.113.10");
 }
 resetRequest();
 
@@ -62,7 +64,10 @@ export async function actAs(email: string | null): Promise<void> {
   if (!row) throw new Error(`no such test user: ${email}`);
   const { sessionOptions } = await import("@/app/_lib/session");
   const options = sessionOptions();
-  const seal = await sealData({ userId: row.userId, organisationId: row.organisationId, signedInAt: Date.now() }, { password: options.password, ttl: options.ttl });
+  // Sessions are server-side records the cookie points at (app/_lib/start-session.ts).
+  const { openSession } = await import("@/db/queries/sessions");
+  const sessionId = await openSession({ userId: row.userId, organisationId: row.organisationId, ttlSeconds: options.ttl ?? 43_200, ip: null, userAgent: "test" });
+  const seal = await sealData({ userId: row.userId, organisationId: row.organisationId, sessionId, signedInAt: Date.now() }, { password: options.password, ttl: options.ttl });
   jar.set(options.cookieName, { name: options.cookieName, value: seal });
 }
 

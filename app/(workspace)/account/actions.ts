@@ -3,7 +3,10 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { requireRole } from "@/app/_lib/auth";
+import { redirect } from "next/navigation";
+import { requireRole, requireUser } from "@/app/_lib/auth";
+import { getSession } from "@/app/_lib/session";
+import { endSessionsOf } from "@/db/queries/sessions";
 import { forPage } from "@/app/_lib/page-access";
 import { requestIp } from "@/app/_lib/request-ip";
 import { licenceInput, licenceSchema, LICENSING_STATES } from "@/app/_lib/schemas/licence";
@@ -31,4 +34,13 @@ export async function removeLicenceAction(_prev: ActionState, form: FormData): P
   await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "licence-removed", subject: user.email, detail: { state }, ip: await requestIp() });
   revalidatePath("/account");
   return { ok: true, message: `Licence for ${state} removed.` };
+}
+
+/** Ends every session of this person, on every device, this one included, and goes to sign-in. */
+export async function signOutEverywhereAction(): Promise<void> {
+  const user = await forPage(() => requireUser(), "/account");
+  const ended = await endSessionsOf(user.userId);
+  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "signed-out-everywhere", subject: user.email, detail: { sessions: ended }, ip: await requestIp() });
+  (await getSession()).destroy();
+  redirect("/login");
 }

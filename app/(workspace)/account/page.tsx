@@ -2,9 +2,13 @@ import type { Metadata } from "next";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { listLicences } from "@/db/queries/licences";
+import { readSession } from "@/app/_lib/session";
+import { activeSessions } from "@/db/queries/sessions";
+import { signOutEverywhereAction } from "./actions";
 import { ROLE_LABELS } from "@/db/roles";
 import { LicenceForm } from "./_components/licence-form";
 import { RemoveLicenceButton } from "./_components/remove-licence-button";
+import { dateTimeInWords, todayInZone } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Your account" };
 
@@ -12,7 +16,9 @@ export default async function AccountPage() {
   const user = await forPage(() => requireUser(), "/account");
   const isEngineer = hasRole(user, "engineer");
   const licences = isEngineer ? await listLicences(user.userId) : [];
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayInZone(user.timeZone);
+  const sessions = await activeSessions(user.userId);
+  const thisSession = (await readSession()).sessionId;
   return (
     <>
       <h1 className="text-2xl font-semibold">Your account</h1>
@@ -59,6 +65,35 @@ export default async function AccountPage() {
           <p className="mt-1 text-sm text-slate-600">Licences are recorded by members with the reviewing engineer role.</p>
         )}
       </section>
+      <section aria-labelledby="sessions-heading" className="mt-8">
+        <h2 id="sessions-heading" className="text-lg font-semibold">Where you are signed in</h2>
+        <p className="mt-1 max-w-2xl text-sm text-slate-600">
+          Each sign-in lasts at most 12 hours. If you see a device you do not recognise, sign out everywhere and reset your password.
+        </p>
+        <ul className="mt-3 divide-y divide-slate-200 rounded-lg border border-slate-200 bg-white">
+          {sessions.map((s) => (
+            <li key={s.id} className="flex flex-wrap gap-x-4 gap-y-1 px-4 py-3 text-sm">
+              <span className="font-medium">{s.id === thisSession ? "This device" : browserName(s.userAgent)}</span>
+              <span className="text-slate-600">signed in {dateTimeInWords(s.createdAt, user.timeZone)}</span>
+              <span className="text-slate-600">last active {dateTimeInWords(s.lastSeenAt, user.timeZone)}</span>
+              {s.ip ? <span className="text-slate-600">from {s.ip}</span> : null}
+            </li>
+          ))}
+        </ul>
+        <form action={signOutEverywhereAction} className="mt-3">
+          <button type="submit" className="rounded-md border border-red-300 bg-white px-3 py-1.5 text-sm font-medium text-red-800 hover:bg-red-50">
+            Sign out everywhere
+          </button>
+        </form>
+      </section>
     </>
   );
+}
+
+/** A short, human name for the browser that made a session, from its user-agent string. */
+function browserName(userAgent: string | null): string {
+  if (!userAgent) return "Unknown browser";
+  const browser = /Edg\//.test(userAgent) ? "Edge" : /Firefox\//.test(userAgent) ? "Firefox" : /Chrome\//.test(userAgent) ? "Chrome" : /Safari\//.test(userAgent) ? "Safari" : "Another browser";
+  const device = /iPhone|Android.*Mobile/.test(userAgent) ? "phone" : /iPad|Android/.test(userAgent) ? "tablet" : "computer";
+  return `${browser} on a ${device}`;
 }

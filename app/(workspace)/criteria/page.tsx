@@ -35,7 +35,7 @@ export default async function CriteriaPage() {
       {canWrite ? (
         <section aria-labelledby="new-card" className="mt-8">
           <h2 id="new-card" className="mb-2 text-lg font-semibold">Add a card</h2>
-          <CriteriaCardForm states={US_STATES} />
+          <CriteriaCardForm states={US_STATES} timeZone={user.timeZone} />
         </section>
       ) : null}
     </>

@@ -6,6 +6,7 @@ import { quarterIn } from "@/app/_lib/review/field-format";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { approvedSpecs } from "@/db/queries/review-queue";
+import { shortDate } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Field specs" };
 
@@ -26,7 +27,7 @@ export default async function FieldSpecsPage() {
                 {s.projectAddress ? <p className="text-sm text-slate-600">{s.projectAddress}</p> : null}
                 <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">
                   Revision {s.number} <StatusBadge status={s.superseded ? "superseded" : "approved"} onHold={s.onHold} />
-                  {s.approvedAt ? <span className="text-slate-600">approved {s.approvedAt.toISOString().slice(0, 10)}</span> : null}
+                  {s.approvedAt ? <span className="text-slate-600">approved {shortDate(s.approvedAt, user.timeZone)}</span> : null}
                 </p>
                 <p className="mt-1 text-base">{s.posts} holes, {quarterIn(s.diameterIn)} across × {quarterIn(s.depthIn)} deep</p>
               </Link>

@@ -2,13 +2,11 @@
 
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
+import { forAction } from "@/app/_lib/action-errors";
 import { requireUser } from "@/app/_lib/auth";
-import { assertCanWrite, cardFor, projectFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
-import { projectSchema } from "@/app/_lib/schemas/project";
+import { createProject, updateProject } from "@/app/_lib/services/projects";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { createProject, updateProject } from "@/db/queries/projects";
 
 function fieldsFrom(form: FormData) {
   const text = (k: string) => (typeof form.get(k) === "string" ? (form.get(k) as string) : undefined);
@@ -17,31 +15,18 @@ function fieldsFrom(form: FormData) {
 
 /** New project from the form; designers and admins. */
 export async function createProjectAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const user = await forPage(async () => {
-    const u = await requireUser();
-    assertCanWrite(u);
-    return u;
-  });
-  const parsed = projectSchema.safeParse(fieldsFrom(form));
-  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values: typedValues(form) };
-  await forPage(() => cardFor(user, parsed.data.criteriaCardId));
-  const id = await createProject(user.organisationId, user.userId, parsed.data);
+  const user = await forPage(() => requireUser());
+  const created = await forAction(() => createProject(user, () => fieldsFrom(form)), typedValues(form));
+  if (!created.ok) return created.state;
   revalidatePath("/projects");
-  redirect(`/projects/${id}`);
+  redirect(`/projects/${created.value.id}`);
 }
 
 /** Edit a project's details and criteria card. */
 export async function updateProjectAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const project = await forPage(async () => {
-    const u = await requireUser();
-    const p = await projectFor(u, String(form.get("projectId") ?? ""));
-    assertCanWrite(u);
-    return p;
-  });
-  const parsed = projectSchema.safeParse(fieldsFrom(form));
-  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values: typedValues(form) };
-  await forPage(async () => cardFor(await requireUser(), parsed.data.criteriaCardId));
-  await updateProject(project.id, parsed.data);
-  revalidatePath(`/projects/${project.id}`);
-  redirect(`/projects/${project.id}`);
+  const user = await forPage(() => requireUser());
+  const updated = await forAction(() => updateProject(user, String(form.get("projectId") ?? ""), () => fieldsFrom(form)), typedValues(form));
+  if (!updated.ok) return updated.state;
+  revalidatePath(`/projects/${updated.value.id}`);
+  redirect(`/projects/${updated.value.id}`);
 }

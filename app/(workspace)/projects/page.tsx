@@ -25,7 +25,7 @@ export default async function ProjectsPage({ searchParams }: { searchParams: Pro
         ) : null}
       </div>
       <div className="mt-4">
-        <ProjectsTable page={page} showContractor={showContractor} />
+        <ProjectsTable page={page} timeZone={user.timeZone} showContractor={showContractor} />
       </div>
       <Caution compact className="mt-6" />
     </>

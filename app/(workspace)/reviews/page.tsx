@@ -5,7 +5,7 @@ import { forPage } from "@/app/_lib/page-access";
 import { displayStatus } from "@/app/_lib/review/standing";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
-import { dateInWords } from "@/app/_lib/review/dates";
+import { dateInWords, shortDate } from "@/components/ui/dates";
 import { openHoldsOfOrganisation } from "@/db/queries/holds";
 import { recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
 
@@ -37,17 +37,17 @@ export default async function ReviewsPage() {
           </ul>
         </section>
       ) : null}
-      {waiting ? <QueueTable title="Waiting for your review" rows={waiting} empty="Nothing is waiting for your review." show="submitted" /> : null}
-      {mine ? <QueueTable title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
-      <QueueTable title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />
+      {waiting ? <QueueTable timeZone={user.timeZone} title="Waiting for your review" rows={waiting} empty="Nothing is waiting for your review." show="submitted" /> : null}
+      {mine ? <QueueTable timeZone={user.timeZone} title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
+      <QueueTable timeZone={user.timeZone} title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />
       <Caution />
     </div>
   );
 }
 
-const when = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
 
-function QueueTable({ title, rows, empty, show }: { title: string; rows: QueueRow[]; empty: string; show: "submitted" | "engineer" | "decided" }) {
+function QueueTable({ title, rows, empty, show, timeZone }: { title: string; rows: QueueRow[]; empty: string; show: "submitted" | "engineer" | "decided"; timeZone?: string }) {
+  const when = (d: Date | null) => shortDate(d, timeZone);
   const id = title.toLowerCase().replace(/\W+/g, "-");
   return (
     <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4">

@@ -4,9 +4,9 @@ import { verifyPassword } from "@/app/_lib/password";
 import { requestIp } from "@/app/_lib/request-ip";
 import type { DesignResult } from "@/engine";
 import { recordAudit } from "@/db/queries/audit";
-import { clearFailures, recordFailure, secondsUntilAllowed } from "@/db/queries/sign-in-throttle";
+import { attemptSucceeded, reserveAttempt } from "@/db/queries/sign-in-throttle";
 import { findUserByEmail } from "@/db/queries/users";
-import { checkOutcome, ratioText, type CheckOverride } from "./check-outcome";
+import { checkOutcome, ratioText, type CheckOverride } from "@/components/review/check-outcome";
 
 const invalid = (path: (string | number)[], message: string) => ValidationError.field(path.join("."), message);
 
@@ -39,17 +39,16 @@ export function decideOverrides(result: DesignResult, overrides: { checkId: stri
  */
 export async function confirmSignature(user: CurrentUser, password: string): Promise<void> {
   const ip = await requestIp();
-  const wait = await secondsUntilAllowed(user.email, ip);
-  if (wait > 0) {
-    const minutes = Math.ceil(wait / 60);
+  if (!password) throw invalid(["password"], "Enter your password to sign the approval");
+  const attempt = await reserveAttempt(user.email, ip);
+  if (!attempt.ok) {
+    const minutes = Math.ceil(attempt.waitSeconds / 60);
     throw invalid(["password"], `Too many wrong passwords. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`);
   }
-  if (!password) throw invalid(["password"], "Enter your password to sign the approval");
   const person = await findUserByEmail(user.email);
   if (!person || !(await verifyPassword(person.passwordHash, password))) {
-    await recordFailure(user.email, ip);
     await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "approval-signature-failed", subject: user.email, ip });
     throw invalid(["password"], "That is not your password: the approval was not recorded");
   }
-  await clearFailures(user.email);
+  await attemptSucceeded(attempt.attemptId, user.email, ip);
 }

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { ConflictError, ValidationError } from "@/app/_lib/errors";
-import { assertRole, type CurrentUser } from "@/app/_lib/auth";
+import type { CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { deleteObject, putObject } from "@/app/_lib/storage";
@@ -11,9 +11,8 @@ import { GROUND_FOUND, insertAsBuilt } from "@/db/queries/as-built";
 import { recordAudit } from "@/db/queries/audit";
 import { insertHold } from "@/db/queries/holds";
 import { userEmailAndName } from "@/db/queries/review-people";
-import { reviewsOfRevision } from "@/db/queries/reviews";
+import { reviewsOfRevision, type RevisionContext } from "@/db/queries/reviews";
 import { GROUND_FOUND_LABELS } from "./ground-labels";
-import { ownedRevision } from "./workflow";
 
 
 const number = (label: string, min: number, max: number) =>
@@ -50,12 +49,12 @@ export function holdReasons(result: DesignResult, entry: AsBuiltInput): string[]
 }
 
 /**
- * Records a hole of an approved revision, with photos. When the hole contradicts the spec, the
- * design goes on hold and the approving engineer and the designer are e-mailed.
+ * The steps of recording a hole after the access checks (app/_lib/services/field.ts): a hole of an
+ * approved revision, with photos. When the hole contradicts the spec, the design goes on hold and
+ * the approving engineer and the designer are e-mailed.
  */
-export async function recordAsBuilt(user: CurrentUser, revisionId: string, input: AsBuiltInput, photos: File[]): Promise<{ entryId: string; holdId: string | null; reasons: string[] }> {
-  const revision = await ownedRevision(user, revisionId);
-  assertRole(user, "installer", "engineer");
+export async function recordAsBuilt(user: CurrentUser, revision: RevisionContext, input: AsBuiltInput, photos: File[]): Promise<{ entryId: string; holdId: string | null; reasons: string[] }> {
+  const revisionId = revision.id;
   if (revision.status !== "approved") throw new ConflictError("As-built entries are recorded only against an approved revision.");
   if (!revision.result.field.posts.some((p) => p.id === input.postId)) {
     throw ValidationError.field("postId", `Post must be one of ${revision.result.field.posts.map((p) => p.id).join(", ")}`);

@@ -1,11 +1,11 @@
 import { z } from "zod";
 import { ConflictError } from "@/app/_lib/errors";
-import { assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwnedOrEngaged, type CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
-import { clearHoldRow, getHold, holdAudience } from "@/db/queries/holds";
+import { clearHoldRow, getHold, holdAudience, type HoldRecord } from "@/db/queries/holds";
 
 export const clearHoldSchema = z.object({
   note: z.string().trim().min(3, { error: "Say how the hold was resolved and what the crew is to do (3 to 2000 characters)" }).max(2000, { error: "The note must be at most 2000 characters" }),
@@ -18,13 +18,13 @@ export async function holdFor(user: CurrentUser, holdId: string) {
 }
 
 /**
- * Only an engineer clears a hold, saying how it was resolved and what the crew is to do (e.g.
- * "pour as dug"). The designer and every installer who logged a hole on the revision are e-mailed
- * the note; it shows on the field spec and in the as-built log from then on.
+ * The steps of clearing a hold after the access checks (app/_lib/services/field.ts): the engineer
+ * says how it was resolved and what the crew is to do (e.g. "pour as dug"). The designer and every
+ * installer who logged a hole on the revision are e-mailed the note; it shows on the field spec
+ * and in the as-built log from then on.
  */
-export async function clearHold(user: CurrentUser, holdId: string, note: string): Promise<{ told: string[] }> {
-  const hold = await holdFor(user, holdId);
-  assertRole(user, "engineer");
+export async function clearHold(user: CurrentUser, hold: HoldRecord & { organisationId: string }, note: string): Promise<{ told: string[] }> {
+  const holdId = hold.id;
   if (!(await clearHoldRow(hold.id, user.userId, note))) throw new ConflictError("This hold was already cleared.");
   await recordAudit({ organisationId: hold.organisationId, actorUserId: user.userId, action: "hold-cleared", subject: hold.designId, detail: { holdId, note } });
   const where = await db("designs as d").join("projects as p", "p.id", "d.project_id").where("d.id", hold.designId).first("d.name as designName", "p.name as projectName");

@@ -4,14 +4,10 @@
  */
 import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
+import type { Table } from "@/components/review/plain-table";
 import { userText } from "./report-text";
 
-export interface Table {
-  title: string;
-  columns: string[];
-  rows: string[][];
-  note?: string;
-}
+export type { Table };
 
 export function fmt(n: number | null | undefined, digits = 1): string {
   if (n === null || n === undefined || !Number.isFinite(n)) return "—";
@@ -98,5 +94,7 @@ export function concreteLines(r: DesignResult): string[] {
     `Per hole: ${fmt(r.concrete.perHole.volumeFt3, 2)} ft³ (${fmt(r.concrete.perHole.volumeYd3, 2)} yd³), about ${fmt(r.concrete.perHole.weightLb, 0)} lb`,
     `Job: ${j.holes} holes, ${fmt(j.totalYd3, 2)} yd³; with ${fmt(j.wasteAllowancePct, 0)}% waste ${fmt(j.withWasteYd3, 2)} yd³`,
     `Order ${fmt(j.orderYd3, 2)} yd³ ready-mix, or ${j.bags80Lb} × 80 lb / ${j.bags60Lb} × 60 lb / ${j.bags40Lb} × 40 lb premix bags`,
+    // The mix (results saved before it was added have none).
+    ...(r.concrete.specification ? [`Mix: ${r.concrete.specification.summary} (not below ${fmt(r.concrete.specification.codeMinimumPsi, 0)} psi, ${r.concrete.specification.codeMinimumSource})`, ...r.concrete.specification.coldWeather] : []),
   ];
 }

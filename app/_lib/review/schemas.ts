@@ -2,7 +2,7 @@ import { z } from "zod";
 
 /** The body of POST /api/revisions/:id/submit. */
 export const submitSchema = z.object({
-  engineerId: z.string({ error: "engineerId must name the reviewing engineer (a member id)" }).uuid({ error: "engineerId must be a member id" }),
+  engineerId: z.string({ error: "Choose the reviewing engineer" }).uuid({ error: "Choose the reviewing engineer" }),
 });
 
 const commentSchema = z.object({

@@ -1,4 +1,4 @@
-import { STATUS_LABELS, type DisplayStatus } from "./status-labels";
+import { STATUS_LABELS, type DisplayStatus } from "@/db/revision-status";
 import { openHolds, type HoldRecord } from "@/db/queries/holds";
 import { newerApprovedRevision, reviewsOfRevision, type ReviewRecord, type RevisionContext, type RevisionStatus } from "@/db/queries/reviews";
 

@@ -1,9 +1,10 @@
 import { randomBytes } from "node:crypto";
-import { assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwned, assertOwnedOrEngaged, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
 import { db } from "@/db/client";
+import { STATUS_PHRASES } from "@/db/revision-status";
 import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
 import { engagedEngineers } from "@/db/queries/engagements";
@@ -12,11 +13,10 @@ import {
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
 } from "@/db/queries/reviews";
 import { confirmSignature, decideOverrides } from "./approval-signature";
-import { ratioText } from "./check-outcome";
+import { ratioText } from "@/components/review/check-outcome";
 import { engineerEligibility, licenceEligibility } from "./eligibility";
 import type { ReviewBody } from "./schemas";
 
-const STATUS_WORDS = { draft: "a draft", in_review: "in review", approved: "approved", changes_requested: "marked changes requested" } as const;
 
 const invalid = ValidationError.field;
 
@@ -43,12 +43,12 @@ export function reviewUrl(revisionId: string): string {
 }
 
 /**
- * A designer sends a draft (or a revision with changes requested) to one of the organisation's
- * engineers. The revision must be the design's newest; the engineer must be able to decide it.
+ * The steps of submitting after the access checks (app/_lib/services/review.ts): a draft (or a
+ * revision with changes requested) goes to one of the organisation's engineers. The revision must
+ * be the design's newest; the engineer must be able to decide it.
  */
-export async function submitRevision(user: CurrentUser, revisionId: string, engineerId: string): Promise<{ reviewId: string }> {
-  const revision = await ownedRevision(user, revisionId);
-  assertRole(user, "designer");
+export async function submitRevision(user: CurrentUser, revision: RevisionContext, engineerId: string): Promise<{ reviewId: string }> {
+  const revisionId = revision.id;
   const engineer = await chosenEngineer(user.organisationId, revision.projectId, engineerId);
   if (!engineer) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation or engaged on this project");
   if (engineer.userId === user.userId) throw invalid("engineerId", "Choose another engineer: nobody can review their own design");
@@ -61,7 +61,7 @@ export async function submitRevision(user: CurrentUser, revisionId: string, engi
   const reviewId = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "draft" && status !== "changes_requested") {
-      throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+      throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     }
     const latest = await latestRevisionNumber(revision.designId, trx);
     if (latest !== revision.number) throw new ConflictError(`Revision ${revision.number} is not the newest (revision ${latest} is); submit the newest revision.`);
@@ -84,18 +84,17 @@ export async function submitRevision(user: CurrentUser, revisionId: string, engi
 }
 
 /**
- * The engineer's decision on a revision in review. Both decisions need an engineer licensed in
+ * The steps of an engineer's decision after ownership and role (app/_lib/services/review.ts). Both decisions need an engineer licensed in
  * the project's state who authored no revision of the design. Approval records name, licence
  * number, state and time; from then on the database refuses any change to the revision.
  */
 export async function decideRevision(
   user: CurrentUser,
-  revisionId: string,
+  revision: RevisionContext,
   body: ReviewBody,
   letterFileKey: string | null = null,
 ): Promise<{ status: "approved" | "changes_requested" }> {
-  const revision = await ownedRevision(user, revisionId, { engaged: true });
-  assertRole(user, "engineer");
+  const revisionId = revision.id;
   if ((await designAuthorIds(revision.designId)).includes(user.userId)) {
     throw new AccessError(403, body.decision === "approve" ? "You cannot approve a design you authored." : "You cannot review a design you authored.", true);
   }
@@ -114,7 +113,7 @@ export async function decideRevision(
   const to = body.decision === "approve" ? "approved" : "changes_requested";
   const submittedBy = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
-    if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_WORDS[status!]}.`, { status });
+    if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
     if (!open) throw new ConflictError("This revision has no open review to decide.");
     // An outside engineer decides only what was submitted to them.

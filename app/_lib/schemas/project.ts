@@ -95,7 +95,8 @@ export const revisionCreateSchema = z.object({
 
 /** Table paging from query parameters (all optional). */
 export const listQuerySchema = z.object({
-  q: z.string().max(200, { error: "Filter must be at most 200 characters" }).optional(),
+  // eslint-disable-next-line no-control-regex
+  q: z.string().max(200, { error: "Filter must be at most 200 characters" }).regex(/^[^\u0000-\u001f\u007f]*$/, { error: "Filter must not contain control characters" }).optional(),
   sort: z.string().max(40).optional(),
   dir: z.enum(["asc", "desc"], { error: "dir must be asc or desc" }).optional(),
   page: z.coerce.number({ error: "page must be a whole number from 1" }).int({ error: "page must be a whole number from 1" }).min(1, { error: "page must be a whole number from 1" }).optional(),

@@ -1,8 +1,8 @@
 import { apiRoute, readJson } from "@/app/_lib/api";
 import { requireUser } from "@/app/_lib/auth";
-import { assertCanWrite, cardFor } from "@/app/_lib/designs";
-import { listQueryFrom, projectSchema } from "@/app/_lib/schemas/project";
-import { createProject, getProject, listProjects } from "@/db/queries/projects";
+import { listQueryFrom } from "@/app/_lib/schemas/project";
+import { createProject } from "@/app/_lib/services/projects";
+import { listProjects } from "@/db/queries/projects";
 
 export const dynamic = "force-dynamic";
 
@@ -16,10 +16,6 @@ export const GET = apiRoute(async (request) => {
 
 /** A new project (designers and admins). */
 export const POST = apiRoute(async (request) => {
-  const user = await requireUser();
-  assertCanWrite(user);
-  const fields = projectSchema.parse(await readJson(request));
-  await cardFor(user, fields.criteriaCardId);
-  const id = await createProject(user.organisationId, user.userId, fields);
-  return Response.json({ project: await getProject(id) }, { status: 201 });
+  const project = await createProject(await requireUser(), () => readJson(request));
+  return Response.json({ project }, { status: 201 });
 });

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { allowRequest } from "@/app/_lib/rate-limit";
 import { requestIp } from "@/app/_lib/request-ip";
-import { dateInWords } from "@/app/_lib/review/dates";
+import { dateInWords } from "@/components/ui/dates";
 import { quarterIn } from "@/app/_lib/review/field-format";
 import { cityOf, VERIFY_STATUS_WORDS, verifyStatus } from "@/app/_lib/review/verify";
 import { Brand } from "@/components/ui/brand";

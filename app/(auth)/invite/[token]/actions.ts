@@ -10,7 +10,7 @@ import { startSession } from "@/app/_lib/start-session";
 import { hashToken } from "@/app/_lib/tokens";
 import { recordAudit } from "@/db/queries/audit";
 import { acceptInvitation, findInvitation } from "@/db/queries/invitations";
-import { clearFailures, recordFailure, secondsUntilAllowed } from "@/db/queries/sign-in-throttle";
+import { attemptSucceeded, reserveAttempt } from "@/db/queries/sign-in-throttle";
 import { findUserByEmail } from "@/db/queries/users";
 import { invitationProblem } from "./messages";
 
@@ -32,14 +32,13 @@ export async function acceptInvitationAction(_prev: ActionState, form: FormData)
   if (existing) {
     const parsed = acceptAsExistingSchema.safeParse({ password: form.get("password") ?? undefined });
     if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
-    const wait = await secondsUntilAllowed(invitation.email, ip);
-    if (wait > 0) return { message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} minutes, or reset your password.`, values };
+    const attempt = await reserveAttempt(invitation.email, ip);
+    if (!attempt.ok) return { message: `Too many failed attempts. Try again in ${Math.ceil(attempt.waitSeconds / 60)} minutes, or reset your password.`, values };
     if (!(await verifyPassword(existing.passwordHash, parsed.data.password))) {
-      await recordFailure(invitation.email, ip);
       await recordAudit({ organisationId: invitation.organisationId, action: "sign-in-failed", subject: invitation.email, detail: { via: "invitation" }, ip });
       return { message: "Check the highlighted fields.", fieldErrors: { password: [`That is not the password of the Pierwise account for ${invitation.email}.`] }, values };
     }
-    await clearFailures(invitation.email);
+    await attemptSucceeded(attempt.attemptId, invitation.email, ip);
     who = { existingUserId: existing.id };
   } else {
     const parsed = acceptAsNewSchema.safeParse({ name: form.get("name") ?? undefined, password: form.get("password") ?? undefined });

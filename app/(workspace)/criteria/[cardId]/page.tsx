@@ -10,18 +10,18 @@ export const metadata: Metadata = { title: "Edit criteria card" };
 
 export default async function EditCardPage({ params }: { params: Promise<{ cardId: string }> }) {
   const { cardId } = await params;
-  const card = await forPage(async () => {
+  const { card, timeZone } = await forPage(async () => {
     const u = await requireUser();
     const c = await cardFor(u, cardId);
     assertCanWrite(u);
-    return c!;
+    return { card: c!, timeZone: u.timeZone };
   }, `/criteria/${cardId}`);
   return (
     <>
       <p className="text-sm"><Link href="/criteria" className="text-accent-800 hover:underline">← Criteria cards</Link></p>
       <h1 className="mt-2 mb-1 text-2xl font-semibold">{card.jurisdiction}, {card.state}</h1>
       <p className="mb-4 text-sm text-slate-600">Changes apply to new designs; saved revisions keep the values they were saved with.</p>
-      <CriteriaCardForm card={card} states={US_STATES} />
+      <CriteriaCardForm card={card} states={US_STATES} timeZone={timeZone} />
     </>
   );
 }

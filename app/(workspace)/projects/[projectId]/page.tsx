@@ -65,13 +65,13 @@ export default async function ProjectPage({ params, searchParams }: Props) {
 
       <section aria-labelledby="designs-heading" className="mt-8 space-y-3">
         <h2 id="designs-heading" className="text-lg font-semibold">Designs</h2>
-        <DesignsTable page={designs} projectId={project.id} />
+        <DesignsTable page={designs} projectId={project.id} timeZone={user.timeZone} />
         {canWrite ? <NewDesignForm projectId={project.id} hasCard={Boolean(card)} /> : null}
       </section>
 
       <section aria-labelledby="files-heading" className="mt-8 space-y-3">
         <h2 id="files-heading" className="text-lg font-semibold">Photos and documents</h2>
-        <FilesTable page={fileRows} projectId={project.id} />
+        <FilesTable page={fileRows} projectId={project.id} timeZone={user.timeZone} />
         {canWrite ? <UploadForm projectId={project.id} /> : null}
       </section>
 

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { checkOutcome } from "@/app/_lib/review/check-outcome";
-import { dateInWords } from "@/app/_lib/review/dates";
+import { checkOutcome } from "@/components/review/check-outcome";
+import { dateInWords } from "@/components/ui/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
 import { checksTable, concreteLines, criteriaTable, fmt, governingLines, inputRows, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
 import { revisionStanding } from "@/app/_lib/review/standing";
@@ -12,6 +12,7 @@ import { fieldLabel } from "@/components/design/fields";
 import { inputChanges } from "@/components/design/revision-diff";
 import { CheckSummary } from "@/components/review/check-summary";
 import { HoldBanner } from "@/components/review/hold-banner";
+import { clearHoldAction } from "./actions";
 import { PlainTable } from "@/components/review/plain-table";
 import { ReviewPreview } from "@/components/review/review-preview";
 import { StatusBadge } from "@/components/review/status-badge";
@@ -90,7 +91,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </header>
-      <HoldBanner holds={standing.holds} canClear={isEngineer} timeZone={ctx.timeZone} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">

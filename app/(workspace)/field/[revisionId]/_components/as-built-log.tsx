@@ -1,5 +1,5 @@
 import { GROUND_FOUND_LABELS } from "@/app/_lib/review/ground-labels";
-import { dateTimeInWords } from "@/app/_lib/review/dates";
+import { dateTimeInWords } from "@/components/ui/dates";
 import type { AsBuiltEntry } from "@/db/queries/as-built";
 import type { HoldRecord } from "@/db/queries/holds";
 

@@ -2,6 +2,7 @@
 
 import { createColumnHelper } from "@tanstack/react-table";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
+import { shortDate } from "@/components/ui/dates";
 
 export interface FileRow {
   id: string;
@@ -18,7 +19,7 @@ export interface FileRow {
 const col = createColumnHelper<FileRow>();
 const size = (n: number) => (n < 1024 * 1024 ? `${Math.max(1, Math.round(n / 1024))} KB` : `${(n / 1024 / 1024).toFixed(1)} MB`);
 
-export function FilesTable({ page, projectId }: { page: ServerPage<FileRow>; projectId: string }) {
+export function FilesTable({ page, projectId, timeZone }: { page: ServerPage<FileRow>; projectId: string; timeZone?: string }) {
   const href = (id: string, thumb = false) => `/api/projects/${projectId}/files/${id}${thumb ? "?variant=thumbnail" : ""}`;
   const columns = [
     col.accessor("originalName", {
@@ -41,7 +42,7 @@ export function FilesTable({ page, projectId }: { page: ServerPage<FileRow>; pro
     col.accessor("kind", { header: "Kind", cell: (c) => (c.getValue() === "photo" ? "Photo" : "Document (PDF)") }),
     col.accessor("description", { header: "Description", enableSorting: false, cell: (c) => c.getValue() || <span className="text-slate-400">—</span> }),
     col.accessor("sizeBytes", { header: "Size", cell: (c) => <span className="tabular-nums whitespace-nowrap">{size(c.getValue())}</span> }),
-    col.accessor("createdAt", { header: "Uploaded", cell: (c) => <span className="whitespace-nowrap text-slate-600">{new Date(c.getValue()).toLocaleDateString("en-US", { dateStyle: "medium" })}{c.row.original.uploadedByName ? ` · ${c.row.original.uploadedByName}` : ""}</span> }),
+    col.accessor("createdAt", { header: "Uploaded", cell: (c) => <span className="whitespace-nowrap text-slate-600">{shortDate(c.getValue(), timeZone)}{c.row.original.uploadedByName ? ` · ${c.row.original.uploadedByName}` : ""}</span> }),
   ];
   return <DataTable page={page} columns={columns} caption="Uploads" prefix="f_" filterLabel="Filter uploads" emptyText="No uploads yet: add site photos, the soil report or drawings." />;
 }

@@ -1,7 +1,7 @@
 "use client";
 
-import { useActionState, useState } from "react";
-import { ratioText, type CheckLine } from "@/app/_lib/review/check-outcome";
+import { useActionState, useEffect, useState } from "react";
+import { ratioText, type CheckLine } from "@/components/review/check-outcome";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
 import { decideReviewAction } from "../actions";
@@ -36,7 +36,10 @@ export function DecisionPanel(props: DecisionProps) {
 
 function DecisionForm({ revisionId, inputs, failing, licenceNote, state, action }: DecisionProps & { state: ActionState; action: (form: FormData) => void }) {
   const [count, setCount] = useState(1);
-  const [decision, setDecision] = useState(state.values?.decision === "approve" ? "approve" : "request-changes");
+  const sent = state.values?.decision === "approve" ? "approve" : "request-changes";
+  const [decision, setDecision] = useState(sent);
+  // React resets the form after each action (radios back to their default): follow what was sent.
+  useEffect(() => setDecision(sent), [state, sent]);
   const rows = Math.max(count, ...Object.keys(state.values ?? {}).map((k) => Number(k.match(/^comment\.(\d+)\./)?.[1] ?? -1) + 1));
   const err = (name: string) => state.fieldErrors?.[name];
   const approving = decision === "approve";
@@ -46,10 +49,10 @@ function DecisionForm({ revisionId, inputs, failing, licenceNote, state, action 
       <fieldset className="space-y-2">
         <legend className="text-sm font-medium">Decision</legend>
         <label className="flex items-center gap-2 text-sm">
-          <input type="radio" name="decision" value="request-changes" checked={!approving} onChange={() => setDecision("request-changes")} /> Request changes
+          <input type="radio" name="decision" value="request-changes" defaultChecked={sent !== "approve"} onChange={() => setDecision("request-changes")} /> Request changes
         </label>
         <label className="flex items-center gap-2 text-sm">
-          <input type="radio" name="decision" value="approve" checked={approving} onChange={() => setDecision("approve")} /> Approve for construction
+          <input type="radio" name="decision" value="approve" defaultChecked={sent === "approve"} onChange={() => setDecision("approve")} /> Approve for construction
         </label>
         {err("decision") ? <p className="text-sm text-red-700">{err("decision")!.join(" ")}</p> : null}
       </fieldset>

@@ -1,5 +1,5 @@
-import { ratioText } from "@/app/_lib/review/check-outcome";
-import { calendarDateInWords, dateTimeInWords } from "@/app/_lib/review/dates";
+import { ratioText } from "@/components/review/check-outcome";
+import { calendarDateInWords, dateTimeInWords } from "@/components/ui/dates";
 import type { Standing } from "@/app/_lib/review/standing";
 
 /** Every submission of this revision and what was decided, with the approval record in full. */

@@ -3,7 +3,7 @@
 import { useActionState } from "react";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
-import { ratioText, type CheckOutcome } from "@/app/_lib/review/check-outcome";
+import { ratioText, type CheckOutcome } from "@/components/review/check-outcome";
 import { submitForReviewAction } from "../actions";
 
 export interface EngineerChoice {

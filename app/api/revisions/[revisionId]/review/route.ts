@@ -1,7 +1,6 @@
 import { apiRoute, readJson } from "@/app/_lib/api";
-import { assertRole, requireUser } from "@/app/_lib/auth";
-import { reviewSchema } from "@/app/_lib/review/schemas";
-import { decideRevision, ownedRevision } from "@/app/_lib/review/workflow";
+import { requireUser } from "@/app/_lib/auth";
+import { decideReview } from "@/app/_lib/services/review";
 
 export const dynamic = "force-dynamic";
 
@@ -10,12 +9,7 @@ export const dynamic = "force-dynamic";
  * comments being a text or a list of `{ fieldPath?, body }`. The designer is e-mailed.
  */
 export const POST = apiRoute<{ params: Promise<{ revisionId: string }> }>(async (request, { params }) => {
-  const user = await requireUser();
   const { revisionId: id } = await params;
-  // Who, whose, which role: before reading the body, so a wrong role is a 403 whatever was sent.
-  await ownedRevision(user, id, { engaged: true });
-  assertRole(user, "engineer");
-  const body = reviewSchema.parse(await readJson(request));
-  const { status } = await decideRevision(user, id, body);
+  const { status } = await decideReview(await requireUser(), id, () => readJson(request));
   return Response.json({ revisionId: id, status });
 });

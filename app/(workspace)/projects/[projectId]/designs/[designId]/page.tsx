@@ -4,11 +4,13 @@ import { AccessError, hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
-import { StatusBadge } from "@/components/design/status-badge";
+import { StatusBadge } from "@/components/review/status-badge";
 import { DesignReviewBar } from "@/components/review/design-review-bar";
+import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
 import { RevisionsTable } from "./_components/revisions-table";
+import { shortDateTime } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Design" };
 type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -57,10 +59,10 @@ export default async function DesignPage({ params, searchParams }: Props) {
         <StatusBadge status={shown.status} />
       </div>
       <p className="mt-1 text-sm text-slate-600">
-        Saved {new Date(shown.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note.replace(/\.$/, "")}”` : ""}.
+        Saved {shortDateTime(shown.createdAt, user.timeZone)} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note.replace(/\.$/, "")}”` : ""}.
         <span className="ml-1 font-mono text-xs text-slate-400" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
       </p>
-      <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} canClear={hasRole(user, "engineer")} />
+      <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} />
       {isOld ? (
         <div role="status" className="mt-3 flex flex-wrap items-center gap-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">
           <span>You are reading revision {shown.number}, an older revision. It cannot change.</span>
@@ -91,7 +93,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
           <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
           {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
         </div>
-        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} />
+        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} />
       </section>
     </>
   );

@@ -3,12 +3,13 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
-import { StatusBadge } from "@/components/design/status-badge";
+import { StatusBadge } from "@/components/review/status-badge";
 import type { RevisionRow } from "@/db/queries/revisions";
+import { shortDateTime } from "@/components/ui/dates";
 
 const col = createColumnHelper<RevisionRow>();
 
-export function RevisionsTable({ page, basePath, latestId, viewingId }: { page: ServerPage<RevisionRow>; basePath: string; latestId: string; viewingId: string }) {
+export function RevisionsTable({ page, basePath, latestId, viewingId, timeZone }: { page: ServerPage<RevisionRow>; basePath: string; latestId: string; viewingId: string; timeZone?: string }) {
   const columns = [
     col.accessor("number", {
       header: "Revision",
@@ -22,7 +23,7 @@ export function RevisionsTable({ page, basePath, latestId, viewingId }: { page: 
     col.accessor("note", { header: "Note", enableSorting: false, cell: (c) => <span className="block max-w-xs text-slate-700">{c.getValue() || "—"}</span> }),
     col.accessor("depthIn", { header: "Footing", cell: (c) => { const r = c.row.original; return r.depthIn === null ? "—" : <span className="whitespace-nowrap tabular-nums">{r.diameterIn} in × {(r.depthIn / 12).toFixed(1)} ft{r.pass ? "" : <span className="font-medium text-red-700"> fails</span>}</span>; } }),
     col.accessor("authorName", { header: "By", cell: (c) => c.getValue() ?? "—" }),
-    col.accessor("createdAt", { header: "Saved", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{new Date(c.getValue()).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}</time> }),
+    col.accessor("createdAt", { header: "Saved", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{shortDateTime(c.getValue(), timeZone)}</time> }),
     col.display({
       id: "compare",
       header: "Compare",

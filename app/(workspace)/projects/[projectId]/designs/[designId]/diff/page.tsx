@@ -7,6 +7,7 @@ import { inputChanges, resultChanges, type DiffRow, type DiffValue } from "@/com
 import { formatQuantity, type UnitSystem } from "@/components/design/units";
 import { Caution } from "@/components/ui/caution";
 import { revisionNumbers } from "@/db/queries/revisions";
+import { shortDateTime } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Compare revisions" };
 type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -46,7 +47,7 @@ export default async function DiffPage({ params, searchParams }: Props) {
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
   const path = `/projects/${projectId}/designs/${designId}`;
   const units: UnitSystem = one("units") === "metric" ? "metric" : "imperial";
-  const { project, design, numbers, from, to } = await forPage(async () => {
+  const { project, design, numbers, from, to, timeZone } = await forPage(async () => {
     const u = await requireUser();
     const p = await projectFor(u, projectId, { engaged: true });
     const d = await designFor(u, designId, { engaged: true });
@@ -59,7 +60,7 @@ export default async function DiffPage({ params, searchParams }: Props) {
       if (r.designId !== d.id) throw new AccessError(404, "That revision was not found.");
       return r;
     };
-    return { project: p, design: d, numbers: list, from: await load(fromId), to: await load(toId) };
+    return { project: p, design: d, numbers: list, from: await load(fromId), to: await load(toId), timeZone: u.timeZone };
   }, path + "/diff");
 
   const inputs = inputChanges(from.input, to.input);
@@ -86,8 +87,8 @@ export default async function DiffPage({ params, searchParams }: Props) {
         <button type="submit" className="rounded-md border border-slate-300 bg-white px-3 py-1.5 hover:bg-slate-50">Compare</button>
       </form>
       <div className="mt-3 grid gap-2 text-sm text-slate-600 sm:grid-cols-2">
-        <p><strong>Rev {from.number}</strong> · {from.authorName} · {new Date(from.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}{from.note ? ` — “${from.note}”` : ""}</p>
-        <p><strong>Rev {to.number}</strong> · {to.authorName} · {new Date(to.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}{to.note ? ` — “${to.note}”` : ""}</p>
+        <p><strong>Rev {from.number}</strong> · {from.authorName} · {shortDateTime(from.createdAt, timeZone)}{from.note ? ` — “${from.note}”` : ""}</p>
+        <p><strong>Rev {to.number}</strong> · {to.authorName} · {shortDateTime(to.createdAt, timeZone)}{to.note ? ` — “${to.note}”` : ""}</p>
       </div>
 
       <section aria-labelledby="inputs-heading" className="mt-6 space-y-2">

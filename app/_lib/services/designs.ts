@@ -1,0 +1,37 @@
+import "server-only";
+import { createDesignWithRevision, getDesign, type Design } from "@/db/queries/designs";
+import { getRevision } from "@/db/queries/revisions";
+import { designInputSchema, ENGINE_VERSION } from "@/engine";
+import type { CurrentUser } from "../auth";
+import { startingInput } from "../design-defaults";
+import { assertCanWrite, cardFor, computeResult, designFor, projectFor, saveRevision as insertRevision, type DesignRevision } from "../designs";
+import { designCreateSchema, revisionCreateSchema } from "../schemas/project";
+import type { Body } from "./input";
+
+/**
+ * A new design with its revision 1: from `input` when given (API), else from the defaults with the
+ * project's criteria card applied. Without a note, revision 1 says where it started from.
+ */
+export async function createDesign(user: CurrentUser, projectId: string, body: Body): Promise<{ design: Design; revisionId: string }> {
+  const project = await projectFor(user, projectId);
+  assertCanWrite(user);
+  const fields = designCreateSchema.parse(await body());
+  const card = await cardFor(user, project.criteriaCardId);
+  const input = fields.input ?? designInputSchema.parse(startingInput(card?.values, project.name));
+  const result = computeResult(input, fields.input ? ["input"] : []);
+  const startedFrom = fields.input ? "First revision" : card ? `Started from the ${card.jurisdiction} criteria card.` : "Started from the default design.";
+  const created = await createDesignWithRevision({
+    projectId: project.id, organisationId: user.organisationId, name: fields.name, authorId: user.userId,
+    input, result, engineVersion: ENGINE_VERSION, note: fields.note || startedFrom,
+  });
+  return { design: (await getDesign(created.designId))!, revisionId: created.revisionId };
+}
+
+/** The next revision of a design from `{ baseRevisionId, input, note }`; a stale base is a 409 naming the latest. */
+export async function saveRevision(user: CurrentUser, designId: string, body: Body): Promise<DesignRevision> {
+  const design = await designFor(user, designId);
+  assertCanWrite(user);
+  const fields = revisionCreateSchema.parse(await body());
+  const saved = await insertRevision(user, design, fields);
+  return (await getRevision(saved.id))! as DesignRevision;
+}

@@ -1,0 +1,139 @@
+/**
+ * One use case, two doors: each API route and the server action of the same use case call one
+ * service (app/_lib/services), so the same caller sending the same fields gets the same outcome —
+ * done, the same invalid fields, the same refusal. One shared table of cases; each case runs
+ * once through the route and once through the action, each on fresh data.
+ */
+import { afterAll, describe, expect, it } from "vitest";
+import { createDesignAction } from "@/app/(workspace)/projects/[projectId]/actions";
+import { createProjectAction, updateProjectAction } from "@/app/(workspace)/projects/actions";
+import { decideReviewAction, submitForReviewAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
+import { POST as designsRoute } from "@/app/api/projects/[projectId]/designs/route";
+import { PATCH as projectRoute } from "@/app/api/projects/[projectId]/route";
+import { POST as projectsRoute } from "@/app/api/projects/route";
+import { POST as reviewRoute } from "@/app/api/revisions/[revisionId]/review/route";
+import { POST as submitRoute } from "@/app/api/revisions/[revisionId]/submit/route";
+import { db } from "@/db/client";
+import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
+import { DEMO_CARD_ID } from "@/db/seeds/02_demo_projects";
+import { toFormData } from "../support/access-matrix";
+import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
+import { DESIGNER, ENGINEER, freshInReview, INSTALLER, makeDesign, OUTSIDER, userId } from "../support/review-fixtures";
+
+type Fields = Record<string, string>;
+/** done | invalid:<fields> | forbidden | not-found | signed-out | refused:<message> */
+type Outcome = string;
+
+interface UseCase {
+  name: string;
+  /** Fresh data for one call; returns the id the route takes in its path and the action in its form. */
+  setup: () => Promise<string>;
+  idName: string;
+  route: (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+  method: string;
+  action: (prev: object, form: FormData) => Promise<unknown>;
+}
+
+const projectsMade: string[] = [];
+/** Fresh data in the demo organisation, removed after the file so other tests' lists stay as they were. */
+const made = <T extends { projectId: string }>(d: T): T => (projectsMade.push(d.projectId), d);
+const projectIdOf = async () => made(await makeDesign()).projectId;
+async function inReviewId(): Promise<string> {
+  const d = await freshInReview();
+  projectsMade.push((await db("designs").where({ id: d.designId }).first("project_id")).project_id);
+  return d.revisionId;
+}
+const USE_CASES: Record<string, UseCase> = {
+  createProject: { name: "create a project", setup: async () => "", idName: "", route: (r) => projectsRoute(r, {}), method: "POST", action: createProjectAction },
+  updateProject: { name: "update a project", setup: projectIdOf, idName: "projectId", route: projectRoute as UseCase["route"], method: "PATCH", action: updateProjectAction },
+  createDesign: { name: "create a design", setup: projectIdOf, idName: "projectId", route: designsRoute as UseCase["route"], method: "POST", action: createDesignAction },
+  submit: { name: "submit for review", setup: async () => made(await makeDesign()).revisionId, idName: "revisionId", route: submitRoute as UseCase["route"], method: "POST", action: submitForReviewAction },
+  decide: { name: "decide a review", setup: inReviewId, idName: "revisionId", route: reviewRoute as UseCase["route"], method: "POST", action: decideReviewAction },
+};
+
+let engineerId = "";
+let installerId = "";
+const CASES: { useCase: keyof typeof USE_CASES; who: string | null; fields: () => Fields; expected: Outcome; id?: string }[] = [
+  { useCase: "createProject", who: DESIGNER, fields: () => ({ name: "Parity site", state: "CO", latitude: "39.5" }), expected: "done" },
+  // Latitude −90…90° is the definition of latitude [common practice]; state codes are USPS two-letter codes [common practice].
+  { useCase: "createProject", who: DESIGNER, fields: () => ({ name: "", state: "Colorado", latitude: "123" }), expected: "invalid:latitude,name,state" },
+  { useCase: "createProject", who: INSTALLER, fields: () => ({ name: "Not mine to make", state: "CO" }), expected: "forbidden" },
+  { useCase: "createProject", who: OUTSIDER, fields: () => ({ name: "Borrowing a card", state: "CO", criteriaCardId: DEMO_CARD_ID }), expected: "not-found" },
+  { useCase: "createProject", who: null, fields: () => ({ name: "Nobody", state: "CO" }), expected: "signed-out" },
+  { useCase: "updateProject", who: DESIGNER, fields: () => ({ name: "Renamed site", state: "CO" }), expected: "done" },
+  { useCase: "updateProject", who: DESIGNER, fields: () => ({ name: "Renamed site", state: "CO", longitude: "200" }), expected: "invalid:longitude" },
+  { useCase: "updateProject", who: INSTALLER, fields: () => ({ name: "Renamed site", state: "CO" }), expected: "forbidden" },
+  { useCase: "updateProject", who: OUTSIDER, fields: () => ({ name: "Renamed site", state: "CO" }), expected: "not-found" },
+  { useCase: "updateProject", who: DESIGNER, id: "-".repeat(36), fields: () => ({ name: "Renamed site", state: "CO" }), expected: "not-found" },
+  { useCase: "createDesign", who: DESIGNER, fields: () => ({ name: "Parity array" }), expected: "done" },
+  { useCase: "createDesign", who: DESIGNER, fields: () => ({ name: "" }), expected: "invalid:name" },
+  { useCase: "createDesign", who: ENGINEER, fields: () => ({ name: "Parity array" }), expected: "forbidden" },
+  { useCase: "createDesign", who: OUTSIDER, fields: () => ({ name: "Parity array" }), expected: "not-found" },
+  { useCase: "submit", who: DESIGNER, fields: () => ({ engineerId }), expected: "done" },
+  { useCase: "submit", who: DESIGNER, fields: () => ({ engineerId: installerId }), expected: "invalid:engineerId" },
+  { useCase: "submit", who: DESIGNER, fields: () => ({ engineerId: "" }), expected: "invalid:engineerId" },
+  { useCase: "submit", who: INSTALLER, fields: () => ({ engineerId }), expected: "forbidden" },
+  { useCase: "submit", who: OUTSIDER, fields: () => ({ engineerId }), expected: "not-found" },
+  { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "approve", password: DEMO_PASSWORD }), expected: "done" },
+  { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "maybe" }), expected: "invalid:decision" },
+  { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "request-changes" }), expected: "invalid:comments" },
+  { useCase: "decide", who: DESIGNER, fields: () => ({ decision: "approve" }), expected: "forbidden" },
+  { useCase: "decide", who: OUTSIDER, fields: () => ({ decision: "approve" }), expected: "not-found" },
+];
+
+afterAll(async () => {
+  // An approved revision is pinned by the database and keeps its project; the rest go.
+  for (const id of projectsMade) await db("projects").where({ id }).delete().catch(() => undefined);
+});
+
+async function viaRoute(useCase: UseCase, id: string, fields: Fields): Promise<Outcome> {
+  const response = await useCase.route(jsonRequest(useCase.method, "/x", fields), params(useCase.idName ? { [useCase.idName]: id } : {}));
+  const json = await response.json();
+  if (json.project?.id) projectsMade.push(json.project.id);
+  if (response.status === 200 || response.status === 201) return "done";
+  if (response.status === 422) return `invalid:${json.errors.map((e: { path: string }) => e.path).sort().join(",")}`;
+  if (response.status === 409) return `refused:${json.errors[0].message}`;
+  return ({ 401: "signed-out", 403: "forbidden", 404: "not-found" } as Record<number, string>)[response.status] ?? `status ${response.status}`;
+}
+
+async function viaAction(useCase: UseCase, id: string, fields: Fields): Promise<Outcome> {
+  const outcome = await outcomeOf(() => useCase.action({}, toFormData(useCase.idName ? { ...fields, [useCase.idName]: id } : fields)));
+  if (outcome.kind === "redirect") {
+    if (outcome.location.startsWith("/login")) return "signed-out";
+    const made = outcome.location.match(/^\/projects\/([0-9a-f-]{36})$/);
+    if (made && useCase === USE_CASES.createProject) projectsMade.push(made[1]);
+    return "done";
+  }
+  if (outcome.kind === "status") return ({ 403: "forbidden", 404: "not-found" } as Record<number, string>)[outcome.status] ?? `status ${outcome.status}`;
+  const state = outcome.value as { ok?: boolean; message?: string; fieldErrors?: Record<string, string[]> };
+  if (state.ok) return "done";
+  if (state.fieldErrors) return `invalid:${Object.keys(state.fieldErrors).sort().join(",")}`;
+  return `refused:${state.message}`;
+}
+
+describe("each API route and its server action give the same outcome", () => {
+  it.each(CASES.map((c) => ({ ...c, label: `${USE_CASES[c.useCase].name} as ${c.who ?? "nobody"} → ${c.expected}` })))("$label", async (c) => {
+    engineerId ||= await userId(ENGINEER);
+    installerId ||= await userId(INSTALLER);
+    const useCase = USE_CASES[c.useCase];
+    const outcomes: Outcome[] = [];
+    for (const door of [viaRoute, viaAction]) {
+      const id = c.id ?? (await useCase.setup());
+      await actAs(c.who);
+      outcomes.push(await door(useCase, id, c.fields()));
+    }
+    expect(outcomes).toEqual([c.expected, c.expected]);
+  });
+
+  it("a conflict is refused with the same words by both", async () => {
+    const outcomes: Outcome[] = [];
+    for (const door of [viaRoute, viaAction]) {
+      const id = await USE_CASES.decide.setup();
+      await db("revisions").where({ id }).update({ status: "changes_requested" });
+      await actAs(ENGINEER);
+      outcomes.push(await door(USE_CASES.decide, id, { decision: "approve", password: DEMO_PASSWORD }));
+    }
+    expect(outcomes[0]).toMatch(/^refused:Only a revision in review can be decided/);
+    expect(outcomes[1]).toBe(outcomes[0]);
+  });
+});
