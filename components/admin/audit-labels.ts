@@ -7,8 +7,9 @@ import { ROLE_LABELS, type Role } from "@/db/roles";
 export const AUDIT_ACTION_LABELS: Record<string, string> = {
   "sign-in": "Signed in",
   "sign-out": "Signed out",
-  "sign-out-everywhere": "Signed out on every device",
+  "signed-out-everywhere": "Signed out on every device",
   "sign-in-failed": "Failed sign-in",
+  "sign-in-attack-warned": "Warned the owner of many failed sign-ins",
   "sign-up": "Created the organisation",
   "invitation-sent": "Sent an invitation",
   "invitation-revoked": "Cancelled an invitation",
