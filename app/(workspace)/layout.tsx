@@ -19,6 +19,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
             <Link href="/projects" className="hover:text-accent-700">Projects</Link>
             <Link href="/criteria" className="hover:text-accent-700">Criteria</Link>
             <Link href="/reviews" className="hover:text-accent-700">Reviews</Link>
+            {user?.roles.includes("engineer") ? <Link href="/queue" className="hover:text-accent-700">Review queue</Link> : null}
             <Link href="/field" className="hover:text-accent-700">Field specs</Link>
             {user?.roles.includes("admin") ? <Link href="/admin/members" className="hover:text-accent-700">Members</Link> : null}
           </nav>

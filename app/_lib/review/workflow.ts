@@ -1,5 +1,5 @@
 import { randomBytes } from "node:crypto";
-import { assertOwned, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwned, assertOwnedOrEngaged, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
 import { deliverSoon, enqueueMail } from "@/app/_lib/outbox";
@@ -7,6 +7,7 @@ import { db } from "@/db/client";
 import { STATUS_PHRASES } from "@/db/revision-status";
 import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
+import { engagedEngineers } from "@/db/queries/engagements";
 import {
   designAuthorIds, factsOf, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
@@ -19,9 +20,22 @@ import type { ReviewBody } from "./schemas";
 
 const invalid = ValidationError.field;
 
-/** Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). */
-export async function ownedRevision(user: CurrentUser, revisionId: string): Promise<RevisionContext> {
-  return assertOwned(user, await getRevisionContext(revisionId), "That revision");
+/**
+ * Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). With
+ * `{ engaged: true }` an outside engineer engaged on its project may load it too (reads, review).
+ */
+export async function ownedRevision(user: CurrentUser, revisionId: string, reach: { engaged?: boolean } = {}): Promise<RevisionContext> {
+  const revision = await getRevisionContext(revisionId);
+  if (reach.engaged) return assertOwnedOrEngaged(user, revision, (r) => ({ projectId: r.projectId }), "That revision");
+  return assertOwned(user, revision, "That revision");
+}
+
+/** A member engineer of the organisation, or an outside engineer with an accepted engagement on the project. */
+async function chosenEngineer(organisationId: string, projectId: string, engineerId: string) {
+  const member = await activeMember(organisationId, engineerId);
+  if (member) return member.roles.includes("engineer") ? member : undefined;
+  const engaged = (await engagedEngineers(projectId)).find((e) => e.userId === engineerId);
+  return engaged ? { ...engaged, roles: ["engineer" as const] } : undefined;
 }
 
 export function reviewUrl(revisionId: string): string {
@@ -35,8 +49,8 @@ export function reviewUrl(revisionId: string): string {
  */
 export async function submitRevision(user: CurrentUser, revision: RevisionContext, engineerId: string): Promise<{ reviewId: string }> {
   const revisionId = revision.id;
-  const engineer = await activeMember(user.organisationId, engineerId);
-  if (!engineer || !engineer.roles.includes("engineer")) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation");
+  const engineer = await chosenEngineer(user.organisationId, revision.projectId, engineerId);
+  if (!engineer) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation or engaged on this project");
   if (engineer.userId === user.userId) throw invalid("engineerId", "Choose another engineer: nobody can review their own design");
   if ((await designAuthorIds(revision.designId)).includes(engineer.userId)) {
     throw invalid("engineerId", `${engineer.name} authored a revision of this design and cannot review it; choose another engineer`);
@@ -106,6 +120,10 @@ export async function decideRevision(
     if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
     if (!open) throw new ConflictError("This revision has no open review to decide.");
+    // An outside engineer decides only what was submitted to them.
+    if (revision.organisationId !== user.organisationId && open.engineerId !== user.userId) {
+      throw new AccessError(403, "This revision was submitted to another engineer; only they can decide it.", true);
+    }
     await recordDecision(trx, open.id, {
       decision: body.decision === "approve" ? "approve" : "request_changes",
       decidedBy: user.userId,
@@ -117,13 +135,14 @@ export async function decideRevision(
       approval: approving ? { overrides, facts: factsOf(revision), verifyCode: randomBytes(16).toString("base64url") } : undefined,
     });
     await setRevisionStatus(trx, revisionId, ["in_review"], to);
-    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId }, trx);
+    // The contractor's audit log holds the decision, also when an outside engineer made it.
+    await recordAudit({ organisationId: revision.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId }, trx);
     // The decision, its audit event and the designer's e-mail commit together.
     const designer = await userEmailAndName(open.submittedBy);
     if (!designer) return [];
     const words = to === "approved" ? "approved" : "sent back with changes requested";
     return [await enqueueMail(trx, {
-      organisationId: user.organisationId,
+      organisationId: revision.organisationId,
       to: designer.email,
       subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
       text: [
