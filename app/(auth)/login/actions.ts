@@ -7,11 +7,11 @@ import { safeNext } from "@/app/_lib/safe-next";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
 import { findSignInRoles } from "@/db/queries/users";
+import { homeFor } from "@/components/ui/role-navigation";
 
-/** Where a sign-in with no `next` lands: a reviewing engineer who does not design lands on their review queue. */
+/** Where a sign-in with no `next` lands: each role's own home (components/ui/role-navigation.ts). */
 async function landing(userId: string): Promise<string> {
-  const roles = await findSignInRoles(userId);
-  return roles.includes("engineer") && !roles.includes("designer") ? "/queue" : "/projects";
+  return homeFor(await findSignInRoles(userId));
 }
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
