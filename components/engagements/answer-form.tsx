@@ -2,11 +2,13 @@
 
 import { useActionState } from "react";
 import { FormStatus, type ActionState } from "@/components/ui/form";
-import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
+
+/** The server action that answers an engagement; the route that owns it passes it in (components import nothing from app/). */
+export type AnswerEngagementAction = (prev: ActionState, form: FormData) => Promise<ActionState>;
 
 /** Accept and decline buttons for one engagement, used on the e-mailed link's page and in the queue. */
-export function AnswerForm({ engagementId, returnTo, project }: { engagementId: string; returnTo: string; project: string }) {
-  const [state, action] = useActionState<ActionState, FormData>(answerEngagementAction, {});
+export function AnswerForm({ engagementId, returnTo, project, answerAction }: { engagementId: string; returnTo: string; project: string; answerAction: AnswerEngagementAction }) {
+  const [state, action] = useActionState<ActionState, FormData>(answerAction, {});
   if (state.ok) return <p role="status" className="text-sm font-medium">{state.message}</p>;
   return (
     <form action={action} className="flex flex-wrap items-center gap-2">

@@ -1,6 +1,6 @@
 import type { Knex } from "knex";
 import crypto from "node:crypto";
-import { hashPassword } from "../../app/_lib/password";
+import { hashPassword } from "../password";
 import { DEMO_ORG_ID, DEMO_PASSWORD } from "./01_demo_accounts";
 import { designInputSchema, ENGINE_VERSION, sizeParsedDesign } from "../../engine";
 import { createRevision } from "../queries/revisions";

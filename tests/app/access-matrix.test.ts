@@ -40,7 +40,8 @@ const MATRIX: MatrixRow[] = [
   },
   { file: "app/api/session/route.ts", name: "DELETE", expect: everyone(200) },
   {
-    file: "app/(auth)/login/actions.ts", name: "signInAction", expect: everyone("→/projects"),
+    // Signs in the demo installer, whose home is the field specs (components/ui/role-navigation.ts).
+    file: "app/(auth)/login/actions.ts", name: "signInAction", expect: everyone("→/field"),
     setup: async () => ({ args: formArgs({ email: CALLERS.installer, password: DEMO_PASSWORD, next: "" }) }),
   },
   { file: "app/(auth)/login/actions.ts", name: "signOutAction", expect: everyone(SIGN_IN), setup: async () => ({ args: [] }) },

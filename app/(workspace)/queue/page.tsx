@@ -3,6 +3,7 @@ import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { AnswerForm } from "@/components/engagements/answer-form";
+import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
 import { Caution } from "@/components/ui/caution";
 import { engagementsOfPerson } from "@/db/queries/engagements";
 import { engineerQueue, queueContractors, type QueueState } from "@/db/queries/engineer-queue";
@@ -38,7 +39,7 @@ export default async function QueuePage({ searchParams }: { searchParams: Promis
         <section aria-labelledby="invites-h" className="mt-4 rounded-lg border border-amber-300 bg-amber-50 p-3 text-sm">
           <h2 id="invites-h" className="font-semibold">Engagements waiting for your answer</h2>
           <ul className="mt-1 space-y-1">
-            {invited.map((e) => <li key={e.id} className="flex flex-wrap items-center gap-x-3 gap-y-1"><span>{e.organisationName}: {e.projectName} ({e.projectState})</span><AnswerForm engagementId={e.id} returnTo="/queue" project={e.projectName} /></li>)}
+            {invited.map((e) => <li key={e.id} className="flex flex-wrap items-center gap-x-3 gap-y-1"><span>{e.organisationName}: {e.projectName} ({e.projectState})</span><AnswerForm engagementId={e.id} returnTo="/queue" project={e.projectName} answerAction={answerEngagementAction} /></li>)}
           </ul>
         </section>
       ) : null}

@@ -4,6 +4,7 @@ import { currentUser } from "@/app/_lib/auth";
 import { canAccept } from "@/app/_lib/engagements/service";
 import { hashToken } from "@/app/_lib/tokens";
 import { AnswerForm } from "@/components/engagements/answer-form";
+import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
 import { findEngagementByToken } from "@/db/queries/engagements";
 import { findUserByEmail } from "@/db/queries/users";
 import { EngineerSignUpForm } from "./_components/engineer-signup-form";
@@ -57,7 +58,7 @@ export default async function EngagementPage({ params }: { params: Promise<{ tok
         <div className="mt-6 space-y-3 rounded-lg border border-slate-200 bg-white p-5">
           <p className="text-sm">Accepting lets you read this project only (designs, revisions, uploads, reports) and review what {engagement.organisationName} submits to you. They can end it at any time.</p>
           {standing.ok ? null : <p role="alert" className="text-sm text-amber-900">{standing.message} <Link href="/account" className="underline">Open your account</Link>.</p>}
-          <AnswerForm engagementId={engagement.id} returnTo={path} project={engagement.projectName} />
+          <AnswerForm engagementId={engagement.id} returnTo={path} project={engagement.projectName} answerAction={answerEngagementAction} />
         </div>
       </>
     );
