@@ -3,6 +3,7 @@ import { currentUser } from "@/app/_lib/auth";
 import { signOutAction } from "@/app/(auth)/login/actions";
 import { Brand } from "@/components/ui/brand";
 import { ROLE_LABELS } from "@/db/roles";
+import { homeFor, menuFor } from "@/components/ui/role-navigation";
 
 /**
  * The signed-in shell. It shows who is signed in but makes no access decision: every page below
@@ -14,13 +15,9 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
     <div className="min-h-screen">
       <header className="no-print border-b border-slate-200 bg-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
-          <Brand href="/projects" />
+          <Brand href={homeFor(user?.roles ?? [])} />
           <nav aria-label="Main" className="flex flex-wrap gap-4 text-sm">
-            <Link href="/projects" className="hover:text-accent-700">Projects</Link>
-            <Link href="/criteria" className="hover:text-accent-700">Criteria</Link>
-            <Link href="/reviews" className="hover:text-accent-700">Reviews</Link>
-            <Link href="/field" className="hover:text-accent-700">Field specs</Link>
-            {user?.roles.includes("admin") ? <Link href="/admin/members" className="hover:text-accent-700">Members</Link> : null}
+            {menuFor(user?.roles ?? []).map((link) => <Link key={link.href} href={link.href} className="hover:text-accent-700">{link.label}</Link>)}
           </nav>
           {user ? (
             <div className="ml-auto flex items-center gap-3 text-sm">

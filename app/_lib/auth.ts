@@ -1,4 +1,5 @@
 import { cache } from "react";
+import { hasAcceptedEngagement, type ProjectScope } from "@/db/queries/engagements";
 import { findActiveMember, type MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
@@ -56,4 +57,29 @@ export async function requireRole(...roles: Role[]): Promise<CurrentUser> {
 export function assertOwned<T extends { organisationId: string }>(user: CurrentUser, record: T | undefined, what = "That record"): T {
   if (!record || record.organisationId !== user.organisationId) throw new AccessError(404, `${what} was not found.`);
   return record;
+}
+
+/**
+ * Like `assertOwned`, but an outside reviewing engineer with an accepted engagement on the record's
+ * project passes too. The project is found from the record itself (never from the URL), and the
+ * engagement must be given by the record's own organisation, so an engineer engaged by two
+ * contractors cannot reach one's data through the other's ids. Only reads and the engineer's own
+ * review work (decide, clear a hold) call this; every other check stays `assertOwned`, so the rest
+ * of the contractor's data answers 404 to them. Still who → whose → which role: callers check the
+ * role after this.
+ */
+export async function assertOwnedOrEngaged<T extends { organisationId: string }>(
+  user: CurrentUser,
+  record: T | undefined,
+  scope: (record: T) => ProjectScope,
+  what = "That record",
+): Promise<T> {
+  if (record && record.organisationId === user.organisationId) return record;
+  if (record && (await hasAcceptedEngagement(user.userId, record.organisationId, scope(record)))) return record;
+  throw new AccessError(404, `${what} was not found.`);
+}
+
+/** True when the user reaches this organisation's record as an engaged outside engineer, not as a member. */
+export function isOutsider(user: CurrentUser, record: { organisationId: string }): boolean {
+  return record.organisationId !== user.organisationId;
 }

@@ -4,7 +4,7 @@ import { getDesign, type Design } from "@/db/queries/designs";
 import { getProject, type Project } from "@/db/queries/projects";
 import { createRevision, getRevision, StaleRevisionError, type Revision } from "@/db/queries/revisions";
 import { isUuid } from "@/db/ids";
-import { assertOwned, assertRole, type CurrentUser } from "./auth";
+import { assertOwned, assertOwnedOrEngaged, assertRole, type CurrentUser } from "./auth";
 import { ConflictError, ValidationError } from "./errors";
 
 /**
@@ -13,21 +13,41 @@ import { ConflictError, ValidationError } from "./errors";
  */
 export type DesignRevision = Revision<DesignInput, DesignResult>;
 
-export async function projectFor(user: CurrentUser, id: string): Promise<Project> {
-  return assertOwned(user, isUuid(id) ? await getProject(id) : undefined, "That project");
+/**
+ * `{ engaged: true }` opens a read (or the engineer's review work) to an outside engineer engaged on
+ * the project (app/_lib/auth.ts assertOwnedOrEngaged); without it only members pass.
+ */
+export interface Reach {
+  engaged?: boolean;
 }
 
-export async function designFor(user: CurrentUser, id: string): Promise<Design> {
-  return assertOwned(user, isUuid(id) ? await getDesign(id) : undefined, "That design");
+export async function projectFor(user: CurrentUser, id: string, reach: Reach = {}): Promise<Project> {
+  const project = isUuid(id) ? await getProject(id) : undefined;
+  if (reach.engaged) return assertOwnedOrEngaged(user, project, (p) => ({ projectId: p.id }), "That project");
+  return assertOwned(user, project, "That project");
 }
 
-export async function revisionFor(user: CurrentUser, id: string): Promise<DesignRevision> {
-  return assertOwned(user, isUuid(id) ? await getRevision<DesignInput, DesignResult>(id) : undefined, "That revision");
+export async function designFor(user: CurrentUser, id: string, reach: Reach = {}): Promise<Design> {
+  const design = isUuid(id) ? await getDesign(id) : undefined;
+  if (reach.engaged) return assertOwnedOrEngaged(user, design, (d) => ({ projectId: d.projectId }), "That design");
+  return assertOwned(user, design, "That design");
 }
 
-export async function cardFor(user: CurrentUser, id: string | null): Promise<CriteriaCard | null> {
+export async function revisionFor(user: CurrentUser, id: string, reach: Reach = {}): Promise<DesignRevision> {
+  const revision = isUuid(id) ? await getRevision<DesignInput, DesignResult>(id) : undefined;
+  if (reach.engaged) return assertOwnedOrEngaged(user, revision, (r) => ({ revisionId: r.id }), "That revision");
+  return assertOwned(user, revision, "That revision");
+}
+
+/**
+ * A criteria card. An engaged engineer sees only the card the project they reached uses (pass that
+ * project as `via`); every other card of the contractor stays 404 to them.
+ */
+export async function cardFor(user: CurrentUser, id: string | null, via?: Project): Promise<CriteriaCard | null> {
   if (!id) return null;
-  return assertOwned(user, isUuid(id) ? await getCriteriaCard(id) : undefined, "That criteria card");
+  const card = isUuid(id) ? await getCriteriaCard(id) : undefined;
+  if (via && card && via.criteriaCardId === card.id && via.organisationId === card.organisationId) return card;
+  return assertOwned(user, card, "That criteria card");
 }
 
 /** Designers and admins write; engineers and installers of the organisation read. */

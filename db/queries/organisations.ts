@@ -35,3 +35,8 @@ export async function createOrganisationWithAdmin(input: {
     throw error;
   }
 }
+
+/** An organisation's name (e.g. the contractor an outside engineer reviews for). */
+export async function organisationName(id: string): Promise<string | undefined> {
+  return (await db("organisations").where({ id }).first("name"))?.name;
+}

@@ -1,4 +1,5 @@
 import { db } from "../client";
+import { acceptedProjectIds } from "./engagements";
 import { likePattern, listPage, type ListPage, type ListQuery } from "./list-page";
 import { isUuid } from "../ids";
 
@@ -28,6 +29,8 @@ export interface ProjectRow {
   jurisdiction: string | null;
   designCount: number;
   updatedAt: string;
+  /** The contractor's name: the caller's own organisation, or the one that engaged them on this project. */
+  organisationName: string;
 }
 
 const columns = [
@@ -45,10 +48,15 @@ export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "
 /**
  * One page of the organisation's projects with their criteria card and design count. The design
  * count is a column kept by a trigger (so sorting by it reads no designs); `q` goes through the
- * trigram index over name, address and state, and matches a criteria card through its id.
+ * trigram index over name, address and state, and matches a criteria card through its id. With
+ * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside engineer).
  */
-export async function listProjects(organisationId: string, query: ListQuery): Promise<ListPage<ProjectRow>> {
-  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").where("p.organisation_id", organisationId);
+export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string): Promise<ListPage<ProjectRow>> {
+  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").join("organisations as o", "o.id", "p.organisation_id")
+    .where((w) => {
+      w.where("p.organisation_id", organisationId);
+      if (engagedUserId) w.orWhereIn("p.id", acceptedProjectIds(engagedUserId));
+    });
   // Cards whose jurisdiction matches, looked up first (a few rows, trigram index): projects then
   // match by card id through their own index, which the planner can OR with the trigram index.
   const q = (query.q ?? "").trim().slice(0, 200);
@@ -66,7 +74,7 @@ export async function listProjects(organisationId: string, query: ListQuery): Pr
       w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
         .orWhereIn("p.criteria_card_id", cardIds),
     select: (qb) =>
-      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "p.design_count as designCount"),
+      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount"),
   });
   return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
 }

@@ -50,3 +50,9 @@ export async function findSignInCandidate(email: string) {
 export async function findUserByEmail(email: string): Promise<{ id: string; name: string; email: string; passwordHash: string } | undefined> {
   return db("users").where("email", email.trim().toLowerCase()).first("id", "name", "email", "password_hash as passwordHash");
 }
+
+/** The roles of the membership sign-in picks (the first active one), to choose where the person lands. */
+export async function findSignInRoles(userId: string): Promise<Role[]> {
+  const row = await db("memberships").where({ user_id: userId }).whereNull("deactivated_at").orderBy("created_at", "asc").first("roles");
+  return row ? parseRoles(row.roles) : [];
+}

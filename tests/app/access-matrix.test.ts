@@ -10,7 +10,7 @@
  * `Expected` in tests/support/access-matrix.ts; `only({ admin: 200 })` means admin succeeds, other
  * demo members get 403, the other organisation 404, nobody 401 (pass `{ nobody: SIGN_IN }` for actions).
  */
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 import crypto from "node:crypto";
@@ -21,11 +21,12 @@ import { freshInvitation, freshMember, freshReset, uniqueEmail, userId } from ".
 import { DEMO_CARD_ID, DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 import { defaultDesignInput } from "@/engine";
 import { demoInput, freshDesign, freshFile, freshProject } from "../support/project-fixtures";
+import { ENGAGED_MATRIX, OUTSIDE, engagementRows, setUpOutsideCast } from "../support/engagement-matrix";
 
 /** Members of the owning organisation who may read projects, designs, revisions and uploads. */
 const READERS = (status: 200) => ({ admin: status, designer: status, engineer: status, installer: status } as const);
 
-const MEMBERS = { admin: 200, designer: 200, engineer: 200, installer: 200, other: 200, nobody: 401 } as const;
+const MEMBERS = { admin: 200, designer: 200, engineer: 200, installer: 200, other: 200, nobody: 401, engaged: 200, revoked: 200, unengaged: 200 } as const;
 
 const MATRIX: MatrixRow[] = [
   // ── foundation ───────────────────────────────────────────────────────────────────────────────
@@ -39,7 +40,8 @@ const MATRIX: MatrixRow[] = [
   },
   { file: "app/api/session/route.ts", name: "DELETE", expect: everyone(200) },
   {
-    file: "app/(auth)/login/actions.ts", name: "signInAction", expect: everyone("→/projects"),
+    // Signs in the demo installer, whose home is the field specs (components/ui/role-navigation.ts).
+    file: "app/(auth)/login/actions.ts", name: "signInAction", expect: everyone("→/field"),
     setup: async () => ({ args: formArgs({ email: CALLERS.installer, password: DEMO_PASSWORD, next: "" }) }),
   },
   { file: "app/(auth)/login/actions.ts", name: "signOutAction", expect: everyone(SIGN_IN), setup: async () => ({ args: [] }) },
@@ -87,13 +89,13 @@ const MATRIX: MatrixRow[] = [
 
   // ── engineer licences (issue 4): each engineer's own; nobody else's to touch ─────────────────
   {
-    file: "app/(workspace)/account/actions.ts", name: "saveLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN }),
+    file: "app/(workspace)/account/actions.ts", name: "saveLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN, outside: 200 }),
     setup: async () => ({ args: formArgs({ state: "WY", licenceNumber: "PE-MATRIX-1", expiresOn: "2031-06-30" }) }),
   },
   {
-    file: "app/(workspace)/account/actions.ts", name: "removeLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN }),
-    setup: async () => {
-      const engineer = await userId(CALLERS.engineer);
+    file: "app/(workspace)/account/actions.ts", name: "removeLicenceAction", expect: only({ engineer: 200 }, { other: 403, nobody: SIGN_IN, outside: 200 }),
+    setup: async (who) => {
+      const engineer = await userId(CALLERS[who === "engaged" || who === "revoked" || who === "unengaged" ? who : "engineer"]!);
       await db("engineer_licences").insert({ user_id: engineer, state: "NM", licence_number: "PE-MATRIX-2", expires_on: "2031-06-30" }).onConflict(["user_id", "state"]).ignore();
       return { args: formArgs({ state: "NM" }) };
     },
@@ -167,7 +169,11 @@ const MATRIX: MatrixRow[] = [
     file: "app/(workspace)/field/[revisionId]/actions.ts", name: "tickChecklistAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
     setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, itemKey: "utility-locate", ticked: "true" }) }),
   },
+  // ── outside reviewing engineers (issue 14); the contractor's projects here are ones they are not engaged on ──
+  ...engagementRows,
 ];
+
+beforeAll(setUpOutsideCast);
 
 afterAll(async () => {
   await db("sign_in_failures").delete();
@@ -191,6 +197,21 @@ describe("access matrix", () => {
         it(`as ${who} → ${row.expect[who]}`, async () => {
           const { outcome, detail } = await callAs(row, who);
           expect(outcome, `${row.file} ${row.name} as ${who}: ${detail}`).toBe(row.expect[who]);
+        });
+      }
+    });
+  }
+});
+
+// The same routes and actions aimed at the project the outside engineer is engaged on (for `revoked`, the
+// project their engagement on was revoked): reads and their own review work open, everything else 404.
+describe("access matrix: targets on the engaged project", () => {
+  for (const row of ENGAGED_MATRIX) {
+    describe(`${row.file} ${row.name}`, () => {
+      for (const who of OUTSIDE) {
+        it(`as ${who} → ${row.expect[who]}`, async () => {
+          const { outcome, detail } = await callAs(row, who);
+          expect(outcome, `${row.file} ${row.name} as ${who} (engaged target): ${detail}`).toBe(row.expect[who]);
         });
       }
     });

@@ -22,6 +22,11 @@ export const CALLERS = {
   installer: "installer@demo.pierwise.test",
   other: "designer@other.pierwise.test", // admin + designer of the other organisation
   nobody: null,
+  // Outside reviewing engineers (admin + engineer of their own firm): engaged and accepted on one demo
+  // project (the seeded Aspen Hollow), engaged then revoked, never engaged (tests/support/engagement-fixtures.ts).
+  engaged: "engineer@outside.pierwise.test",
+  revoked: "revoked@outside.pierwise.test",
+  unengaged: "unengaged@outside.pierwise.test",
 } as const;
 export type Who = keyof typeof CALLERS;
 export const WHO = Object.keys(CALLERS) as Who[];
@@ -56,9 +61,14 @@ export interface MatrixRow {
  * Expectations where only some callers succeed: members of the owning organisation without the role
  * get `member` (403), the other organisation's member gets `other` (404), nobody gets `nobody`.
  */
-export function only(allowed: Partial<Record<Who, Expected>>, rest: { member?: Expected; other?: Expected; nobody?: Expected } = {}): Record<Who, Expected> {
+export function only(allowed: Partial<Record<Who, Expected>>, rest: { member?: Expected; other?: Expected; nobody?: Expected; outside?: Expected } = {}): Record<Who, Expected> {
   const member = rest.member ?? 403;
+  // Outside engineers are another organisation to the contractor: like `other` unless a row says otherwise.
+  const outside = rest.outside ?? allowed.other ?? rest.other ?? 404;
   return {
+    engaged: allowed.engaged ?? outside,
+    revoked: allowed.revoked ?? outside,
+    unengaged: allowed.unengaged ?? outside,
     admin: allowed.admin ?? member,
     designer: allowed.designer ?? member,
     engineer: allowed.engineer ?? member,
@@ -70,7 +80,7 @@ export function only(allowed: Partial<Record<Who, Expected>>, rest: { member?: E
 
 /** The same outcome for every caller (public routes and actions). */
 export function everyone(outcome: Expected): Record<Who, Expected> {
-  return { admin: outcome, designer: outcome, engineer: outcome, installer: outcome, other: outcome, nobody: outcome };
+  return { admin: outcome, designer: outcome, engineer: outcome, installer: outcome, other: outcome, nobody: outcome, engaged: outcome, revoked: outcome, unengaged: outcome };
 }
 
 /** `[prevState, formData]`, the arguments React's useActionState passes to an action. */
@@ -106,7 +116,7 @@ export async function discoverEndpoints(): Promise<{ file: string; name: string 
 }
 
 /** Runs one row as one caller and reads its outcome in the vocabulary of `Expected`. */
-export async function callAs(row: MatrixRow, who: Who): Promise<{ outcome: Expected | string; detail: string }> {
+export async function callAs(row: Omit<MatrixRow, "expect">, who: Who): Promise<{ outcome: Expected | string; detail: string }> {
   const call = (await row.setup?.(who)) ?? {};
   await actAs(CALLERS[who]);
   const mod = (await import(path.join(ROOT, row.file))) as Record<string, (...args: unknown[]) => Promise<unknown>>;

@@ -6,6 +6,13 @@ import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { safeNext } from "@/app/_lib/safe-next";
 import { signInSchema } from "@/app/_lib/schemas/account";
 import { signIn, signOut } from "@/app/_lib/sign-in";
+import { findSignInRoles } from "@/db/queries/users";
+import { homeFor } from "@/components/ui/role-navigation";
+
+/** Where a sign-in with no `next` lands: each role's own home (components/ui/role-navigation.ts). */
+async function landing(userId: string): Promise<string> {
+  return homeFor(await findSignInRoles(userId));
+}
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const parsed = signInSchema.safeParse({ email: form.get("email"), password: form.get("password") });
@@ -13,7 +20,8 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
   if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   const outcome = await signIn(parsed.data);
   if (!outcome.ok) return { message: outcome.message, values };
-  redirect(safeNext(form.get("next")));
+  const next = form.get("next");
+  redirect(typeof next === "string" && next ? safeNext(next) : await landing(outcome.userId));
 }
 
 export async function signOutAction(): Promise<void> {

@@ -11,7 +11,8 @@ export const metadata: Metadata = { title: "Projects" };
 
 export default async function ProjectsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/projects");
-  const page = await listProjects(user.organisationId, listQueryLenient(await searchParams));
+  const page = await listProjects(user.organisationId, listQueryLenient(await searchParams), user.userId);
+  const showContractor = page.rows.some((r) => r.organisationName !== user.organisationName);
   return (
     <>
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -24,7 +25,7 @@ export default async function ProjectsPage({ searchParams }: { searchParams: Pro
         ) : null}
       </div>
       <div className="mt-4">
-        <ProjectsTable page={page} timeZone={user.timeZone} />
+        <ProjectsTable page={page} timeZone={user.timeZone} showContractor={showContractor} />
       </div>
       <Caution compact className="mt-6" />
     </>

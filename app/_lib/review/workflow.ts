@@ -1,12 +1,13 @@
 import { randomBytes } from "node:crypto";
-import { assertOwned, type CurrentUser } from "@/app/_lib/auth";
+import { assertOwned, assertOwnedOrEngaged, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
-import { sendMail } from "@/app/_lib/mail";
+import { deliverSoon, enqueueMail } from "@/app/_lib/outbox";
 import { db } from "@/db/client";
 import { STATUS_PHRASES } from "@/db/revision-status";
 import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
+import { engagedEngineers } from "@/db/queries/engagements";
 import {
   designAuthorIds, factsOf, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
@@ -20,9 +21,22 @@ import type { ReviewBody } from "./schemas";
 
 const invalid = ValidationError.field;
 
-/** Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). */
-export async function ownedRevision(user: CurrentUser, revisionId: string): Promise<RevisionContext> {
-  return assertOwned(user, await getRevisionContext(revisionId), "That revision");
+/**
+ * Loads a revision the user's organisation owns (404 otherwise, so ids cannot be probed). With
+ * `{ engaged: true }` an outside engineer engaged on its project may load it too (reads, review).
+ */
+export async function ownedRevision(user: CurrentUser, revisionId: string, reach: { engaged?: boolean } = {}): Promise<RevisionContext> {
+  const revision = await getRevisionContext(revisionId);
+  if (reach.engaged) return assertOwnedOrEngaged(user, revision, (r) => ({ projectId: r.projectId }), "That revision");
+  return assertOwned(user, revision, "That revision");
+}
+
+/** A member engineer of the organisation, or an outside engineer with an accepted engagement on the project. */
+async function chosenEngineer(organisationId: string, projectId: string, engineerId: string) {
+  const member = await activeMember(organisationId, engineerId);
+  if (member) return member.roles.includes("engineer") ? member : undefined;
+  const engaged = (await engagedEngineers(projectId)).find((e) => e.userId === engineerId);
+  return engaged ? { ...engaged, roles: ["engineer" as const] } : undefined;
 }
 
 export function reviewUrl(revisionId: string): string {
@@ -36,8 +50,8 @@ export function reviewUrl(revisionId: string): string {
  */
 export async function submitRevision(user: CurrentUser, revision: RevisionContext, engineerId: string): Promise<{ reviewId: string }> {
   const revisionId = revision.id;
-  const engineer = await activeMember(user.organisationId, engineerId);
-  if (!engineer || !engineer.roles.includes("engineer")) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation");
+  const engineer = await chosenEngineer(user.organisationId, revision.projectId, engineerId);
+  if (!engineer) throw invalid("engineerId", "Choose a reviewing engineer who is an active member of your organisation or engaged on this project");
   if (engineer.userId === user.userId) throw invalid("engineerId", "Choose another engineer: nobody can review their own design");
   if ((await designAuthorIds(revision.designId)).includes(engineer.userId)) {
     throw invalid("engineerId", `${engineer.name} authored a revision of this design and cannot review it; choose another engineer`);
@@ -45,7 +59,8 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
   const eligible = await engineerEligibility(engineer.userId, engineer.name, revision.projectState);
   if (!eligible.ok) throw invalid("engineerId", eligible.message);
 
-  const reviewId = await db.transaction(async (trx) => {
+  // The state change, its audit event and its e-mail commit together; the mail goes out after commit.
+  const { reviewId, mailId } = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "draft" && status !== "changes_requested") {
       throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
@@ -53,20 +68,23 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
     const latest = await latestRevisionNumber(revision.designId, trx);
     if (latest !== revision.number) throw new ConflictError(`Revision ${revision.number} is not the newest (revision ${latest} is); submit the newest revision.`);
     await setRevisionStatus(trx, revisionId, ["draft", "changes_requested"], "in_review");
-    return insertReview(trx, { revisionId, organisationId: user.organisationId, engineerId: engineer.userId, submittedBy: user.userId });
+    const reviewId = await insertReview(trx, { revisionId, organisationId: user.organisationId, engineerId: engineer.userId, submittedBy: user.userId });
+    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "revision-submitted", subject: revisionId, detail: { engineerId } }, trx);
+    const mailId = await enqueueMail(trx, {
+      organisationId: user.organisationId,
+      to: engineer.email,
+      subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
+      text: [
+        `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
+        "",
+        `Open the review: ${reviewUrl(revisionId)}`,
+        "",
+        "You can approve it or request changes with comments pinned to the inputs.",
+      ].join("\n"),
+    });
+    return { reviewId, mailId };
   });
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "revision-submitted", subject: revisionId, detail: { engineerId } });
-  await sendMail({
-    to: engineer.email,
-    subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
-    text: [
-      `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
-      "",
-      `Open the review: ${reviewUrl(revisionId)}`,
-      "",
-      "You can approve it or request changes with comments pinned to the inputs.",
-    ].join("\n"),
-  });
+  await deliverSoon([mailId]);
   return { reviewId };
 }
 
@@ -98,11 +116,15 @@ export async function decideRevision(
   if (approving) await confirmSignature(user, body.password);
 
   const to = body.decision === "approve" ? "approved" : "changes_requested";
-  const submittedBy = await db.transaction(async (trx) => {
+  const mailIds = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
     if (!open) throw new ConflictError("This revision has no open review to decide.");
+    // An outside engineer decides only what was submitted to them.
+    if (revision.organisationId !== user.organisationId && open.engineerId !== user.userId) {
+      throw new AccessError(403, "This revision was submitted to another engineer; only they can decide it.", true);
+    }
     await recordDecision(trx, open.id, {
       decision: body.decision === "approve" ? "approve" : "request_changes",
       decidedBy: user.userId,
@@ -114,13 +136,14 @@ export async function decideRevision(
       approval: approving ? { overrides, facts: factsOf(revision), verifyCode: randomBytes(16).toString("base64url") } : undefined,
     });
     await setRevisionStatus(trx, revisionId, ["in_review"], to);
-    return open.submittedBy;
-  });
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId });
-  const designer = await userEmailAndName(submittedBy);
-  if (designer) {
+    // The contractor's audit log holds the decision, also when an outside engineer made it.
+    await recordAudit({ organisationId: revision.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId }, trx);
+    // The decision, its audit event and the designer's e-mail commit together.
+    const designer = await userEmailAndName(open.submittedBy);
+    if (!designer) return [];
     const words = to === "approved" ? "approved" : "sent back with changes requested";
-    await sendMail({
+    return [await enqueueMail(trx, {
+      organisationId: revision.organisationId,
       to: designer.email,
       subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
       text: [
@@ -131,8 +154,9 @@ export async function decideRevision(
         `Open the review: ${reviewUrl(revisionId)}`,
         ...(to === "approved" ? [`Field spec for the crew: ${env.appUrl}/field/${revisionId}`] : []),
       ].join("\n"),
-    });
-  }
+    })];
+  });
+  await deliverSoon(mailIds);
   return { status: to };
 }
 

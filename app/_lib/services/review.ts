@@ -8,7 +8,7 @@ import { deleteObject, putObject } from "../storage";
 import { acceptUpload, revisionObjectKey } from "../uploads";
 import type { Body } from "./input";
 
-/** A designer sends a revision to one of the organisation's engineers (`{ engineerId }`); the engineer is e-mailed. */
+/** A designer sends a revision to one of the organisation's engineers or an engaged outside engineer (`{ engineerId }`); the engineer is e-mailed. */
 export async function submitForReview(user: CurrentUser, revisionId: string, body: Body): Promise<{ reviewId: string }> {
   const revision = await ownedRevision(user, revisionId);
   assertRole(user, "designer");
@@ -21,7 +21,8 @@ export async function submitForReview(user: CurrentUser, revisionId: string, bod
  * signed letter to an approval. The designer is e-mailed. A failed decision leaves no letter stored.
  */
 export async function decideReview(user: CurrentUser, revisionId: string, body: Body, letter: File | null = null): Promise<{ status: "approved" | "changes_requested" }> {
-  const revision = await ownedRevision(user, revisionId);
+  // An outside engineer engaged on the project reviews too; decideRevision holds them to what was submitted to them.
+  const revision = await ownedRevision(user, revisionId, { engaged: true });
   assertRole(user, "engineer");
   const decision = reviewSchema.parse(await body());
   let letterKey: string | null = null;
@@ -29,7 +30,8 @@ export async function decideReview(user: CurrentUser, revisionId: string, body: 
     if (decision.decision !== "approve") throw ValidationError.field("letter", "Attach the letter only when approving");
     // The one upload policy: a PDF or photo by content, at most 10 MB, never SVG or HTML.
     const accepted = await acceptUpload(letter, "signedLetter", "letter");
-    letterKey = revisionObjectKey(user.organisationId, revisionId, "letter");
+    // Stored under the revision's organisation, also when an outside engineer approves.
+    letterKey = revisionObjectKey(revision.organisationId, revisionId, "letter");
     await putObject(letterKey, accepted.bytes, accepted.type.contentType);
   }
   try {

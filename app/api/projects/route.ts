@@ -6,11 +6,12 @@ import { listProjects } from "@/db/queries/projects";
 
 export const dynamic = "force-dynamic";
 
-/** The organisation's projects: `?q=&sort=name|state|jurisdiction|designCount|updatedAt&dir=&page=&pageSize=`. */
+/** The organisation's projects and those the caller is engaged on: `?q=&sort=name|state|jurisdiction|designCount|updatedAt&dir=&page=&pageSize=`. */
 export const GET = apiRoute(async (request) => {
   const user = await requireUser();
   const query = listQueryFrom(new URL(request.url).searchParams);
-  return Response.json(await listProjects(user.organisationId, query));
+  // An outside engineer also sees the projects they are engaged on, each with the contractor's name.
+  return Response.json(await listProjects(user.organisationId, query, user.userId));
 });
 
 /** A new project (designers and admins). */

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { hasRole, requireUser } from "@/app/_lib/auth";
+import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, projectFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
@@ -8,6 +8,9 @@ import { CriteriaCardView } from "@/components/design/criteria-card-view";
 import { Caution } from "@/components/ui/caution";
 import { listDesigns } from "@/db/queries/designs";
 import { listProjectFiles } from "@/db/queries/project-files";
+import { projectEngagements } from "@/db/queries/engagements";
+import { organisationName } from "@/db/queries/organisations";
+import { EngagementsPanel } from "./_components/engagements-panel";
 import { DesignsTable } from "./_components/designs-table";
 import { FilesTable } from "./_components/files-table";
 import { NewDesignForm } from "./_components/new-design-form";
@@ -21,16 +24,20 @@ export default async function ProjectPage({ params, searchParams }: Props) {
   const search = await searchParams;
   const { user, project, card } = await forPage(async () => {
     const u = await requireUser();
-    const p = await projectFor(u, projectId);
-    return { user: u, project: p, card: await cardFor(u, p.criteriaCardId) };
+    const p = await projectFor(u, projectId, { engaged: true });
+    return { user: u, project: p, card: await cardFor(u, p.criteriaCardId, p) };
   }, `/projects/${projectId}`);
   const [designs, files] = await Promise.all([listDesigns(project.id, listQueryLenient(search, "d_")), listProjectFiles(project.id, listQueryLenient(search, "f_"))]);
-  const canWrite = hasRole(user, "designer", "admin");
+  // An engaged outside engineer reads this project; only the contractor's own members write or engage.
+  const outsider = isOutsider(user, project);
+  const canWrite = !outsider && hasRole(user, "designer", "admin");
+  const engagements = outsider ? [] : await projectEngagements(project.id);
+  const contractor = outsider ? await organisationName(project.organisationId) : null;
   const fileRows = { ...files, rows: files.rows.map(({ objectKey: _o, thumbnailKey, organisationId: _g, projectId: _p, ...f }) => ({ ...f, hasThumbnail: Boolean(thumbnailKey) })) };
 
   return (
     <>
-      <p className="text-sm"><Link href="/projects" className="text-accent-800 hover:underline">← Projects</Link></p>
+      <p className="text-sm"><Link href="/projects" className="text-accent-800 hover:underline">← Projects</Link>{contractor ? <span className="text-slate-600"> · you review this project for {contractor}</span> : null}</p>
       <div className="mt-2 flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 className="text-2xl font-semibold">{project.name}</h1>
@@ -49,7 +56,7 @@ export default async function ProjectPage({ params, searchParams }: Props) {
       <section aria-labelledby="card-heading" className="mt-6 rounded-lg border border-slate-200 bg-white p-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 id="card-heading" className="text-lg font-semibold">Design criteria{card ? `: ${card.jurisdiction}, ${card.state}` : ""}</h2>
-          <Link href="/criteria" className="text-sm text-accent-800 hover:underline">All criteria cards</Link>
+          {outsider ? null : <Link href="/criteria" className="text-sm text-accent-800 hover:underline">All criteria cards</Link>}
         </div>
         {card ? <div className="mt-3"><CriteriaCardView card={card} /></div> : (
           <p className="mt-2 text-sm text-amber-900">No criteria card applied. {canWrite ? <Link href={`/projects/${project.id}/edit`} className="underline">Choose one</Link> : null} so designs start from the jurisdiction&apos;s wind, snow, frost and soil values.</p>
@@ -68,7 +75,16 @@ export default async function ProjectPage({ params, searchParams }: Props) {
         {canWrite ? <UploadForm projectId={project.id} /> : null}
       </section>
 
+      {outsider ? null : (
+        <EngagementsPanel projectId={project.id} canManage={canWrite}
+          items={engagements.map((e) => ({ id: e.id, email: e.email, engineerName: e.engineerName, status: e.status,
+            when: e.status === "revoked" && e.revokedAt ? `revoked ${day(e.revokedAt)}` : e.respondedAt ? `${e.status} ${day(e.respondedAt)}` : `invited ${day(e.invitedAt)} by ${e.invitedByName}` }))} />
+      )}
+
       <Caution compact className="mt-8" />
     </>
   );
 }
+
+const day = (d: Date) => new Date(d).toISOString().slice(0, 10);
+

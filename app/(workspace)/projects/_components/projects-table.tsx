@@ -18,7 +18,13 @@ const columnsFor = (timeZone?: string) => [
   col.accessor("updatedAt", { header: "Updated", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{shortDate(c.getValue(), timeZone)}</time> }),
 ];
 
-export function ProjectsTable({ page, timeZone }: { page: ServerPage<ProjectRow>; timeZone?: string }) {
-  const columns = useMemo(() => columnsFor(timeZone), [timeZone]);
+// For an outside engineer: whose project each row is.
+const contractor = col.accessor("organisationName", { header: "Contractor", enableSorting: false });
+
+export function ProjectsTable({ page, timeZone, showContractor = false }: { page: ServerPage<ProjectRow>; timeZone?: string; showContractor?: boolean }) {
+  const columns = useMemo(() => {
+    const base = columnsFor(timeZone);
+    return showContractor ? [base[0], contractor, ...base.slice(1)] : base;
+  }, [timeZone, showContractor]);
   return <DataTable page={page} columns={columns} caption="Projects" filterLabel="Filter by name, address, state or jurisdiction" emptyText="No projects yet. Start one for your next customer site." />;
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { hasRole, requireUser } from "@/app/_lib/auth";
+import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { checkOutcome } from "@/components/review/check-outcome";
 import { dateInWords } from "@/components/ui/dates";
@@ -22,6 +22,7 @@ import { Caution } from "@/components/ui/caution";
 import type { DesignInput } from "@/engine";
 import { listProjectFiles } from "@/db/queries/project-files";
 import { organisationEngineers } from "@/db/queries/review-people";
+import { engagedEngineers } from "@/db/queries/engagements";
 import { lastReviewed, lastReviewedBy } from "@/db/queries/review-queue";
 import { reviewsOfRevision } from "@/db/queries/reviews";
 import { DecisionPanel } from "./_components/decision-form";
@@ -30,21 +31,30 @@ import { SubmitPanel, type EngineerChoice } from "./_components/submit-form";
 
 export const metadata: Metadata = { title: "Review" };
 
+/** Member engineers and outside engineers engaged on the project, each once, named with their firm when outside. */
+async function engineerChoices(organisationId: string, projectId: string) {
+  const members = await organisationEngineers(organisationId);
+  const outside = (await engagedEngineers(projectId)).filter((e) => !members.some((m) => m.userId === e.userId));
+  return [...members, ...outside.map((e) => ({ userId: e.userId, name: `${e.name} (outside engineer${e.firmName ? `, ${e.firmName}` : ""})` }))];
+}
+
 export default async function ReviewPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const { revisionId } = await params;
   const { user, ctx } = await forPage(async () => {
     const user = await requireUser();
-    return { user, ctx: await ownedRevision(user, revisionId) };
+    return { user, ctx: await ownedRevision(user, revisionId, { engaged: true }) };
   }, `/reviews/${revisionId}`);
+  // An engaged outside engineer reads and reviews here; submitting stays with the contractor's designers.
+  const outsider = isOutsider(user, ctx);
   const standing = await revisionStanding(ctx);
   const r = ctx.result;
   const isEngineer = hasRole(user, "engineer");
-  const canSubmit = hasRole(user, "designer") && (ctx.status === "draft" || ctx.status === "changes_requested");
+  const canSubmit = !outsider && hasRole(user, "designer") && (ctx.status === "draft" || ctx.status === "changes_requested");
   const canDecide = isEngineer && ctx.status === "in_review";
   const [files, previous, engineers, eligibility] = await Promise.all([
     listProjectFiles(ctx.projectId, { pageSize: 50 }),
     isEngineer ? lastReviewedBy(ctx.designId, ctx.number, user.userId) : lastReviewed(ctx.designId, ctx.number),
-    canSubmit ? organisationEngineers(user.organisationId) : Promise.resolve([]),
+    canSubmit ? engineerChoices(user.organisationId, ctx.projectId) : Promise.resolve([]),
     canDecide ? licenceEligibility(user.userId, ctx.projectState) : Promise.resolve(null),
   ]);
   const choices: EngineerChoice[] = await Promise.all(
@@ -64,7 +74,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   return (
     <div className="space-y-6">
       <header className="space-y-2">
-        <p className="text-sm text-slate-600"><Link href="/reviews" className="underline">Reviews</Link> · {ctx.projectName} ({ctx.projectState})</p>
+        <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
         <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
           lead={outcome.failing.length && ctx.status !== "approved" ? "A failing check can still be submitted and approved, but only with the engineer's written reason for each one." : undefined} />
@@ -170,7 +180,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}
               licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} (valid through ${eligibility.licence.expiresOn}), the time and the project facts as they stand now. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
           ) : null}
-          {hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} /> : null}
+          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} /> : null}
           <ReviewHistory standing={standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
         </aside>
       </div>

@@ -9,8 +9,8 @@ type Context = { params: Promise<{ projectId: string }> };
 /** One project with its criteria card. */
 export const GET = apiRoute<Context>(async (_request, { params }) => {
   const user = await requireUser();
-  const project = await projectFor(user, (await params).projectId);
-  return Response.json({ project, criteriaCard: await cardFor(user, project.criteriaCardId) });
+  const project = await projectFor(user, (await params).projectId, { engaged: true });
+  return Response.json({ project, criteriaCard: await cardFor(user, project.criteriaCardId, project) });
 });
 
 /** Change any of name, address, state, latitude, longitude, notes, criteriaCardId. */

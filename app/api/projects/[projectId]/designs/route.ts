@@ -11,7 +11,7 @@ type Context = { params: Promise<{ projectId: string }> };
 /** The project's designs with their latest revision's number, status and footing. */
 export const GET = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
-  const project = await projectFor(user, (await params).projectId);
+  const project = await projectFor(user, (await params).projectId, { engaged: true });
   return Response.json(await listDesigns(project.id, listQueryFrom(new URL(request.url).searchParams)));
 });
 

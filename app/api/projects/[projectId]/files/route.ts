@@ -11,7 +11,7 @@ type Context = { params: Promise<{ projectId: string }> };
 /** The project's uploads (`?q=&sort=originalName|kind|sizeBytes|createdAt&dir=&page=&pageSize=`). */
 export const GET = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
-  const project = await projectFor(user, (await params).projectId);
+  const project = await projectFor(user, (await params).projectId, { engaged: true });
   const page = await listProjectFiles(project.id, listQueryFrom(new URL(request.url).searchParams));
   return Response.json({ ...page, rows: page.rows.map(({ objectKey: _o, thumbnailKey, ...r }) => ({ ...r, hasThumbnail: Boolean(thumbnailKey) })) });
 });

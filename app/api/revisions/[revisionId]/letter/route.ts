@@ -10,7 +10,7 @@ export const dynamic = "force-dynamic";
 /** The engineer's signed approval letter, for members of the organisation; always a download. */
 export const GET = apiRoute<{ params: Promise<{ revisionId: string }> }>(async (_request, { params }) => {
   const user = await requireUser();
-  const ctx = await ownedRevision(user, (await params).revisionId);
+  const ctx = await ownedRevision(user, (await params).revisionId, { engaged: true });
   const key = (await revisionStanding(ctx)).approval?.letterFileKey;
   if (!key) throw new AccessError(404, "No signed letter is on file for this revision.");
   const object = await getObject(key);

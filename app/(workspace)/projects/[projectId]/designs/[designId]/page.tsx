@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { AccessError, hasRole, requireUser } from "@/app/_lib/auth";
+import { AccessError, hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
@@ -26,21 +26,22 @@ export default async function DesignPage({ params, searchParams }: Props) {
   const path = `/projects/${projectId}/designs/${designId}`;
   const { user, project, design, card, latest, viewing, from } = await forPage(async () => {
     const u = await requireUser();
-    const p = await projectFor(u, projectId);
-    const d = await designFor(u, designId);
+    // Reading is open to an engineer engaged on the project; writing stays with members (canWrite below).
+    const p = await projectFor(u, projectId, { engaged: true });
+    const d = await designFor(u, designId, { engaged: true });
     if (d.projectId !== p.id) throw new AccessError(404, "That design was not found.");
     const l = (await latestRevision(d.id)) as DesignRevision | undefined;
     if (!l) throw new Error(`design ${d.id} has no revision`);
     const pick = async (id: string | undefined) => {
       if (!id) return null;
-      const r = await revisionFor(u, id);
+      const r = await revisionFor(u, id, { engaged: true });
       if (r.designId !== d.id) throw new AccessError(404, "That revision was not found.");
       return r;
     };
-    return { user: u, project: p, design: d, card: await cardFor(u, p.criteriaCardId), latest: l, viewing: await pick(one("revision")), from: await pick(one("from")) };
+    return { user: u, project: p, design: d, card: await cardFor(u, p.criteriaCardId, p), latest: l, viewing: await pick(one("revision")), from: await pick(one("from")) };
   }, path);
 
-  const canWrite = hasRole(user, "designer", "admin");
+  const canWrite = !isOutsider(user, project) && hasRole(user, "designer", "admin");
   const shown = viewing ?? latest;
   const isOld = shown.id !== latest.id;
   const start = !isOld && from && canWrite ? from : shown;

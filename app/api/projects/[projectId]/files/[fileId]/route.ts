@@ -1,5 +1,5 @@
 import { apiRoute } from "@/app/_lib/api";
-import { assertOwned, requireUser } from "@/app/_lib/auth";
+import { AccessError, requireUser } from "@/app/_lib/auth";
 import { isUuid, projectFor } from "@/app/_lib/designs";
 import { getObject } from "@/app/_lib/storage";
 import { fileResponse } from "@/app/_lib/uploads";
@@ -15,9 +15,11 @@ type Context = { params: Promise<{ projectId: string; fileId: string }> };
 export const GET = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
   const { projectId, fileId } = await params;
-  const project = await projectFor(user, projectId);
+  const project = await projectFor(user, projectId, { engaged: true });
   const found = isUuid(fileId) ? await getProjectFile(fileId) : undefined;
-  const file = assertOwned(user, found && found.projectId === project.id ? found : undefined, "That file");
+  // The file must be this project's: the project's access check then covers it (members and engaged engineers alike).
+  if (!found || found.projectId !== project.id || found.organisationId !== project.organisationId) throw new AccessError(404, "That file was not found.");
+  const file = found;
   const wantsThumbnail = new URL(request.url).searchParams.get("variant") === "thumbnail";
   if (wantsThumbnail && !file.thumbnailKey) return Response.json({ errors: [{ path: "variant", message: "Only photos have thumbnails" }] }, { status: 404 });
   const object = await getObject(wantsThumbnail ? file.thumbnailKey! : file.objectKey);

@@ -53,14 +53,14 @@ export default async function DiffPage({ params, searchParams }: Props) {
   const units: UnitSystem = one("units") === "metric" ? "metric" : "imperial";
   const { project, design, numbers, from, to, timeZone } = await forPage(async () => {
     const u = await requireUser();
-    const p = await projectFor(u, projectId);
-    const d = await designFor(u, designId);
+    const p = await projectFor(u, projectId, { engaged: true });
+    const d = await designFor(u, designId, { engaged: true });
     if (d.projectId !== p.id) throw new AccessError(404, "That design was not found.");
     const list = await revisionNumbers(d.id);
     const toId = one("to") ?? list[0]?.id;
     const fromId = one("from") ?? list[1]?.id ?? list[0]?.id;
     const load = async (id: string) => {
-      const r = await revisionFor(u, id);
+      const r = await revisionFor(u, id, { engaged: true });
       if (r.designId !== d.id) throw new AccessError(404, "That revision was not found.");
       return r;
     };

@@ -1,0 +1,12 @@
+import { apiRoute } from "@/app/_lib/api";
+import { requireUser } from "@/app/_lib/auth";
+import { answerEngagement } from "@/app/_lib/engagements/service";
+
+export const dynamic = "force-dynamic";
+type Context = { params: Promise<{ engagementId: string }> };
+
+/** Only the invited engineer may accept (with the engineer role and a licence on file); anyone else gets 404. */
+export const POST = apiRoute<Context>(async (_request, { params }) => {
+  const user = await requireUser();
+  return Response.json(await answerEngagement(user, (await params).engagementId, "accept"));
+});
