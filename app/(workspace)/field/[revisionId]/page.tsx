@@ -90,7 +90,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
       ) : null}
       <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
-      <header className="flex items-start justify-between gap-4">
+      <div className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
           <h1 className="text-2xl font-semibold">{ctx.designName}</h1>
@@ -101,7 +101,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: qr }} />
           <figcaption className="mt-1 text-[10px] leading-tight">Inspector: scan to check this approval</figcaption>
         </figure>
-      </header>
+      </div>
       {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
       <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
       {cleared.length ? (
