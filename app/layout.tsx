@@ -1,6 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import { connection } from "next/server";
+import { BrowserZodConfig } from "@/components/ui/browser-zod-config";
 import "./globals.css";
 
 // Inter ships with the app from an npm font package; nothing is fetched at build or run time.
@@ -24,7 +25,10 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en" className={inter.variable}>
-      <body className="min-h-screen font-sans">{children}</body>
+      <body className="min-h-screen font-sans">
+        <BrowserZodConfig />
+        {children}
+      </body>
     </html>
   );
 }

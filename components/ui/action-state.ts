@@ -7,11 +7,11 @@ export interface ActionState {
   values?: Record<string, string>;
 }
 
-/** The submitted text fields of a form, minus secrets, for ActionState.values. */
+/** The submitted text fields of a form, minus secrets, for ActionState.values; a field sent more than once (ticked boxes) joins its values with commas. */
 export function typedValues(form: FormData, omit: string[] = ["password"]): Record<string, string> {
   const values: Record<string, string> = {};
   for (const [key, value] of form.entries()) {
-    if (typeof value === "string" && !omit.includes(key) && !key.startsWith("$ACTION")) values[key] = value;
+    if (typeof value === "string" && !omit.includes(key) && !key.startsWith("$ACTION")) values[key] = key in values ? `${values[key]},${value}` : value;
   }
   return values;
 }

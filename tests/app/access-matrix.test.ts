@@ -163,6 +163,10 @@ const MATRIX: MatrixRow[] = [
     file: "app/(workspace)/field/[revisionId]/actions.ts", name: "recordAsBuiltAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
     setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, postId: "P1", measuredDiameterIn: "30", measuredDepthIn: "100", groundFound: "as_expected" }) }),
   },
+  {
+    file: "app/(workspace)/field/[revisionId]/actions.ts", name: "tickChecklistAction", expect: only({ installer: 200, engineer: 200 }, { nobody: SIGN_IN }),
+    setup: async () => ({ args: formArgs({ revisionId: (await freshApproved()).revisionId, itemKey: "utility-locate", ticked: "true" }) }),
+  },
 ];
 
 afterAll(async () => {

@@ -12,6 +12,7 @@ import { PATCH as patchProject } from "@/app/api/projects/[projectId]/route";
 import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";
 import { inputGroups } from "@/app/_lib/review/report-text";
+import { DISPLAY_UNITS } from "@/components/design/units";
 import { db } from "@/db/client";
 import { DEFER_TO_CODE, sizeDesign, twoPostDesignInput, type DesignInputDraft } from "@/engine";
 import { FIELD_LABELS } from "@/engine/field-labels";
@@ -74,8 +75,9 @@ describe("GET /api/revisions/:id/report.pdf", () => {
       for (const [label, value] of g.rows) expect(text).toContain(`${label} ${value}`);
     }
     expect(text).toContain("Basic wind speed 115 mph"); // the two-post demo design's wind speed
-    const withUnits = Object.entries(FIELD_LABELS).filter(([, f]) => f.unit).map(([, f]) => f.label);
-    for (const g of inputGroups(rev.input)) for (const [label, value] of g.rows) if (withUnits.includes(label) && value !== "not given") expect(value, label).toMatch(/(in|ft|mph|psf|psf\/ft|pcf|ksi|lb|°|%)$/);
+    // Every input the label table gives a unit shows that unit beside its value.
+    const unitOf = new Map(Object.values(FIELD_LABELS).filter((f) => f.unit).map((f) => [f.label, DISPLAY_UNITS[f.unit!].imperial]));
+    for (const g of inputGroups(rev.input)) for (const [label, value] of g.rows) if (unitOf.has(label) && value !== "not given") expect(value.endsWith(unitOf.get(label)!), `${label}: ${value}`).toBe(true);
     expect(text).not.toMatch(/\b(site|array|posts)\.[a-zA-Z]/);
     expect(text).not.toContain("[memory");
 

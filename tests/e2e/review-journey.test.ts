@@ -178,11 +178,14 @@ describe("review journey", () => {
     await engineer.goto(`${baseUrl()}/reviews/${revisionId}`);
     await engineer.getByRole("alert", { name: "Design on hold" }).waitFor();
     await both(engineer, `${baseUrl()}/reviews/${revisionId}`, "review-on-hold-engineer");
-    await engineer.getByLabel("How was it resolved? (engineers only)").fill("Rock at 40 in: hole cored to 90 in and inspected.");
+    await engineer.getByLabel(/^How was it resolved/).fill("Rock at 40 in: hole cored to 90 in and inspected.");
+    // Clearing is confirmed in so many words: the note becomes the crew's instruction.
+    await engineer.getByLabel(/^Work may go on as my note says/).check();
     await engineer.getByRole("button", { name: "Clear hold" }).click();
     await engineer.getByRole("alert", { name: "Design on hold" }).waitFor({ state: "detached" });
     await installer.reload();
     expect(await installer.getByRole("alert", { name: "Design on hold" }).count()).toBe(0);
+    await installer.getByText("Rock at 40 in: hole cored to 90 in and inspected.").first().waitFor();
   });
 });
 

@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { Field, FormStatus, SubmitButton, type ActionState } from "@/components/ui/form";
 import { RoleCheckboxes } from "@/components/ui/role-checkboxes";
 import { useClientValidation } from "@/components/ui/use-client-validation";
@@ -8,12 +8,12 @@ import { signUpInput, signUpSchema } from "@/app/_lib/schemas/account";
 import { signUpAction } from "../actions";
 
 export function SignUpForm() {
-  const [state, action] = useActionState<ActionState, FormData>(signUpAction, {});
-  const { clientErrors, onSubmit } = useClientValidation(signUpSchema, signUpInput);
+    const { clientErrors, onSubmit } = useClientValidation(signUpSchema, signUpInput);
+  const { state, formProps } = useKeptForm(signUpAction, { validate: onSubmit });
   const errors = clientErrors ?? state.fieldErrors;
   const v = state.values;
   return (
-    <form action={action} onSubmit={onSubmit} className="space-y-4" noValidate>
+    <form {...formProps} className="space-y-4" noValidate>
       <Field label="Company name" name="organisationName" autoComplete="organization" required defaultValue={v?.organisationName} error={errors?.organisationName} />
       <Field label="Your name" name="name" autoComplete="name" required defaultValue={v?.name} error={errors?.name} />
       <Field label="Work e-mail" name="email" type="email" autoComplete="email" required defaultValue={v?.email} error={errors?.email} />

@@ -1,18 +1,18 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { Field, FormStatus, SubmitButton, type ActionState } from "@/components/ui/form";
 import { useClientValidation } from "@/components/ui/use-client-validation";
 import { LICENSING_STATES, licenceInput, licenceSchema } from "@/app/_lib/schemas/licence";
 import { saveLicenceAction } from "../actions";
 
 export function LicenceForm() {
-  const [state, action] = useActionState<ActionState, FormData>(saveLicenceAction, {});
-  const { clientErrors, onSubmit } = useClientValidation(licenceSchema, licenceInput);
+    const { clientErrors, onSubmit } = useClientValidation(licenceSchema, licenceInput);
+  const { state, formProps } = useKeptForm(saveLicenceAction, { validate: onSubmit });
   const errors = clientErrors ?? state.fieldErrors;
   const v = state.values;
   return (
-    <form action={action} onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-3" noValidate>
+    <form {...formProps} className="grid gap-4 sm:grid-cols-3" noValidate>
       <div className="space-y-1">
         <label htmlFor="field-state" className="block text-sm font-medium text-slate-800">Licensing state</label>
         <select

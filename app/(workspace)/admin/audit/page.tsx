@@ -4,36 +4,13 @@ import { requireRole } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { auditCursorText, listAuditEvents, parseAuditCursor, type AuditRow } from "@/db/queries/audit";
 import { shortDateTime } from "@/components/ui/dates";
+import { auditActionLabel, auditDetailWords } from "@/components/admin/audit-labels";
+import { auditSubjectNames } from "@/db/queries/audit-subjects";
 
 export const metadata: Metadata = { title: "Audit log" };
 
 const PER_PAGE = 25;
 const AUDIT_COUNT_LABEL = "10,000+";
-
-const ACTION_LABELS: Record<string, string> = {
-  "sign-in": "Signed in",
-  "sign-out": "Signed out",
-  "sign-in-failed": "Failed sign-in",
-  "sign-up": "Created the organisation",
-  "invitation-sent": "Sent an invitation",
-  "invitation-revoked": "Cancelled an invitation",
-  "invitation-accepted": "Accepted an invitation",
-  "role-changed": "Changed roles",
-  "member-deactivated": "Deactivated a member",
-  "member-reactivated": "Reactivated a member",
-  "password-reset-requested": "Asked for a password reset link",
-  "password-reset": "Set a new password by reset link",
-  "licence-saved": "Saved an engineering licence",
-  "licence-removed": "Removed an engineering licence",
-};
-
-function describe(row: AuditRow): string {
-  const d = row.detail ?? {};
-  if (row.action === "role-changed" && Array.isArray(d.from) && Array.isArray(d.to)) return `${d.from.join(", ")} → ${d.to.join(", ")}`;
-  if (Array.isArray(d.roles)) return `roles: ${d.roles.join(", ")}`;
-  if (typeof d.state === "string") return `state ${d.state}`;
-  return "";
-}
 
 type Search = { older?: string; newer?: string; oldest?: string };
 
@@ -45,6 +22,10 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   const newer = older ? undefined : parseAuditCursor(search.newer);
   const oldest = !older && !newer && search.oldest === "1";
   const { rows, total, totalCapped, hasOlder, hasNewer } = await listAuditEvents(user.organisationId, { limit: PER_PAGE, older, newer, oldest });
+  const subjectNames = await auditSubjectNames(user.organisationId, rows.map((r) => r.subject));
+  // An id the organisation no longer holds stays out of sight: the log says what it was about in words or not at all.
+  const about = (row: AuditRow) => (row.subject ? subjectNames.get(row.subject) ?? (/^[0-9a-f-]{36}$/i.test(row.subject) ? "" : row.subject) : "");
+  const describe = (row: AuditRow) => auditDetailWords(row.action, row.detail as Record<string, unknown> | null);
   const newerHref = rows.length > 0 ? `/admin/audit?newer=${auditCursorText(rows[0].cursor)}` : "/admin/audit";
   const olderHref = rows.length > 0 ? `/admin/audit?older=${auditCursorText(rows[rows.length - 1].cursor)}` : "/admin/audit";
   const counted = totalCapped ? `${AUDIT_COUNT_LABEL} events` : `${total.toLocaleString("en-US")} ${total === 1 ? "event" : "events"}`;
@@ -55,14 +36,14 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
         <Link href="/admin/members" className="text-sm text-accent-700 underline">Members</Link>
       </div>
       <p className="mt-1 text-sm text-slate-600">
-        Sign-ins, failed sign-ins, invitations, role changes and deactivations in {user.organisationName}, newest first. Times are UTC.
+        Sign-ins, invitations, role changes, reviews, approvals and holds in {user.organisationName}, newest first. Times are in the organisation&apos;s time zone.
       </p>
       {/* Phones get one card per event instead of a table that scrolls sideways. */}
       <ol className="mt-4 space-y-2 md:hidden" aria-label="Audit events">
         {rows.map((row) => (
           <li key={row.id} className="rounded-lg border border-slate-200 bg-white p-3 text-sm">
-            <div className={`font-medium ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{ACTION_LABELS[row.action] ?? row.action}</div>
-            <div>{row.actorName ?? <span className="text-slate-500">not signed in</span>}{row.subject ? <span className="break-all text-slate-600"> · {row.subject}</span> : null}</div>
+            <div className={`font-medium ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{auditActionLabel(row.action)}</div>
+            <div>{row.actorName ?? <span className="text-slate-500">not signed in</span>}{about(row) ? <span className="break-all text-slate-600"> · {about(row)}</span> : null}</div>
             {describe(row) ? <div className="text-slate-500">{describe(row)}</div> : null}
             <div className="text-xs text-slate-500">
               <time dateTime={row.at.toISOString()}>{shortDateTime(row.at, user.timeZone)}</time> · from <span className="font-mono">{row.ip ?? "unknown"}</span>
@@ -75,7 +56,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
         <table className="w-full min-w-[44rem] text-left text-sm">
           <thead className="bg-slate-50 text-slate-700">
             <tr>
-              <th scope="col" className="px-3 py-2 font-medium">When (UTC)</th>
+              <th scope="col" className="px-3 py-2 font-medium">When</th>
               <th scope="col" className="px-3 py-2 font-medium">Who</th>
               <th scope="col" className="px-3 py-2 font-medium">What</th>
               <th scope="col" className="px-3 py-2 font-medium">About</th>
@@ -87,9 +68,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               <tr key={row.id} className="align-top">
                 <td className="whitespace-nowrap px-3 py-2"><time dateTime={row.at.toISOString()}>{shortDateTime(row.at, user.timeZone)}</time></td>
                 <td className="px-3 py-2">{row.actorName ?? <span className="text-slate-500">not signed in</span>}</td>
-                <td className={`px-3 py-2 ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{ACTION_LABELS[row.action] ?? row.action}</td>
+                <td className={`px-3 py-2 ${row.action === "sign-in-failed" ? "text-red-700" : ""}`}>{auditActionLabel(row.action)}</td>
                 <td className="px-3 py-2">
-                  <span className="break-all">{row.subject ?? ""}</span>
+                  <span className="break-all">{about(row)}</span>
                   {describe(row) ? <span className="block text-slate-500">{describe(row)}</span> : null}
                 </td>
                 <td className="px-3 py-2 font-mono text-xs">{row.ip ?? ""}</td>

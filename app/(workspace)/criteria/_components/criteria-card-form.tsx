@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { CriteriaCard } from "@/db/queries/criteria-cards";
 import { saveCriteriaCardAction } from "../actions";
@@ -21,13 +21,13 @@ const box = "block w-full rounded-md border border-slate-300 bg-white px-2 py-1.
 
 /** A jurisdiction's criteria: each value with where it comes from and when it was checked. */
 export function CriteriaCardForm({ card, states, timeZone }: { card?: CriteriaCard; states: readonly string[]; timeZone?: string }) {
-  const [state, action] = useActionState(saveCriteriaCardAction, {});
+  const { state, formProps } = useKeptForm(saveCriteriaCardAction);
   const today = todayInZone(timeZone);
   const v = (name: string, fallback: string) => state.values?.[name] ?? fallback;
   const err = (name: string) => state.fieldErrors?.[name]?.join(" ");
   const E = ({ name }: { name: string }) => (err(name) ? <p className="text-xs font-medium text-red-700">{err(name)}</p> : null);
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-slate-200 bg-white p-4">
+    <form {...formProps} className="space-y-4 rounded-lg border border-slate-200 bg-white p-4">
       {card ? <input type="hidden" name="cardId" value={card.id} /> : null}
       <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
         <div className="space-y-1">

@@ -5,6 +5,7 @@ import { forAction } from "@/app/_lib/action-errors";
 import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
 import { recordAsBuilt } from "@/app/_lib/services/field";
+import { tickChecklistItem } from "@/app/_lib/services/field-checklist";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 
 /** The crew records one hole as dug; a hole that contradicts the spec puts the design on hold. */
@@ -25,4 +26,16 @@ export async function recordAsBuiltAction(_prev: ActionState, form: FormData): P
   const out = recorded.value;
   if (out.holdId) return { ok: true, message: `Recorded. The design is now ON HOLD: ${out.reasons.join(" ")} Do not pour; the engineer and designer have been e-mailed.` };
   return { ok: true, message: `Hole ${form.get("postId")} recorded.` };
+}
+
+/** A tick of the crew's field checklist, saved at once (the box keeps its state across reloads and devices). */
+export async function tickChecklistAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const revisionId = String(form.get("revisionId") ?? "");
+  const outcome = await forAction(async () => {
+    const user = await requireUser();
+    await tickChecklistItem(user, revisionId, { itemKey: form.get("itemKey"), ticked: form.get("ticked") === "true" });
+  }, undefined, `/field/${revisionId}`);
+  if (!outcome.ok) return outcome.state;
+  revalidatePath(`/field/${revisionId}`);
+  return { ok: true, message: "Saved." };
 }

@@ -23,18 +23,13 @@ import { pourFromAsBuilt } from "@/app/_lib/review/as-dug";
 import { AsBuiltForm } from "./_components/as-built-form";
 import { AsBuiltLog } from "./_components/as-built-log";
 import { Checklist } from "./_components/checklist";
+import { checklistTicks } from "@/db/queries/field-checklist";
+import { FIELD_CHECKLIST } from "@/engine/field-checklist";
 import { LaserCuts } from "./_components/laser-cuts";
 import { PrintButton } from "./_components/print-button";
 
 export const metadata: Metadata = { title: "Field spec" };
 
-const CHECKLIST = [
-  "Utility locate called and marks on site before digging",
-  "Every hole inspected (diameter, depth, ground) before the pour",
-  "Posts level and plumb, set to the laser cut list",
-  "Concrete cured before the rack and modules load the posts (follow the mix's cure time)",
-  "All fasteners tightened to the racking maker's torque",
-];
 
 export default async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const { revisionId } = await params;
@@ -66,7 +61,12 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
   // spot that this is the approved, current revision.
   const url = a?.verifyCode ? verifyUrl(a.verifyCode) : `${env.appUrl}/field/${ctx.id}`;
   const qr = await QRCode.toString(url, { type: "svg", margin: 0, errorCorrectionLevel: "M" });
-  const [entries, holds] = await Promise.all([asBuiltEntries(ctx.id), holdsOfRevision(ctx.id)]);
+  const [entries, holds, ticks] = await Promise.all([asBuiltEntries(ctx.id), holdsOfRevision(ctx.id), checklistTicks(ctx.id)]);
+  const checklist = FIELD_CHECKLIST.map((item) => {
+    const tick = ticks.find((t) => t.itemKey === item.key);
+    const byline = tick ? `${tick.ticked ? "Ticked" : "Unticked"} by ${tick.tickedByName}, ${dateTimeInWords(tick.tickedAt, ctx.timeZone)}` : null;
+    return { key: item.key, label: item.label, ticked: tick?.ticked ?? false, byline };
+  });
   const cleared = holds.filter((h) => h.clearedAt);
   const x0 = r.geometry.posts[0]?.xFt ?? 0;
   const positions = new Map(r.geometry.posts.map((p) => [p.id, (p.xFt - x0) * 12]));
@@ -90,6 +90,12 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
       ) : null}
       <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
+      {/* Safety and the preliminary-sizing caution come first, before the job details and any number: above the fold on a phone and on printed page 1. */}
+      <Caution />
+      <section aria-labelledby="safety-h" className="safety-box rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
+        <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+      </section>
       <div className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
@@ -209,14 +215,9 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
 
       <section aria-labelledby="check-h" className="rounded-lg border border-slate-200 bg-white p-4">
         <h2 id="check-h" className="text-lg font-semibold">Checklist</h2>
-        <div className="mt-2"><Checklist items={CHECKLIST} /></div>
+        <div className="mt-2"><Checklist revisionId={ctx.id} items={checklist} canTick={hasRole(user, "installer", "engineer")} /></div>
       </section>
 
-      <section aria-labelledby="safety-h" className="rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
-        <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
-      </section>
-      <Caution />
 
       <LaserCuts postIds={r.field.posts.map((p) => p.id)} />
 

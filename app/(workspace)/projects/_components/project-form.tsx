@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { Field, FormStatus, SubmitButton, type ActionState } from "@/components/ui/form";
 
 /** New or edit project. Keeps what was typed when the server refuses it. */
@@ -11,11 +11,11 @@ export function ProjectForm({ action, project, cards, states, submitLabel }: {
   states: readonly string[];
   submitLabel: string;
 }) {
-  const [state, formAction] = useActionState(action, {});
+  const { state, formProps } = useKeptForm(action);
   const v = (k: string, fallback: string | number | null | undefined) => state.values?.[k] ?? (fallback === null || fallback === undefined ? "" : String(fallback));
   const err = (k: string) => state.fieldErrors?.[k];
   return (
-    <form action={formAction} className="grid max-w-2xl gap-4 rounded-lg border border-slate-200 bg-white p-4 sm:grid-cols-2">
+    <form {...formProps} className="grid max-w-2xl gap-4 rounded-lg border border-slate-200 bg-white p-4 sm:grid-cols-2">
       {project ? <input type="hidden" name="projectId" value={project.id} /> : null}
       <div className="sm:col-span-2"><Field label="Project name" name="name" required defaultValue={v("name", project?.name)} error={err("name")} hint="The customer or site, as your crew knows it." /></div>
       <div className="sm:col-span-2"><Field label="Site address" name="address" defaultValue={v("address", project?.address)} error={err("address")} /></div>

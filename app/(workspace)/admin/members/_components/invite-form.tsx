@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { Field, FormStatus, SubmitButton, type ActionState } from "@/components/ui/form";
 import { RoleCheckboxes } from "@/components/ui/role-checkboxes";
 import { useClientValidation } from "@/components/ui/use-client-validation";
@@ -9,11 +9,11 @@ import { ROLES } from "@/db/roles";
 import { inviteMemberAction } from "../actions";
 
 export function InviteForm() {
-  const [state, action] = useActionState<ActionState, FormData>(inviteMemberAction, {});
-  const { clientErrors, onSubmit } = useClientValidation(inviteSchema, inviteInput);
+    const { clientErrors, onSubmit } = useClientValidation(inviteSchema, inviteInput);
+  const { state, formProps } = useKeptForm(inviteMemberAction, { resetOnSuccess: true, validate: onSubmit });
   const errors = clientErrors ?? state.fieldErrors;
   return (
-    <form action={action} onSubmit={onSubmit} className="mt-4 grid gap-4 md:grid-cols-2" noValidate>
+    <form {...formProps} className="mt-4 grid gap-4 md:grid-cols-2" noValidate>
       <Field label="E-mail" name="email" type="email" autoComplete="off" required defaultValue={state.values?.email} error={errors?.email} />
       <RoleCheckboxes name="roles" idPrefix="invite-roles" roles={ROLES} checked={state.values?.roles?.split(",") ?? ["designer"]} error={errors?.roles} />
       <div className="flex flex-wrap items-center gap-3 md:col-span-2">

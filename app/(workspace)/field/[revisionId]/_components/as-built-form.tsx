@@ -1,8 +1,7 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
-import type { ActionState } from "@/components/ui/action-state";
 import { recordAsBuiltAction } from "../actions";
 
 const GROUND = [
@@ -15,13 +14,13 @@ const GROUND = [
 
 /** One hole as dug: measured diameter and depth, ground found, photos. */
 export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revisionId: string; postIds: string[]; diameterIn: number; depthIn: number }) {
-  const [state, action] = useActionState<ActionState, FormData>(recordAsBuiltAction, {});
+  const { state, formProps } = useKeptForm(recordAsBuiltAction, { resetOnSuccess: true });
   const v = state.values ?? {};
   const err = (name: string) => state.fieldErrors?.[name];
   const errorLine = (name: string) => (err(name) ? <p id={`${name}-error`} className="text-sm text-red-700">{err(name)!.join(" ")}</p> : null);
   const input = "block w-full rounded-md border border-slate-300 bg-white px-3 py-3 text-base aria-[invalid]:border-red-600";
   return (
-    <form action={action} className="space-y-3">
+    <form {...formProps} className="space-y-3">
       <input type="hidden" name="revisionId" value={revisionId} />
       <div>
         <label htmlFor="postId" className="block text-sm font-medium">Hole at post</label>

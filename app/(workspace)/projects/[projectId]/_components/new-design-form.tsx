@@ -1,13 +1,13 @@
 "use client";
 
-import { useActionState } from "react";
+import { useKeptForm } from "@/components/ui/use-kept-form";
 import { Field, FormStatus, SubmitButton } from "@/components/ui/form";
 import { createDesignAction } from "../actions";
 
 export function NewDesignForm({ projectId, hasCard }: { projectId: string; hasCard: boolean }) {
-  const [state, action] = useActionState(createDesignAction, {});
+  const { state, formProps } = useKeptForm(createDesignAction);
   return (
-    <form action={action} className="flex flex-wrap items-end gap-3 rounded-lg border border-dashed border-slate-300 bg-white p-3">
+    <form {...formProps} className="flex flex-wrap items-end gap-3 rounded-lg border border-dashed border-slate-300 bg-white p-3">
       <input type="hidden" name="projectId" value={projectId} />
       <div className="min-w-56 flex-1">
         <Field label="New design name" name="name" required placeholder="e.g. 12-module array on two posts" defaultValue={state.values?.name} error={state.fieldErrors?.name}

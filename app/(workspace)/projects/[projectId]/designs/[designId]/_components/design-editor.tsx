@@ -17,6 +17,7 @@ import { ArrayGroup, PostsGroup, SiteGroup } from "./input-groups";
 import { FootingHeadline, ResultsPanel } from "./results-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useLiveResult, type LiveStatus } from "./use-live-result";
+import { enterMovesToNextField, useEditorDraft } from "./use-editor-draft";
 
 /**
  * The designer's editor: inputs on the left, live results on the right (stacked on a phone), the
@@ -74,6 +75,10 @@ export function DesignEditor(props: EditorProps) {
   const [saveMessage, setSaveMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [conflict, setConflict] = useState<Conflict | null>(null);
   const dirty = JSON.stringify(values) !== saved.key;
+  const draft = useEditorDraft({
+    designId: props.designId, baseRevisionId: base.id, values, dirty, enabled: !props.readOnly,
+    restore: (draftValues) => form.reset(draftValues as DesignInputDraft, { keepDefaultValues: true }),
+  });
 
   async function save(input: DesignInput, baseId = base.id) {
     setSaving(true);
@@ -128,7 +133,7 @@ export function DesignEditor(props: EditorProps) {
 
   return (
     <FormProvider {...(form as unknown as import("react-hook-form").UseFormReturn<FieldValues>)}>
-      <form onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
+      <form onSubmit={onSubmit} onKeyDown={enterMovesToNextField} noValidate className="grid grid-cols-1 gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
         <div className="min-w-0 space-y-4">
           <div className="flex flex-wrap items-center justify-between gap-3">
             <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">
@@ -150,6 +155,13 @@ export function DesignEditor(props: EditorProps) {
             {props.readOnly ? <p className="text-sm text-slate-600">Read only.</p> : null}
           </div>
 
+          {draft.restoredAt ? (
+            <div role="status" className="flex flex-wrap items-center gap-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">
+              <span>Your unsaved inputs from this browser were brought back. They are not a revision until you save.</span>
+              <button type="button" onClick={() => { draft.discard(); form.reset(JSON.parse(saved.key)); }} className="rounded-md border border-sky-400 bg-white px-3 py-1">Discard them</button>
+              <button type="button" onClick={draft.dismiss} className="rounded-md px-2 py-1 underline">Keep editing</button>
+            </div>
+          ) : null}
           <fieldset disabled={props.readOnly} className="space-y-4">
             <SiteInputs units={units} card={cardOffer} />
             <ArrayInputs units={units} />
