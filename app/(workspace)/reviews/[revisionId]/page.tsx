@@ -108,7 +108,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
               {inputs.map(([path, value]) => (
                 <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
-                  <dt className="text-slate-700">{fieldLabel(path)}</dt>
+                  <dt className="text-slate-700">{fieldLabel(path)} <span className="text-xs text-slate-600">{path}</span></dt>
                   <dd className="font-medium tabular-nums">{value}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
                   {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
                 </div>
