@@ -6,6 +6,7 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  html?: string;
 }
 
 /**

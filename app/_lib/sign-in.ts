@@ -1,7 +1,7 @@
 import { recordAudit } from "@/db/queries/audit";
 import { attemptSucceeded, reserveAttempt, THROTTLE } from "@/db/queries/sign-in-throttle";
 import { env } from "./env";
-import { sendMail } from "./mail";
+import { deliverSoon, enqueueMail } from "./outbox";
 import { db } from "@/db/client";
 import { findSignInCandidate } from "@/db/queries/users";
 import { hashPassword, verifyPassword } from "./password";
@@ -62,14 +62,20 @@ async function warnOwner(userId: string, organisationId: string, email: string):
     .where("at", ">", db.raw(`now() - make_interval(mins => ?)`, [THROTTLE.windowMinutes]))
     .first("id");
   if (recent) return;
-  await recordAudit({ organisationId, actorUserId: userId, action: "sign-in-attack-warned", subject: email });
-  await sendMail({
-    to: email,
-    subject: "Many failed sign-ins on your Pierwise account",
-    text: [
-      `In the last ${THROTTLE.windowMinutes} minutes there were at least ${THROTTLE.perAccountCeiling} wrong passwords for this account, from several places.`,
-      "You can still sign in as usual. If this was not you, choose a longer password:",
-      `${env.appUrl}/reset`,
-    ].join("\n"),
-  }).catch((error) => console.error("sign-in warning mail failed", error));
+  // The audit event (which keeps "once per window") and the e-mail commit together, so the log never
+  // says the owner was warned while the warning was lost; the outbox retries it if the server is down.
+  const mailId = await db.transaction(async (trx) => {
+    await recordAudit({ organisationId, actorUserId: userId, action: "sign-in-attack-warned", subject: email }, trx);
+    return enqueueMail(trx, {
+      organisationId,
+      to: email,
+      subject: "Many failed sign-ins on your Pierwise account",
+      text: [
+        `In the last ${THROTTLE.windowMinutes} minutes there were at least ${THROTTLE.perAccountCeiling} wrong passwords for this account, from several places.`,
+        "You can still sign in as usual. If this was not you, choose a longer password:",
+        `${env.appUrl}/reset`,
+      ].join("\n"),
+    });
+  });
+  await deliverSoon([mailId]);
 }

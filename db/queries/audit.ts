@@ -1,3 +1,4 @@
+import type { Knex } from "knex";
 import { db } from "../client";
 
 export type AuditAction =
@@ -21,8 +22,9 @@ export async function recordAudit(event: {
   subject?: string | null;
   detail?: Record<string, unknown>;
   ip?: string | null;
-}): Promise<void> {
-  await db("audit_events").insert({
+}, trx: Knex = db): Promise<void> {
+  // Pass the use case's transaction, so the event commits (or rolls back) with the change it records.
+  await trx("audit_events").insert({
     organisation_id: event.organisationId ?? null,
     actor_user_id: event.actorUserId ?? null,
     action: event.action,

@@ -45,8 +45,8 @@ export async function insertHold(trx: Knex.Transaction, h: { designId: string; o
 }
 
 /** Clears an open hold; false when it was already cleared. */
-export async function clearHoldRow(holdId: string, clearedBy: string, note: string): Promise<boolean> {
-  const n = await db("design_holds").where({ id: holdId }).whereNull("cleared_at").update({ cleared_by: clearedBy, cleared_at: db.fn.now(), clear_note: note });
+export async function clearHoldRow(holdId: string, clearedBy: string, note: string, trx: Knex = db): Promise<boolean> {
+  const n = await trx("design_holds").where({ id: holdId }).whereNull("cleared_at").update({ cleared_by: clearedBy, cleared_at: db.fn.now(), clear_note: note });
   return n === 1;
 }
 

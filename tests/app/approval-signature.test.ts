@@ -108,6 +108,9 @@ describe("approval is a signature", () => {
     expect(await outcomeOf(() => changeRolesAction({}, form))).toMatchObject({ kind: "value", value: { ok: true } });
     const audit = await db("audit_events").where({ action: "role-changed", subject: self.email }).orderBy("at", "desc").first();
     expect(audit.actor_user_id).toBe(await userId(ADMIN)); // who granted it
+    // A second active admin left in the demo organisation would change what later suites see
+    // (the members page's last-admin guard): this one is done with.
+    await db("memberships").where({ id: self.membershipId }).update({ deactivated_at: db.fn.now() });
   });
 });
 

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { ConflictError, ValidationError } from "@/app/_lib/errors";
 import type { CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
-import { sendMail } from "@/app/_lib/mail";
+import { deliverSoon, enqueueMail, type QueuedMail } from "@/app/_lib/outbox";
 import { deleteObject, putObject } from "@/app/_lib/storage";
 import { acceptUpload, revisionObjectKey, UPLOAD_KINDS } from "@/app/_lib/uploads";
 import type { DesignResult } from "@/engine";
@@ -73,16 +73,20 @@ export async function recordAsBuilt(user: CurrentUser, revision: RevisionContext
       keys.push(key);
     }
     const reasons = holdReasons(revision.result, input);
-    const out = await db.transaction(async (trx) => {
+    const holdMails = reasons.length ? await holdMail(user.organisationId, revisionId, revision.designName, revision.projectName, user.name, reasons) : [];
+    // The entry, the hold, its audit event and its e-mails commit together; the mails go out after commit.
+    const { mailIds, ...out } = await db.transaction(async (trx) => {
       const entryId = await insertAsBuilt(trx, { ...input, revisionId, organisationId: user.organisationId, photoKeys: keys, recordedBy: user.userId });
       const holdId = reasons.length
         ? await insertHold(trx, { designId: revision.designId, organisationId: user.organisationId, revisionId, asBuiltEntryId: entryId, reason: reasons.join(" "), raisedBy: user.userId })
         : null;
-      return { entryId, holdId };
+      await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: holdId ? "design-held" : "as-built-recorded", subject: revisionId, detail: { postId: input.postId } }, trx);
+      const mailIds: string[] = [];
+      if (holdId) for (const m of holdMails) mailIds.push(await enqueueMail(trx, m));
+      return { entryId, holdId, mailIds };
     });
     committed = true;
-    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: out.holdId ? "design-held" : "as-built-recorded", subject: revisionId, detail: { postId: input.postId } });
-    if (out.holdId) await mailHold(revisionId, revision.designName, revision.projectName, user.name, reasons);
+    await deliverSoon(mailIds);
     return { ...out, reasons };
   } catch (error) {
     // Photos whose entry was never saved are removed; photos of a saved entry are never touched.
@@ -91,7 +95,8 @@ export async function recordAsBuilt(user: CurrentUser, revision: RevisionContext
   }
 }
 
-async function mailHold(revisionId: string, designName: string, projectName: string, raisedBy: string, reasons: string[]): Promise<void> {
+/** The hold e-mails to the approving engineer and whoever submitted the revision, ready for the outbox. */
+async function holdMail(organisationId: string, revisionId: string, designName: string, projectName: string, raisedBy: string, reasons: string[]): Promise<QueuedMail[]> {
   const reviews = await reviewsOfRevision(revisionId);
   const people = new Set<string>();
   for (const r of reviews) {
@@ -105,8 +110,10 @@ async function mailHold(revisionId: string, designName: string, projectName: str
     "The design is ON HOLD: no concrete is to be placed until an engineer reviews it and clears the hold.",
     `Review: ${env.appUrl}/reviews/${revisionId}`,
   ].join("\n");
+  const mails: QueuedMail[] = [];
   for (const id of people) {
     const person = await userEmailAndName(id);
-    if (person) await sendMail({ to: person.email, subject: `On hold: ${designName} (${projectName})`, text });
+    if (person) mails.push({ organisationId, to: person.email, subject: `On hold: ${designName} (${projectName})`, text });
   }
+  return mails;
 }

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { ConflictError } from "@/app/_lib/errors";
 import type { CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
-import { sendMail } from "@/app/_lib/mail";
+import { deliverSoon, enqueueMail } from "@/app/_lib/outbox";
 import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import { clearHoldRow, holdAudience, type HoldRecord } from "@/db/queries/holds";
@@ -20,8 +20,6 @@ export const clearHoldSchema = z.object({
  */
 export async function clearHold(user: CurrentUser, hold: HoldRecord & { organisationId: string }, note: string): Promise<{ told: string[] }> {
   const holdId = hold.id;
-  if (!(await clearHoldRow(hold.id, user.userId, note))) throw new ConflictError("This hold was already cleared.");
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "hold-cleared", subject: hold.designId, detail: { holdId, note } });
   const where = await db("designs as d").join("projects as p", "p.id", "d.project_id").where("d.id", hold.designId).first("d.name as designName", "p.name as projectName");
   const people = hold.revisionId ? await holdAudience(hold.revisionId) : [];
   const text = [
@@ -33,6 +31,14 @@ export async function clearHold(user: CurrentUser, hold: HoldRecord & { organisa
     "",
     ...(hold.revisionId ? [`Field spec: ${env.appUrl}/field/${hold.revisionId}`] : []),
   ].join("\n");
-  for (const p of people) await sendMail({ to: p.email, subject: `Hold cleared: ${where?.designName} (${where?.projectName})`, text });
+  // Clearing, its audit event and the e-mails commit together; the mails go out after commit.
+  const mailIds = await db.transaction(async (trx) => {
+    if (!(await clearHoldRow(hold.id, user.userId, note, trx))) throw new ConflictError("This hold was already cleared.");
+    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "hold-cleared", subject: hold.designId, detail: { holdId, note } }, trx);
+    const ids: string[] = [];
+    for (const p of people) ids.push(await enqueueMail(trx, { organisationId: user.organisationId, to: p.email, subject: `Hold cleared: ${where?.designName} (${where?.projectName})`, text }));
+    return ids;
+  });
+  await deliverSoon(mailIds);
   return { told: people.map((p) => p.name) };
 }

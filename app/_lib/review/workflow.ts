@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 import { assertOwned, type CurrentUser } from "@/app/_lib/auth";
 import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { env } from "@/app/_lib/env";
-import { sendMail } from "@/app/_lib/mail";
+import { deliverSoon, enqueueMail } from "@/app/_lib/outbox";
 import { db } from "@/db/client";
 import { STATUS_PHRASES } from "@/db/revision-status";
 import { recordAudit } from "@/db/queries/audit";
@@ -44,7 +44,8 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
   const eligible = await engineerEligibility(engineer.userId, engineer.name, revision.projectState);
   if (!eligible.ok) throw invalid("engineerId", eligible.message);
 
-  const reviewId = await db.transaction(async (trx) => {
+  // The state change, its audit event and its e-mail commit together; the mail goes out after commit.
+  const { reviewId, mailId } = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "draft" && status !== "changes_requested") {
       throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
@@ -52,20 +53,23 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
     const latest = await latestRevisionNumber(revision.designId, trx);
     if (latest !== revision.number) throw new ConflictError(`Revision ${revision.number} is not the newest (revision ${latest} is); submit the newest revision.`);
     await setRevisionStatus(trx, revisionId, ["draft", "changes_requested"], "in_review");
-    return insertReview(trx, { revisionId, organisationId: user.organisationId, engineerId: engineer.userId, submittedBy: user.userId });
+    const reviewId = await insertReview(trx, { revisionId, organisationId: user.organisationId, engineerId: engineer.userId, submittedBy: user.userId });
+    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "revision-submitted", subject: revisionId, detail: { engineerId } }, trx);
+    const mailId = await enqueueMail(trx, {
+      organisationId: user.organisationId,
+      to: engineer.email,
+      subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
+      text: [
+        `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
+        "",
+        `Open the review: ${reviewUrl(revisionId)}`,
+        "",
+        "You can approve it or request changes with comments pinned to the inputs.",
+      ].join("\n"),
+    });
+    return { reviewId, mailId };
   });
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "revision-submitted", subject: revisionId, detail: { engineerId } });
-  await sendMail({
-    to: engineer.email,
-    subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
-    text: [
-      `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
-      "",
-      `Open the review: ${reviewUrl(revisionId)}`,
-      "",
-      "You can approve it or request changes with comments pinned to the inputs.",
-    ].join("\n"),
-  });
+  await deliverSoon([mailId]);
   return { reviewId };
 }
 
@@ -97,7 +101,7 @@ export async function decideRevision(
   if (approving) await confirmSignature(user, body.password);
 
   const to = body.decision === "approve" ? "approved" : "changes_requested";
-  const submittedBy = await db.transaction(async (trx) => {
+  const mailIds = await db.transaction(async (trx) => {
     const status = await lockRevisionStatus(trx, revisionId);
     if (status !== "in_review") throw new ConflictError(`Only a revision in review can be decided; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     const open = (await reviewsOfRevision(revisionId, trx)).find((r) => r.decision === null);
@@ -113,13 +117,13 @@ export async function decideRevision(
       approval: approving ? { overrides, facts: factsOf(revision), verifyCode: randomBytes(16).toString("base64url") } : undefined,
     });
     await setRevisionStatus(trx, revisionId, ["in_review"], to);
-    return open.submittedBy;
-  });
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId });
-  const designer = await userEmailAndName(submittedBy);
-  if (designer) {
+    await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: `revision-${to.replace("_", "-")}`, subject: revisionId }, trx);
+    // The decision, its audit event and the designer's e-mail commit together.
+    const designer = await userEmailAndName(open.submittedBy);
+    if (!designer) return [];
     const words = to === "approved" ? "approved" : "sent back with changes requested";
-    await sendMail({
+    return [await enqueueMail(trx, {
+      organisationId: user.organisationId,
       to: designer.email,
       subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
       text: [
@@ -130,8 +134,9 @@ export async function decideRevision(
         `Open the review: ${reviewUrl(revisionId)}`,
         ...(to === "approved" ? [`Field spec for the crew: ${env.appUrl}/field/${revisionId}`] : []),
       ].join("\n"),
-    });
-  }
+    })];
+  });
+  await deliverSoon(mailIds);
   return { status: to };
 }
 
