@@ -70,7 +70,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
 
   return (
     <div className="space-y-6">
-      <header className="space-y-2">
+      <div className="space-y-2">
         <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
         <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
@@ -90,7 +90,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             Superseded: revision {standing.supersededBy.number} was approved after this one. <Link className="underline" href={`/reviews/${standing.supersededBy.id}`}>Open revision {standing.supersededBy.number}</Link>.
           </p>
         ) : null}
-      </header>
+      </div>
       <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
@@ -118,7 +118,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
               {inputs.map(([path, value]) => (
                 <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
-                  <dt className="text-slate-700">{fieldLabel(path)} <span className="text-xs text-slate-400">{path}</span></dt>
+                  <dt className="text-slate-700">{fieldLabel(path)} <span className="text-xs text-slate-600">{path}</span></dt>
                   <dd className="font-medium tabular-nums">{value}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
                   {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
                 </div>
