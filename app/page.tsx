@@ -2,6 +2,7 @@ import Link from "next/link";
 import { Brand } from "@/components/ui/brand";
 import { Caution } from "@/components/ui/caution";
 import { SITE_CAUTIONS } from "@/engine/notices";
+import { SkipLink } from "@/components/ui/skip-link";
 
 const ROLES = [
   {
@@ -21,6 +22,7 @@ const ROLES = [
 export default function LandingPage() {
   return (
     <div className="mx-auto flex min-h-screen max-w-5xl flex-col px-5 py-6">
+      <SkipLink />
       <header className="flex items-center justify-between">
         <Brand />
         <Link href="/login" className="rounded-md bg-accent-700 px-4 py-2 text-sm font-medium text-white hover:bg-accent-800">
@@ -28,7 +30,7 @@ export default function LandingPage() {
         </Link>
       </header>
 
-      <main className="flex-1 py-12">
+      <main id="content" tabIndex={-1} className="flex-1 py-12 focus:outline-none">
         <h1 className="max-w-3xl text-3xl font-semibold tracking-tight sm:text-4xl">
           Post footings for ground-mounted solar arrays, sized, reviewed and ready to dig.
         </h1>

@@ -2,6 +2,7 @@ import Link from "next/link";
 import { currentUser } from "@/app/_lib/auth";
 import { signOutAction } from "@/app/(auth)/login/actions";
 import { Brand } from "@/components/ui/brand";
+import { SkipLink } from "@/components/ui/skip-link";
 import { ROLE_LABELS } from "@/db/roles";
 import { homeFor, menuFor } from "@/components/ui/role-navigation";
 
@@ -13,6 +14,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
   const user = await currentUser();
   return (
     <div className="min-h-screen">
+      <SkipLink />
       <header className="no-print border-b border-slate-200 bg-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <Brand href={homeFor(user?.roles ?? [])} />
@@ -32,7 +34,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
           ) : null}
         </div>
       </header>
-      <div className="mx-auto max-w-6xl px-4 py-6">{children}</div>
+      <main id="content" tabIndex={-1} className="mx-auto max-w-6xl px-4 py-6 focus:outline-none">{children}</main>
     </div>
   );
 }

@@ -1,3 +1,5 @@
+import { ScrollRegion } from "@/components/ui/scroll-region";
+
 /** A plain table of text, as the review page and the PDF report both show it (app/_lib/review/report-model.ts builds them). */
 export interface Table {
   title: string;
@@ -13,7 +15,7 @@ export function PlainTable({ table, numericFrom = 1, id }: { table: Table; numer
       <h2 id={id} className="text-base font-semibold">{table.title}</h2>
       {table.note ? <p className="mt-1 text-sm text-slate-600">{table.note}</p> : null}
       {table.rows.length ? (
-        <div className="mt-3 overflow-x-auto">
+        <ScrollRegion label={`${table.title} table`} className="mt-3">
           <table className="min-w-full text-sm">
             <thead>
               <tr className="border-b border-slate-200 text-left text-xs uppercase tracking-wide text-slate-500">
@@ -28,7 +30,7 @@ export function PlainTable({ table, numericFrom = 1, id }: { table: Table; numer
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       ) : null}
     </section>
   );

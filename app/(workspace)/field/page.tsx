@@ -22,7 +22,7 @@ export default async function FieldSpecsPage() {
         <ul className="space-y-3">
           {specs.map((s) => (
             <li key={s.revisionId}>
-              <Link href={`/field/${s.revisionId}`} className={`block rounded-lg border bg-white p-4 hover:border-accent-600 ${s.superseded ? "border-slate-200 opacity-70" : "border-slate-300"}`}>
+              <Link href={`/field/${s.revisionId}`} className={`block rounded-lg border bg-white p-4 hover:border-accent-600 ${s.superseded ? "border-slate-200 bg-slate-50" : "border-slate-300"}`}>
                 <p className="text-lg font-semibold">{s.projectName}: {s.designName}</p>
                 {s.projectAddress ? <p className="text-sm text-slate-600">{s.projectAddress}</p> : null}
                 <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">

@@ -83,11 +83,11 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
         </table>
       </div>
       <nav aria-label="Audit log pages" className="mt-3 flex flex-wrap items-center gap-4 text-sm">
-        {hasNewer ? <Link href="/admin/audit" className="text-accent-700 underline">Newest</Link> : <span className="text-slate-400">Newest</span>}
-        {hasNewer ? <Link href={newerHref} className="text-accent-700 underline">← Newer</Link> : <span className="text-slate-400">← Newer</span>}
+        {hasNewer ? <Link href="/admin/audit" className="text-accent-700 underline">Newest</Link> : <span className="text-slate-600">Newest</span>}
+        {hasNewer ? <Link href={newerHref} className="text-accent-700 underline">← Newer</Link> : <span className="text-slate-600">← Newer</span>}
         <span>{counted}</span>
-        {hasOlder ? <Link href={olderHref} className="text-accent-700 underline">Older →</Link> : <span className="text-slate-400">Older →</span>}
-        {hasOlder ? <Link href="/admin/audit?oldest=1" className="text-accent-700 underline">Oldest</Link> : <span className="text-slate-400">Oldest</span>}
+        {hasOlder ? <Link href={olderHref} className="text-accent-700 underline">Older →</Link> : <span className="text-slate-600">Older →</span>}
+        {hasOlder ? <Link href="/admin/audit?oldest=1" className="text-accent-700 underline">Oldest</Link> : <span className="text-slate-600">Oldest</span>}
       </nav>
     </>
   );

@@ -96,7 +96,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
         <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
       </section>
-      <header className="flex items-start justify-between gap-4">
+      <div className="flex items-start justify-between gap-4">
         <div>
           <p className="text-sm text-slate-600">{ctx.projectName}{ctx.projectAddress ? ` · ${ctx.projectAddress}` : ""}</p>
           <h1 className="text-2xl font-semibold">{ctx.designName}</h1>
@@ -107,7 +107,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: qr }} />
           <figcaption className="mt-1 text-[10px] leading-tight">Inspector: scan to check this approval</figcaption>
         </figure>
-      </header>
+      </div>
       {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
       <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
       {cleared.length ? (

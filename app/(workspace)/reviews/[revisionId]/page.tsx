@@ -73,7 +73,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
 
   return (
     <div className="space-y-6">
-      <header className="space-y-2">
+      <div className="space-y-2">
         <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
         <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
@@ -93,7 +93,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             Superseded: revision {standing.supersededBy.number} was approved after this one. <Link className="underline" href={`/reviews/${standing.supersededBy.id}`}>Open revision {standing.supersededBy.number}</Link>.
           </p>
         ) : null}
-      </header>
+      </div>
       <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 

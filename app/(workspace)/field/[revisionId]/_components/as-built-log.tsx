@@ -19,7 +19,7 @@ export function AsBuiltLog({ entries, holds = [], timeZone, depthIn, diameterIn 
             <p className="font-semibold">Post {e.postId}: {e.measuredDiameterIn} in × {e.measuredDepthIn} in deep, ground {GROUND_FOUND_LABELS[e.groundFound].toLowerCase()}</p>
             <p>{problems.length ? <strong className="text-red-800">Does not match the spec: {problems.join(", ")}</strong> : "Matches the spec"}</p>
             {e.notes ? <p className="text-slate-700">{e.notes}</p> : null}
-            <p className="text-xs text-slate-500">{e.recordedByName}, {dateTimeInWords(e.recordedAt, timeZone)}</p>
+            <p className="text-xs text-slate-700">{e.recordedByName}, {dateTimeInWords(e.recordedAt, timeZone)}</p>
             {holds.filter((h) => h.asBuiltEntryId === e.id).map((h) => (
               <p key={h.id} className={`mt-1 rounded p-2 ${h.clearedAt ? "bg-sky-100 text-sky-950" : "bg-red-100 font-semibold text-red-900"}`}>
                 {h.clearedAt ? <>Hold cleared by {h.clearedByName}, {dateTimeInWords(h.clearedAt, timeZone)}: <strong>{h.clearNote}</strong></> : "On hold: waiting for the engineer."}

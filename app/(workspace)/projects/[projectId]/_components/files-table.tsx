@@ -40,7 +40,7 @@ export function FilesTable({ page, projectId, timeZone }: { page: ServerPage<Fil
       },
     }),
     col.accessor("kind", { header: "Kind", cell: (c) => (c.getValue() === "photo" ? "Photo" : "Document (PDF)") }),
-    col.accessor("description", { header: "Description", enableSorting: false, cell: (c) => c.getValue() || <span className="text-slate-400">—</span> }),
+    col.accessor("description", { header: "Description", enableSorting: false, cell: (c) => c.getValue() || <span className="text-slate-600">—</span> }),
     col.accessor("sizeBytes", { header: "Size", cell: (c) => <span className="tabular-nums whitespace-nowrap">{size(c.getValue())}</span> }),
     col.accessor("createdAt", { header: "Uploaded", cell: (c) => <span className="whitespace-nowrap text-slate-600">{shortDate(c.getValue(), timeZone)}{c.row.original.uploadedByName ? ` · ${c.row.original.uploadedByName}` : ""}</span> }),
   ];

@@ -50,7 +50,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
   return (
     <>
       <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href="/projects" className="text-accent-800 hover:underline">Projects</Link> <span className="text-slate-400">/</span>{" "}
+        <Link href="/projects" className="text-accent-800 hover:underline">Projects</Link> <span className="text-slate-600">/</span>{" "}
         <Link href={`/projects/${project.id}`} className="text-accent-800 hover:underline">{project.name}</Link>
       </nav>
       <div className="mt-2 flex flex-wrap items-center gap-3">
@@ -60,7 +60,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
       </div>
       <p className="mt-1 text-sm text-slate-600">
         Saved {shortDateTime(shown.createdAt, user.timeZone)} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note.replace(/\.$/, "")}”` : ""}.
-        <span className="ml-1 font-mono text-xs text-slate-400" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
+        <span className="ml-1 font-mono text-xs text-slate-600" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
       </p>
       <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} />
       {isOld ? (

@@ -138,7 +138,16 @@ export function DesignEditor(props: EditorProps) {
           <div className="flex flex-wrap items-center justify-between gap-3">
             <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">
               {(["imperial", "metric"] as const).map((u) => (
-                <button key={u} type="button" role="radio" aria-checked={units === u} onClick={() => chooseUnits(u)} className={`rounded px-3 py-1 ${units === u ? "bg-accent-700 text-white" : "text-slate-700 hover:bg-slate-100"}`}>
+                <button key={u} type="button" role="radio" aria-checked={units === u} tabIndex={units === u ? 0 : -1} onClick={() => chooseUnits(u)}
+                  // Radio group (WAI-ARIA APG): one tab stop; the arrow keys move to and choose the other unit system.
+                  onKeyDown={(e) => {
+                    if (!["ArrowLeft", "ArrowRight", "ArrowUp", "ArrowDown"].includes(e.key)) return;
+                    e.preventDefault();
+                    const next = u === "imperial" ? "metric" : "imperial";
+                    chooseUnits(next);
+                    (e.currentTarget.parentElement?.querySelector(`[data-units="${next}"]`) as HTMLElement | null)?.focus();
+                  }}
+                  data-units={u} className={`rounded px-3 py-1 ${units === u ? "bg-accent-700 text-white" : "text-slate-700 hover:bg-slate-100"}`}>
                   {u === "imperial" ? "US units (ft, in, lb)" : "Metric (m, mm, kN)"}
                 </button>
               ))}

@@ -3,6 +3,7 @@
 import { formatQuantity, type UnitKind, type UnitSystem } from "@/components/design/units";
 import type { DesignResult } from "@/engine";
 import { UtilisationBar } from "./utilisation-bar";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 /** Everything the engine answers, in the order a designer reads it: the footing, its checks, concrete, loads, options, warnings. */
 const CHECK_UNITS: Record<string, UnitKind> = { lb: "lb", "kip-ft": "kipFt", in: "in", psf: "psf", ft: "ft" };
@@ -78,7 +79,7 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
           qh = {q(result.wind.velocity.qzWithKdPsf, "psf")} at mean height {q(result.geometry.meanHeightFt, "ft")} (ASCE {result.wind.edition}).
           {gov ? <> Governing case for bending: <strong>{gov.label}</strong>.</> : null}
         </p>
-        <div className="mt-2 overflow-x-auto">
+        <ScrollRegion label="Wind cases table" className="mt-2">
           <table className="min-w-full text-sm">
             <thead><tr><th className={th}>Case</th><th className={th}>CN wind / lee</th><th className={th}>Net force</th><th className={th}>Sideways</th><th className={th}></th></tr></thead>
             <tbody>
@@ -93,11 +94,11 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       </Section>
 
       <Section title="Loads on each post (ASD, worst combination)" id="res-posts">
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Loads on each post table">
           <table className="min-w-full text-sm">
             <thead><tr><th className={th}>Post</th><th className={th}>Tilt</th><th className={th}>Beam reaction factor</th><th className={th}>Shear</th><th className={th}>Moment at grade</th><th className={th}>Uplift</th><th className={th}>Down</th></tr></thead>
             <tbody>
@@ -117,11 +118,11 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
               })}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       </Section>
 
       <Section title="Hole diameter options" id="res-sweep">
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Hole diameter options table">
           <table className="min-w-full text-sm">
             <thead><tr><th className={th}>Hole</th><th className={th}>Depth</th><th className={th}>Set by</th><th className={th}>Concrete / hole</th><th className={th}>Job order</th><th className={th}>Checks</th></tr></thead>
             <tbody>
@@ -137,7 +138,7 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       </Section>
 
       {result.options.tiltEnvelope ? (

@@ -78,7 +78,7 @@ export default async function DiffPage({ params, searchParams }: Props) {
   return (
     <>
       <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href={`/projects/${project.id}`} className="text-accent-800 hover:underline">{project.name}</Link> <span className="text-slate-400">/</span>{" "}
+        <Link href={`/projects/${project.id}`} className="text-accent-800 hover:underline">{project.name}</Link> <span className="text-slate-600">/</span>{" "}
         <Link href={path} className="text-accent-800 hover:underline">{design.name}</Link>
       </nav>
       <h1 className="mt-2 text-2xl font-semibold">Revision {from.number} → revision {to.number}</h1>
