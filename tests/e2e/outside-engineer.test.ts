@@ -137,8 +137,9 @@ describe("outside engineer journey", () => {
     await page.goto(`${baseUrl()}/queue`);
     const row = page.getByRole("row").filter({ hasText: "Aspen Hollow cabin (demo)" });
     await row.getByText("Waiting for you").waitFor();
-    // Only the engaged project is listed; the contractor's other demo project is not.
-    await page.goto(`${baseUrl()}/projects`);
+    // Only the engaged project is listed; the contractor's other demo project is not. Searched for by
+    // its words: earlier suites add projects to the engineer's own firm, which can fill page 1.
+    await page.goto(`${baseUrl()}/projects?q=${encodeURIComponent("(demo)")}`);
     await page.getByText("Aspen Hollow cabin (demo)").waitFor();
     expect(await page.getByText("Larkspur Meadow residence (demo)").count()).toBe(0);
   });
