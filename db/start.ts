@@ -158,6 +158,7 @@ Pierwise is running.
     designer@demo.pierwise.test   engineer@demo.pierwise.test
     installer@demo.pierwise.test  admin@demo.pierwise.test
     designer@other.pierwise.test  (a second, unrelated organisation)
+    engineer@outside.pierwise.test  (an outside engineering firm engaged on one project)
   Press Ctrl-C to stop everything.
 `);
 }
