@@ -15,6 +15,7 @@ import { DesignsTable } from "./_components/designs-table";
 import { FilesTable } from "./_components/files-table";
 import { NewDesignForm } from "./_components/new-design-form";
 import { UploadForm } from "./_components/upload-form";
+import { shortDate } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Project" };
 type Props = { params: Promise<{ projectId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -78,7 +79,7 @@ export default async function ProjectPage({ params, searchParams }: Props) {
       {outsider ? null : (
         <EngagementsPanel projectId={project.id} canManage={canWrite}
           items={engagements.map((e) => ({ id: e.id, email: e.email, engineerName: e.engineerName, status: e.status,
-            when: e.status === "revoked" && e.revokedAt ? `revoked ${day(e.revokedAt)}` : e.respondedAt ? `${e.status} ${day(e.respondedAt)}` : `invited ${day(e.invitedAt)} by ${e.invitedByName}` }))} />
+            when: e.status === "revoked" && e.revokedAt ? `revoked ${shortDate(e.revokedAt, user.timeZone)}` : e.respondedAt ? `${e.status} ${shortDate(e.respondedAt, user.timeZone)}` : `invited ${shortDate(e.invitedAt, user.timeZone)} by ${e.invitedByName}` }))} />
       )}
 
       <Caution compact className="mt-8" />
@@ -86,5 +87,4 @@ export default async function ProjectPage({ params, searchParams }: Props) {
   );
 }
 
-const day = (d: Date) => new Date(d).toISOString().slice(0, 10);
 
