@@ -7,29 +7,21 @@
  */
 import fs from "node:fs";
 import path from "node:path";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { DESKTOP, PHONE, baseUrl, launch, shot } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, shot } from "../support/browser";
 import { ADMIN, DESIGNER, ENGINEER, INSTALLER, freshApproved, freshInReview, makeDesign } from "../support/review-fixtures";
 
 const AXE_SOURCE = fs.readFileSync(path.join(process.cwd(), "node_modules/axe-core/axe.min.js"), "utf8");
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  for (const c of contexts) await c.close();
-  await browser?.close();
-  await db.destroy();
-});
+const suite = browserSuite();
 
 /** A context (signed in through the real sign-in API when an e-mail is given). bypassCSP lets axe's script in past the nonce policy. */
 async function contextFor(email: string | null): Promise<BrowserContext> {
-  const context = await browser.newContext({ viewport: DESKTOP, baseURL: baseUrl(), bypassCSP: true });
-  contexts.push(context);
+  const context = await suite.browser.newContext({ viewport: DESKTOP, baseURL: baseUrl(), bypassCSP: true });
+  suite.keep(context);
   if (email) {
     const response = await context.request.post("/api/session", { data: { email, password: "pierwise-demo" } });
     if (!response.ok()) throw new Error(`sign-in as ${email} failed: ${response.status()}`);

@@ -6,27 +6,19 @@
  * page's top as the viewport shows it, the verify page on a phone).
  */
 import fs from "node:fs";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { sizeDesign, twoPostDesignInput, type DesignInputDraft } from "@/engine";
 import { db } from "@/db/client";
-import { DESKTOP, PHONE, baseUrl, launch, signedInContext } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, signedInContext } from "../support/browser";
 import { DESIGNER, ENGINEER, INSTALLER, makeDesign } from "../support/review-fixtures";
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  for (const c of contexts) await c.close();
-  await browser?.close();
-  await db.destroy();
-});
+const suite = browserSuite();
 
 async function as(email: string | null, viewport = DESKTOP): Promise<Page> {
-  const context = email ? await signedInContext(browser, email, viewport) : await browser.newContext({ viewport, baseURL: baseUrl() });
-  contexts.push(context);
+  const context = email ? await signedInContext(suite.browser, email, viewport) : await suite.browser.newContext({ viewport, baseURL: baseUrl() });
+  suite.keep(context);
   const page = await context.newPage();
   page.on("pageerror", (e) => console.error(`[${email}] page error: ${e.message}`));
   return page;

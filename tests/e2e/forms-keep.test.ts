@@ -4,29 +4,21 @@
  * form after its action; before useKeptForm a reset put selects back on their first option and
  * emptied file inputs.
  */
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { DESKTOP, PHONE, baseUrl, launch, signedInContext } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, signedInContext } from "../support/browser";
 import { DESIGNER, INSTALLER, freshApproved, makeDesign } from "../support/review-fixtures";
 
 // A valid 1×1 PNG, so the upload policy (sniffed by content) would accept it.
 const PNG_1PX = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  for (const c of contexts) await c.close();
-  await browser?.close();
-  await db.destroy();
-});
+const suite = browserSuite();
 
 async function as(email: string, viewport = DESKTOP): Promise<Page> {
-  const context = await signedInContext(browser, email, viewport);
-  contexts.push(context);
+  const context = await signedInContext(suite.browser, email, viewport);
+  suite.keep(context);
   return context.newPage();
 }
 

@@ -6,23 +6,15 @@
  * Screenshots of the queue at 1280 and 390 px go to /tmp/shots (outside-*) with SCREENSHOTS=1.
  */
 import crypto from "node:crypto";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { DESKTOP, PHONE, baseUrl, launch, shot, signedInContext } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
 import { firstLink, mailTo } from "../support/mailbox";
 import { DESIGNER, makeDesign } from "../support/review-fixtures";
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  for (const c of contexts) await c.close();
-  await browser?.close();
-  await db.destroy();
-});
+const suite = browserSuite();
 
 function watch(page: Page, who: string): Page {
   page.on("pageerror", (e) => console.error(`[${who}] page error: ${e.message}`));
@@ -50,8 +42,8 @@ describe("outside engineer journey", () => {
     const email = `olive-${crypto.randomUUID().slice(0, 8)}@outside-firm.test`;
 
     // 1. The designer engages the engineer from the project page.
-    const designerContext = await signedInContext(browser, DESIGNER);
-    contexts.push(designerContext);
+    const designerContext = await signedInContext(suite.browser, DESIGNER);
+    suite.keep(designerContext);
     const designer = watch(await designerContext.newPage(), "designer");
     await designer.goto(`${baseUrl()}/projects/${projectId}`);
     await designer.getByLabel("Engineer's e-mail").fill(email);
@@ -63,8 +55,8 @@ describe("outside engineer journey", () => {
     // 2. The engineer, with no account, signs up from the e-mailed link as their firm, then accepts.
     const link = firstLink(await mailTo(email, { subject: /Review engagement/ }));
     expect(link.startsWith(`${baseUrl()}/engagements/`)).toBe(true);
-    const engineerContext = await browser.newContext({ viewport: DESKTOP, baseURL: baseUrl() });
-    contexts.push(engineerContext);
+    const engineerContext = await suite.browser.newContext({ viewport: DESKTOP, baseURL: baseUrl() });
+    suite.keep(engineerContext);
     const engineer = watch(await engineerContext.newPage(), "engineer");
     await engineer.goto(link);
     await engineer.getByRole("heading", { level: 1, name: new RegExp(`Review ${projectName.replace(/[()]/g, "\\$&")}`) }).waitFor();
@@ -130,8 +122,8 @@ describe("outside engineer journey", () => {
   });
 
   it("shows the demo outside engineer's queue with the seeded revision waiting, at desktop and phone widths", async () => {
-    const context = await signedInContext(browser, "engineer@outside.pierwise.test");
-    contexts.push(context);
+    const context = await signedInContext(suite.browser, "engineer@outside.pierwise.test");
+    suite.keep(context);
     const page = watch(await context.newPage(), "demo outside engineer");
     await queueShots(page, "demo-queue");
     await page.goto(`${baseUrl()}/queue`);

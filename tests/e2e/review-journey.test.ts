@@ -8,28 +8,20 @@
  * the same call the editor makes; every other step goes through the pages.
  */
 import { PDFParse } from "pdf-parse";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { twoPostDesignInput } from "@/engine";
 import { db } from "@/db/client";
-import { DESKTOP, PHONE, baseUrl, launch, shot, signedInContext } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
 import { firstLink, mailTo } from "../support/mailbox";
 import { DESIGNER, ENGINEER, INSTALLER, makeDesign } from "../support/review-fixtures";
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  for (const c of contexts) await c.close();
-  await browser?.close();
-  await db.destroy();
-});
+const suite = browserSuite();
 
 async function as(email: string, viewport = DESKTOP): Promise<Page> {
-  const context = await signedInContext(browser, email, viewport);
-  contexts.push(context);
+  const context = await signedInContext(suite.browser, email, viewport);
+  suite.keep(context);
   const page = await context.newPage();
   // A broken client page shows up in the test output, not only as a timeout.
   page.on("pageerror", (e) => console.error(`[${email}] page error: ${e.message}`));
