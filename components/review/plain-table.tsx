@@ -9,7 +9,7 @@ export interface Table {
 }
 
 /** "112 rows", "1 row": the count a collapsed table shows on its closed summary. */
-export const rowCount = (n: number, noun = "row") => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
+export const rowCount = (n: number, noun = "row", plural = `${noun}s`) => `${n.toLocaleString("en-US")} ${n === 1 ? noun : plural}`;
 
 /**
  * A report table on screen: scrolls sideways inside its own box on a phone rather than squeezing
@@ -17,7 +17,7 @@ export const rowCount = (n: number, noun = "row") => `${n.toLocaleString("en-US"
  * their count, closed at first: it opens without JavaScript and from the keyboard, and a long table
  * (the 100-odd rows of loads per post) no longer pushes what a reviewer reads first off the screen.
  */
-export function PlainTable({ table, numericFrom = 1, id, collapsed = false, noun }: { table: Table; numericFrom?: number; id?: string; collapsed?: boolean; noun?: string }) {
+export function PlainTable({ table, numericFrom = 1, id, collapsed = false, noun, plural }: { table: Table; numericFrom?: number; id?: string; collapsed?: boolean; noun?: string; plural?: string }) {
   const body = (
     <ScrollRegion label={`${table.title} table`} className="mt-3">
       <table className="min-w-full text-sm">
@@ -42,7 +42,7 @@ export function PlainTable({ table, numericFrom = 1, id, collapsed = false, noun
       {table.note ? <p className="mt-1 text-sm text-slate-600">{table.note}</p> : null}
       {!table.rows.length ? null : collapsed ? (
         <details data-rows={table.rows.length} className="mt-2">
-          <summary className="cursor-pointer text-sm font-medium text-accent-800 hover:underline">Show the table ({rowCount(table.rows.length, noun)})</summary>
+          <summary className="cursor-pointer text-sm font-medium text-accent-800 hover:underline">Show the table ({rowCount(table.rows.length, noun, plural)})</summary>
           {body}
         </details>
       ) : body}

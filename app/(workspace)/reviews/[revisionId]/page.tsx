@@ -178,7 +178,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {w.message}</li>)}</ul>
             )}
           </section>
-          <PlainTable id="criteria-h" table={criteria} numericFrom={99} collapsed noun="criterion" />
+          <PlainTable id="criteria-h" table={criteria} numericFrom={99} collapsed noun="criterion" plural="criteria" />
           <PlainTable id="wind-h" table={windTable(r)} collapsed noun="wind case" />
           <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} collapsed />
           <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
