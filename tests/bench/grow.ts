@@ -137,11 +137,15 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
       FROM ${units} CROSS JOIN generate_series(0, 1099) i ${org}`,
   ];
   const took: string[] = [];
+  // One transaction: an approved revision needs its approval record by commit (20261203100000),
+  // and the reviews are inserted after the revisions they refer to.
+  await client.query("BEGIN");
   for (const sql of statements) {
     const started = Date.now();
     await client.query(sql);
     took.push(`${/INSERT INTO (\w+)/.exec(sql)?.[1]} ${((Date.now() - started) / 1000).toFixed(1)} s`);
   }
+  await client.query("COMMIT");
   // What autovacuum does on its own for insert-only tables, here at once: statistics, and the
   // visibility map that lets counts use index-only scans (TOAST is skipped: nothing there to do).
   await client.query("VACUUM (ANALYZE, PROCESS_TOAST FALSE)");
