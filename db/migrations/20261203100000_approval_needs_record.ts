@@ -10,16 +10,12 @@ import type { Knex } from "knex";
  *
  * The record's trigger functions read tables by name. A role with TEMPORARY could shadow a table
  * with a temporary one of the same name (pg_temp is searched first unless named), so every such
- * function gets a fixed search path with pg_temp last; db/lib/database-roles.ts also takes
- * TEMPORARY away from the app role.
+ * function (every trigger function of the schema at this point) gets a fixed search path with
+ * pg_temp last; db/lib/database-roles.ts also takes TEMPORARY away from the app role. A trigger
+ * function added later should say `SET search_path = pg_catalog, public, pg_temp` itself.
  */
-const PINNED_FUNCTIONS = [
-  "refuse_change_to_approved_revision()",
-  "refuse_change_to_approval()",
-  "refuse_change_to_approval_comment()",
-  "count_project_designs()",
-  "note_design_approval()",
-];
+const TRIGGER_FUNCTIONS = `SELECT p.oid::regprocedure AS fn FROM pg_proc p
+  WHERE p.pronamespace = 'public'::regnamespace AND p.prorettype = 'trigger'::regtype`;
 
 export async function up(knex: Knex): Promise<void> {
   await knex.raw(`
@@ -37,11 +33,11 @@ export async function up(knex: Knex): Promise<void> {
     END $$`);
   await knex.raw(`CREATE CONSTRAINT TRIGGER revisions_approval_needs_record AFTER INSERT OR UPDATE OF status ON revisions
     DEFERRABLE INITIALLY DEFERRED FOR EACH ROW WHEN (NEW.status = 'approved') EXECUTE FUNCTION refuse_approval_without_record()`);
-  for (const fn of PINNED_FUNCTIONS) await knex.raw(`ALTER FUNCTION ${fn} SET search_path = pg_catalog, public, pg_temp`);
+  for (const { fn } of (await knex.raw(TRIGGER_FUNCTIONS)).rows) await knex.raw(`ALTER FUNCTION ${fn} SET search_path = pg_catalog, public, pg_temp`);
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const fn of PINNED_FUNCTIONS) await knex.raw(`ALTER FUNCTION ${fn} RESET search_path`);
+  for (const { fn } of (await knex.raw(TRIGGER_FUNCTIONS)).rows) await knex.raw(`ALTER FUNCTION ${fn} RESET search_path`);
   await knex.raw("DROP TRIGGER IF EXISTS revisions_approval_needs_record ON revisions");
   await knex.raw("DROP FUNCTION IF EXISTS refuse_approval_without_record()");
 }
