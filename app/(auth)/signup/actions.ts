@@ -2,6 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { z } from "zod";
+import { controlCharacterState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { hashPassword } from "@/app/_lib/password";
 import { requestIp } from "@/app/_lib/request-ip";
@@ -16,6 +17,8 @@ const EMAIL_IN_USE = "That e-mail is already in use. Sign in instead, or ask you
 /** Creates an organisation and its first admin in one transaction, signs them in and opens the members page. */
 export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const values = { ...typedValues(form), extraRoles: form.getAll("extraRoles").join(",") };
+  const refused = controlCharacterState(values); // NUL and the like: a field-named error, as the API gives
+  if (refused) return refused;
   const parsed = signUpSchema.safeParse(signUpInput(form));
   if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   const input = parsed.data;

@@ -2,6 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { controlCharacterState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { redirect } from "next/navigation";
 import { requireRole, requireUser } from "@/app/_lib/auth";
@@ -17,6 +18,8 @@ import { removeLicence, saveLicence } from "@/db/queries/licences";
 export async function saveLicenceAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const user = await forPage(() => requireRole("engineer"), "/account");
   const values = typedValues(form);
+  const refused = controlCharacterState(values); // NUL and the like: a field-named error, as the API gives
+  if (refused) return refused;
   const parsed = licenceSchema.safeParse(licenceInput(form));
   if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
   await saveLicence(user.userId, parsed.data);

@@ -2,6 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { z } from "zod";
+import { controlCharacterState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { hashPassword } from "@/app/_lib/password";
 import { requestIp } from "@/app/_lib/request-ip";
@@ -23,6 +24,8 @@ import { findUserByEmail } from "@/db/queries/users";
 export async function engineerSignUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const token = String(form.get("token") ?? "");
   const values = typedValues(form);
+  const refused = controlCharacterState(values); // NUL and the like: a field-named error, as the API gives
+  if (refused) return refused;
   const engagement = token ? await findEngagementByToken(hashToken(token)) : undefined;
   if (!engagement || engagement.status !== "invited") return { message: "This engagement link is no longer open; ask the contractor to engage you again.", values };
   if (await findUserByEmail(engagement.email)) return { message: "An account with this e-mail exists already: sign in to answer.", values };

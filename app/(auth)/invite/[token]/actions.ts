@@ -2,6 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { z } from "zod";
+import { controlCharacterState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { hashPassword, verifyPassword } from "@/app/_lib/password";
 import { requestIp } from "@/app/_lib/request-ip";
@@ -20,6 +21,8 @@ import { invitationProblem } from "./messages";
  */
 export async function acceptInvitationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const values = typedValues(form, ["password", "token"]);
+  const refused = controlCharacterState(values); // NUL and the like: a field-named error, as the API gives
+  if (refused) return refused;
   const tokenHash = hashToken(String(form.get("token") ?? ""));
   const invitation = await findInvitation(tokenHash);
   if (!invitation) return { message: invitationProblem("unknown") };
