@@ -17,7 +17,7 @@ import crypto from "node:crypto";
 import { putObject } from "@/app/_lib/storage";
 import { freshApproved, freshAsBuilt, freshInReview, makeDesign, userId as reviewUserId } from "../support/review-fixtures";
 import { CALLERS, SIGN_IN, WHO, callAs, discoverEndpoints, everyone, formArgs, only, type MatrixRow } from "../support/access-matrix";
-import { freshInvitation, freshMember, freshReset, uniqueEmail, userId } from "../support/accounts";
+import { freshInvitation, freshMember, freshReset, freshSignUp, uniqueEmail, userId } from "../support/accounts";
 import { DEMO_CARD_ID, DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 import { defaultDesignInput } from "@/engine";
 import { demoInput, freshDesign, freshFile, freshProject } from "../support/project-fixtures";
@@ -48,8 +48,13 @@ const MATRIX: MatrixRow[] = [
 
   // ── accounts (issue 4): public flows, the token or the form is the permission ────────────────
   {
-    file: "app/(auth)/signup/actions.ts", name: "signUpAction", expect: everyone("→/admin/members"),
+    // Step 1 answers the same for every address (hardening finding 11); the e-mailed link finishes it.
+    file: "app/(auth)/signup/actions.ts", name: "signUpAction", expect: everyone(200),
     setup: async () => ({ args: formArgs({ organisationName: "Matrix Test Co.", name: "Mat Rix", email: uniqueEmail("signup"), password: "matrix-password-1" }) }),
+  },
+  {
+    file: "app/(auth)/signup/actions.ts", name: "confirmSignUpAction", expect: everyone("→/admin/members"),
+    setup: async () => ({ args: formArgs({ token: (await freshSignUp()).token }) }),
   },
   {
     file: "app/(auth)/invite/[token]/actions.ts", name: "acceptInvitationAction", expect: everyone("→/projects"),
