@@ -13,6 +13,14 @@ import { PATCH as projectRoute } from "@/app/api/projects/[projectId]/route";
 import { POST as projectsRoute } from "@/app/api/projects/route";
 import { POST as reviewRoute } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submitRoute } from "@/app/api/revisions/[revisionId]/submit/route";
+import { engageEngineerAction, revokeEngagementAction } from "@/app/(workspace)/projects/[projectId]/actions";
+import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
+import { POST as acceptRoute } from "@/app/api/engagements/[engagementId]/accept/route";
+import { POST as declineRoute } from "@/app/api/engagements/[engagementId]/decline/route";
+import { POST as engageRoute } from "@/app/api/projects/[projectId]/engagements/route";
+import { DELETE as revokeRoute } from "@/app/api/projects/[projectId]/engagements/[engagementId]/route";
+import { uniqueEmail } from "../support/accounts";
+import { engage, freshOutsideEngineer } from "../support/engagement-fixtures";
 import { db } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
 import { DEMO_CARD_ID } from "@/db/seeds/02_demo_projects";
@@ -26,8 +34,8 @@ type Outcome = string;
 
 interface UseCase {
   name: string;
-  /** Fresh data for one call; returns the id the route takes in its path and the action in its form. */
-  setup: () => Promise<string>;
+  /** Fresh data for one call; returns the id the route takes in its path and the action in its form (or several, by name). */
+  setup: () => Promise<string | Record<string, string>>;
   idName: string;
   route: (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
   method: string;
@@ -49,7 +57,26 @@ const USE_CASES: Record<string, UseCase> = {
   createDesign: { name: "create a design", setup: projectIdOf, idName: "projectId", route: designsRoute as UseCase["route"], method: "POST", action: createDesignAction },
   submit: { name: "submit for review", setup: async () => made(await makeDesign()).revisionId, idName: "revisionId", route: submitRoute as UseCase["route"], method: "POST", action: submitForReviewAction },
   decide: { name: "decide a review", setup: inReviewId, idName: "revisionId", route: reviewRoute as UseCase["route"], method: "POST", action: decideReviewAction },
+  engage: { name: "engage an outside engineer", setup: projectIdOf, idName: "projectId", route: engageRoute as UseCase["route"], method: "POST", action: engageEngineerAction },
+  revokeEngagement: { name: "revoke an engagement", setup: engagementIds("accepted"), idName: "", route: revokeRoute as UseCase["route"], method: "DELETE", action: revokeEngagementAction },
+  acceptEngagement: { name: "accept an engagement", setup: async () => (await engagementIds("invited")()).engagementId, idName: "engagementId", route: acceptRoute as UseCase["route"], method: "POST", action: answerWith("accept") },
+  declineEngagement: { name: "decline an engagement", setup: async () => (await engagementIds("invited")()).engagementId, idName: "engagementId", route: declineRoute as UseCase["route"], method: "POST", action: answerWith("decline") },
 };
+
+/** An outside engineer of their own firm, licensed in CO, made once for the engagement cases. */
+const PARITY_ENGINEER = "parity-engineer@example.test";
+let parityEngineer: Promise<{ email: string; userId: string }> | undefined;
+function engagementIds(status: "invited" | "accepted") {
+  return async () => {
+    parityEngineer ??= freshOutsideEngineer({ email: PARITY_ENGINEER });
+    const projectId = await projectIdOf();
+    return { projectId, engagementId: await engage(projectId, await parityEngineer, status) };
+  };
+}
+/** The queue's one answer action, with the answer the route's path names. */
+function answerWith(answer: "accept" | "decline"): UseCase["action"] {
+  return (prev, form) => (form.append("answer", answer), answerEngagementAction(prev, form));
+}
 
 let engineerId = "";
 let installerId = "";
@@ -79,6 +106,20 @@ const CASES: { useCase: keyof typeof USE_CASES; who: string | null; fields: () =
   { useCase: "decide", who: ENGINEER, fields: () => ({ decision: "request-changes" }), expected: "invalid:comments" },
   { useCase: "decide", who: DESIGNER, fields: () => ({ decision: "approve" }), expected: "forbidden" },
   { useCase: "decide", who: OUTSIDER, fields: () => ({ decision: "approve" }), expected: "not-found" },
+  { useCase: "engage", who: DESIGNER, fields: () => ({ email: uniqueEmail("parity-outside") }), expected: "done" },
+  { useCase: "engage", who: DESIGNER, fields: () => ({ email: "not an address" }), expected: "invalid:email" },
+  { useCase: "engage", who: DESIGNER, fields: () => ({ email: INSTALLER }), expected: "invalid:email" },
+  { useCase: "engage", who: INSTALLER, fields: () => ({ email: uniqueEmail("parity-outside") }), expected: "forbidden" },
+  { useCase: "engage", who: OUTSIDER, fields: () => ({ email: uniqueEmail("parity-outside") }), expected: "not-found" },
+  { useCase: "engage", who: null, fields: () => ({ email: uniqueEmail("parity-outside") }), expected: "signed-out" },
+  { useCase: "revokeEngagement", who: DESIGNER, fields: () => ({}), expected: "done" },
+  { useCase: "revokeEngagement", who: INSTALLER, fields: () => ({}), expected: "forbidden" },
+  { useCase: "revokeEngagement", who: OUTSIDER, fields: () => ({}), expected: "not-found" },
+  { useCase: "acceptEngagement", who: PARITY_ENGINEER, fields: () => ({}), expected: "done" },
+  { useCase: "acceptEngagement", who: DESIGNER, fields: () => ({}), expected: "not-found" },
+  { useCase: "acceptEngagement", who: null, fields: () => ({}), expected: "signed-out" },
+  { useCase: "declineEngagement", who: PARITY_ENGINEER, fields: () => ({}), expected: "done" },
+  { useCase: "declineEngagement", who: OUTSIDER, fields: () => ({}), expected: "not-found" },
 ];
 
 afterAll(async () => {
@@ -86,8 +127,12 @@ afterAll(async () => {
   for (const id of projectsMade) await db("projects").where({ id }).delete().catch(() => undefined);
 });
 
-async function viaRoute(useCase: UseCase, id: string, fields: Fields): Promise<Outcome> {
-  const response = await useCase.route(jsonRequest(useCase.method, "/x", fields), params(useCase.idName ? { [useCase.idName]: id } : {}));
+/** The ids a call names in its path (route) or form (action). */
+const idsOf = (useCase: UseCase, id: string | Record<string, string>): Record<string, string> =>
+  typeof id === "string" ? (useCase.idName ? { [useCase.idName]: id } : {}) : id;
+
+async function viaRoute(useCase: UseCase, id: string | Record<string, string>, fields: Fields): Promise<Outcome> {
+  const response = await useCase.route(jsonRequest(useCase.method, "/x", useCase.method === "DELETE" ? undefined : fields), params(idsOf(useCase, id)));
   const json = await response.json();
   if (json.project?.id) projectsMade.push(json.project.id);
   if (response.status === 200 || response.status === 201) return "done";
@@ -96,8 +141,8 @@ async function viaRoute(useCase: UseCase, id: string, fields: Fields): Promise<O
   return ({ 401: "signed-out", 403: "forbidden", 404: "not-found" } as Record<number, string>)[response.status] ?? `status ${response.status}`;
 }
 
-async function viaAction(useCase: UseCase, id: string, fields: Fields): Promise<Outcome> {
-  const outcome = await outcomeOf(() => useCase.action({}, toFormData(useCase.idName ? { ...fields, [useCase.idName]: id } : fields)));
+async function viaAction(useCase: UseCase, id: string | Record<string, string>, fields: Fields): Promise<Outcome> {
+  const outcome = await outcomeOf(() => useCase.action({}, toFormData({ ...fields, ...idsOf(useCase, id) })));
   if (outcome.kind === "redirect") {
     if (outcome.location.startsWith("/login")) return "signed-out";
     const made = outcome.location.match(/^\/projects\/([0-9a-f-]{36})$/);
