@@ -91,6 +91,19 @@ const MATRIX: MatrixRow[] = [
     file: "app/(workspace)/admin/members/actions.ts", name: "revokeInvitationAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
     setup: async () => ({ args: formArgs({ invitationId: (await freshInvitation()).id }) }),
   },
+  // The members admin's API doors: the same services as the forms above.
+  {
+    file: "app/api/invitations/route.ts", name: "POST", expect: only({ admin: 201, other: 201 }),
+    setup: async () => ({ body: { email: uniqueEmail("invite-api"), roles: ["installer"] } }),
+  },
+  {
+    file: "app/api/invitations/[invitationId]/route.ts", name: "DELETE", expect: only({ admin: 200 }),
+    setup: async () => ({ params: { invitationId: (await freshInvitation()).id } }),
+  },
+  {
+    file: "app/api/members/[membershipId]/route.ts", name: "PATCH", expect: only({ admin: 200 }),
+    setup: async () => ({ params: { membershipId: (await freshMember()).membershipId }, body: { roles: ["designer", "installer"] } }),
+  },
 
   // ── engineer licences (issue 4): each engineer's own; nobody else's to touch ─────────────────
   {

@@ -19,7 +19,11 @@ import { POST as acceptRoute } from "@/app/api/engagements/[engagementId]/accept
 import { POST as declineRoute } from "@/app/api/engagements/[engagementId]/decline/route";
 import { POST as engageRoute } from "@/app/api/projects/[projectId]/engagements/route";
 import { DELETE as revokeRoute } from "@/app/api/projects/[projectId]/engagements/[engagementId]/route";
-import { uniqueEmail } from "../support/accounts";
+import { changeRolesAction, deactivateMemberAction, inviteMemberAction, revokeInvitationAction } from "@/app/(workspace)/admin/members/actions";
+import { DELETE as invitationRoute } from "@/app/api/invitations/[invitationId]/route";
+import { POST as invitationsRoute } from "@/app/api/invitations/route";
+import { PATCH as memberRoute } from "@/app/api/members/[membershipId]/route";
+import { freshInvitation, freshMember, uniqueEmail } from "../support/accounts";
 import { engage, freshOutsideEngineer } from "../support/engagement-fixtures";
 import { db } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/seeds/01_demo_accounts";
@@ -28,7 +32,8 @@ import { toFormData } from "../support/access-matrix";
 import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, freshInReview, INSTALLER, makeDesign, OUTSIDER, userId } from "../support/review-fixtures";
 
-type Fields = Record<string, string>;
+const ADMIN = "admin@demo.pierwise.test";
+type Fields = Record<string, string | string[] | boolean>;
 /** done | invalid:<fields> | forbidden | not-found | signed-out | refused:<message> */
 type Outcome = string;
 
@@ -60,6 +65,10 @@ const USE_CASES: Record<string, UseCase> = {
   engage: { name: "engage an outside engineer", setup: projectIdOf, idName: "projectId", route: engageRoute as UseCase["route"], method: "POST", action: engageEngineerAction },
   revokeEngagement: { name: "revoke an engagement", setup: engagementIds("accepted"), idName: "", route: revokeRoute as UseCase["route"], method: "DELETE", action: revokeEngagementAction },
   acceptEngagement: { name: "accept an engagement", setup: async () => (await engagementIds("invited")()).engagementId, idName: "engagementId", route: acceptRoute as UseCase["route"], method: "POST", action: answerWith("accept") },
+  invite: { name: "invite a member", setup: async () => "", idName: "", route: (r) => invitationsRoute(r, {}), method: "POST", action: inviteMemberAction },
+  revokeInvitation: { name: "revoke an invitation", setup: async () => (await freshInvitation()).id, idName: "invitationId", route: invitationRoute as UseCase["route"], method: "DELETE", action: revokeInvitationAction },
+  changeRoles: { name: "change a member's roles", setup: async () => (await freshMember()).membershipId, idName: "membershipId", route: memberRoute as UseCase["route"], method: "PATCH", action: changeRolesAction },
+  deactivate: { name: "deactivate a member", setup: async () => (await freshMember()).membershipId, idName: "membershipId", route: memberRoute as UseCase["route"], method: "PATCH", action: deactivateMemberAction },
   declineEngagement: { name: "decline an engagement", setup: async () => (await engagementIds("invited")()).engagementId, idName: "engagementId", route: declineRoute as UseCase["route"], method: "POST", action: answerWith("decline") },
 };
 
@@ -120,6 +129,23 @@ const CASES: { useCase: keyof typeof USE_CASES; who: string | null; fields: () =
   { useCase: "acceptEngagement", who: null, fields: () => ({}), expected: "signed-out" },
   { useCase: "declineEngagement", who: PARITY_ENGINEER, fields: () => ({}), expected: "done" },
   { useCase: "declineEngagement", who: OUTSIDER, fields: () => ({}), expected: "not-found" },
+  { useCase: "invite", who: ADMIN, fields: () => ({ email: uniqueEmail("parity-invitee"), roles: ["installer"] }), expected: "done" },
+  { useCase: "invite", who: ADMIN, fields: () => ({ email: INSTALLER, roles: ["installer"] }), expected: "invalid:email" },
+  { useCase: "invite", who: ADMIN, fields: () => ({ email: "nope", roles: ["chief"] }), expected: "invalid:email,roles" },
+  { useCase: "invite", who: DESIGNER, fields: () => ({ email: uniqueEmail("parity-invitee"), roles: ["installer"] }), expected: "forbidden" },
+  { useCase: "invite", who: null, fields: () => ({ email: uniqueEmail("parity-invitee"), roles: ["installer"] }), expected: "signed-out" },
+  { useCase: "revokeInvitation", who: ADMIN, fields: () => ({}), expected: "done" },
+  { useCase: "revokeInvitation", who: DESIGNER, fields: () => ({}), expected: "forbidden" },
+  { useCase: "revokeInvitation", who: OUTSIDER, fields: () => ({}), expected: "not-found" },
+  { useCase: "revokeInvitation", who: ADMIN, id: "-".repeat(36), fields: () => ({}), expected: "not-found" },
+  { useCase: "changeRoles", who: ADMIN, fields: () => ({ roles: ["designer", "installer"] }), expected: "done" },
+  { useCase: "changeRoles", who: ADMIN, fields: () => ({ roles: ["chief"] }), expected: "invalid:roles" },
+  { useCase: "changeRoles", who: DESIGNER, fields: () => ({ roles: ["designer"] }), expected: "forbidden" },
+  { useCase: "changeRoles", who: OUTSIDER, fields: () => ({ roles: ["designer"] }), expected: "not-found" },
+  { useCase: "changeRoles", who: null, fields: () => ({ roles: ["designer"] }), expected: "signed-out" },
+  { useCase: "deactivate", who: ADMIN, fields: () => ({ active: false }), expected: "done" },
+  { useCase: "deactivate", who: INSTALLER, fields: () => ({ active: false }), expected: "forbidden" },
+  { useCase: "deactivate", who: OUTSIDER, fields: () => ({ active: false }), expected: "not-found" },
 ];
 
 afterAll(async () => {
@@ -136,13 +162,16 @@ async function viaRoute(useCase: UseCase, id: string | Record<string, string>, f
   const json = await response.json();
   if (json.project?.id) projectsMade.push(json.project.id);
   if (response.status === 200 || response.status === 201) return "done";
-  if (response.status === 422) return `invalid:${json.errors.map((e: { path: string }) => e.path).sort().join(",")}`;
+  // The form shows a list's errors beside the list ("roles.0" → "roles", app/_lib/action-errors.ts); compare by field.
+  if (response.status === 422) return `invalid:${[...new Set(json.errors.map((e: { path: string }) => e.path.replace(/(\.\d+)+$/, "")))].sort().join(",")}`;
   if (response.status === 409) return `refused:${json.errors[0].message}`;
   return ({ 401: "signed-out", 403: "forbidden", 404: "not-found" } as Record<number, string>)[response.status] ?? `status ${response.status}`;
 }
 
 async function viaAction(useCase: UseCase, id: string | Record<string, string>, fields: Fields): Promise<Outcome> {
-  const outcome = await outcomeOf(() => useCase.action({}, toFormData({ ...fields, ...idsOf(useCase, id) })));
+  // A form sends text: true/false as the words (the API's booleans).
+  const form = Object.fromEntries(Object.entries(fields).map(([k, v]) => [k, typeof v === "boolean" ? String(v) : v]));
+  const outcome = await outcomeOf(() => useCase.action({}, toFormData({ ...form, ...idsOf(useCase, id) })));
   if (outcome.kind === "redirect") {
     if (outcome.location.startsWith("/login")) return "signed-out";
     const made = outcome.location.match(/^\/projects\/([0-9a-f-]{36})$/);
@@ -168,6 +197,18 @@ describe("each API route and its server action give the same outcome", () => {
       outcomes.push(await door(useCase, id, c.fields()));
     }
     expect(outcomes).toEqual([c.expected, c.expected]);
+  });
+
+  it("the last active admin is kept, refused with the same words by both", async () => {
+    const outcomes: Outcome[] = [];
+    for (const door of [viaRoute, viaAction]) {
+      const [org] = await db("organisations").insert({ name: "Parity Solo Co (invented)" }).returning("id");
+      const admin = await freshMember({ organisationId: org.id, roles: ["admin"] });
+      await actAs(admin.email);
+      outcomes.push(await door(USE_CASES.changeRoles, admin.membershipId, { roles: ["designer"] }));
+    }
+    expect(outcomes[0]).toMatch(/^refused:You are the last active admin of Parity Solo Co \(invented\), so you cannot remove the admin role/);
+    expect(outcomes[1]).toBe(outcomes[0]);
   });
 
   it("a conflict is refused with the same words by both", async () => {

@@ -3,14 +3,14 @@ import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import { createInvitation, findInvitationById, revokeInvitation as expireInvitation } from "@/db/queries/invitations";
 import { changeMembership, findMembership, listMembers, type MemberRow, type MembershipChange } from "@/db/queries/members";
-import { ROLE_LABELS } from "@/db/roles";
+import { ROLE_LABELS, type Role } from "@/db/roles";
 import { assertOwned, assertRole, type CurrentUser } from "../auth";
 import { env } from "../env";
 import { AccessError, ConflictError, ValidationError, notFound } from "../errors";
 import { invitationMail } from "../invitation-mail";
 import { deliverSoon, enqueueMail } from "../outbox";
 import { requestIp } from "../request-ip";
-import { changeRolesSchema, inviteSchema } from "../schemas/members";
+import { changeRolesSchema, inviteSchema, memberPatchSchema } from "../schemas/members";
 import { INVITATION_TTL_MS, newToken } from "../tokens";
 import type { Body } from "./input";
 
@@ -91,15 +91,36 @@ async function applyChange(user: CurrentUser, member: MemberRow, wanted: Members
 export async function changeRoles(user: CurrentUser, membershipId: string, body: Body): Promise<{ member: MemberRow; roles: string[] }> {
   const member = await adminAndMember(user, membershipId);
   const { roles } = changeRolesSchema.parse({ membershipId, ...((await body()) as object) });
+  await setRoles(user, member, roles);
+  return { member, roles: roles.map((r) => ROLE_LABELS[r] ?? r) };
+}
+
+async function setRoles(user: CurrentUser, member: MemberRow, roles: Role[]): Promise<void> {
   if (member.userId === user.userId && roles.includes("engineer") && !member.roles.includes("engineer")) {
     throw new AccessError(403, "You cannot give yourself the reviewing-engineer role: another admin must grant it.");
   }
   await applyChange(user, member, { roles }, "role-changed", "remove the admin role");
-  return { member, roles: roles.map((r) => ROLE_LABELS[r] ?? r) };
 }
 
 /** Deactivates (their sessions in the organisation end; past work stays attributed) or reactivates a member. */
 export async function setMemberActive(user: CurrentUser, membershipId: string, active: boolean): Promise<MemberRow> {
-  const member = await adminAndMember(user, membershipId);
+  return setActive(user, await adminAndMember(user, membershipId), active);
+}
+
+function setActive(user: CurrentUser, member: MemberRow, active: boolean): Promise<MemberRow> {
   return applyChange(user, member, { active }, active ? "member-reactivated" : "member-deactivated", active ? "reactivate them" : "deactivate them");
+}
+
+/** The API's one door for a membership: `{ roles }` or `{ active }`, each the same use case as its form. */
+export async function updateMember(user: CurrentUser, membershipId: string, body: Body): Promise<MemberRow> {
+  const member = await adminAndMember(user, membershipId);
+  const patch = memberPatchSchema.parse(await body());
+  if (patch.roles) await setRoles(user, member, patch.roles);
+  else await setActive(user, member, patch.active!);
+  return (await findMembership(membershipId))!;
+}
+
+/** What the API answers about a member. */
+export function memberView(m: MemberRow) {
+  return { membershipId: m.membershipId, userId: m.userId, name: m.name, email: m.email, roles: m.roles, active: !m.deactivatedAt };
 }
