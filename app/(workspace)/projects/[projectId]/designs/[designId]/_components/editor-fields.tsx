@@ -4,6 +4,7 @@ import { useState } from "react";
 import { useController } from "react-hook-form";
 import { FIELD_META } from "@/components/design/fields";
 import { fromDisplay, roundFor, toDisplay, unitLabel, type UnitKind, type UnitSystem } from "@/components/design/units";
+import { PinnedNotes } from "./pinned-comments";
 
 /**
  * Editor inputs bound to react-hook-form by the schema's dotted path. Each shows its label, its
@@ -17,7 +18,7 @@ function idFor(name: string) {
   return `in-${name.replace(/\./g, "-")}`;
 }
 
-function Shell({ name, label, unit, error, children, help }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string }) {
+function Shell({ name, label, unit, error, children, help, value }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string; value: unknown }) {
   const meta = FIELD_META[name];
   const id = idFor(name);
   const helpText = help ?? meta?.help;
@@ -30,6 +31,7 @@ function Shell({ name, label, unit, error, children, help }: { name: string; lab
       </div>
       {error ? <p id={`${id}-error`} className="text-sm font-medium text-red-700">{error}</p> : null}
       {helpText ? <p id={`${id}-help`} className="text-xs text-slate-500">{helpText}</p> : null}
+      <PinnedNotes name={name} value={value} />
     </div>
   );
 }
@@ -48,7 +50,7 @@ export function NumberField({ name, units, optional = false, label, help }: { na
   const error = fieldState.error?.message;
   const unit = unitLabel(kind, units);
   return (
-    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error}>
+    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error} value={value}>
       <input
         id={idFor(name)}
         name={name}
@@ -88,7 +90,7 @@ export function ListField({ name, units, optional = false }: { name: string; uni
   const shown = list.map((v) => String(roundFor(toDisplay(v, kind, units), kind, units, 1))).join(", ");
   const error = fieldState.error?.message ?? firstNestedError(fieldState.error);
   return (
-    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error}>
+    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error} value={field.value}>
       <input
         id={idFor(name)}
         name={name}
@@ -126,7 +128,7 @@ export function SelectField({ name, options, numeric = false, onPick }: { name: 
   const { field, fieldState } = useController({ name });
   const error = fieldState.error?.message;
   return (
-    <Shell name={name} error={error}>
+    <Shell name={name} error={error} value={field.value}>
       <select
         id={idFor(name)}
         name={name}
@@ -155,6 +157,7 @@ export function CheckField({ name }: { name: string }) {
         <label htmlFor={id} className="text-sm font-medium text-slate-800">{meta?.label ?? name}</label>
         {meta?.help ? <p id={`${id}-help`} className="text-xs text-slate-500">{meta.help}</p> : null}
         {fieldState.error ? <p className="text-sm font-medium text-red-700">{fieldState.error.message}</p> : null}
+        <PinnedNotes name={name} value={field.value} />
       </div>
     </div>
   );
