@@ -3,18 +3,23 @@
  * and the editions and sections the calculation used.
  */
 import type { DesignInput } from "./schema";
+import { imperialText, qty, says, type QuantityText } from "./quantity-text";
 
 export const DEFER_TO_CODE =
   "Preliminary sizing only. The local building code, the authority having jurisdiction and a licensed professional engineer govern; do not build from these numbers until a licensed engineer has reviewed and approved them.";
 
-export const SITE_CAUTIONS = [
+/** The site cautions with their numbers as quantities (screens word them in the reader's units). */
+export const SITE_CAUTION_TEXTS: readonly QuantityText[] = [
   "Call before you dig: call your local utility-locate service (811 in the US) and wait for buried utilities to be marked before any hole is drilled.",
   "Open holes are a fall and collapse hazard: cover or barricade them, never stand in an unshored hole deeper than your waist, and keep spoil back from the edge.",
   "Wet concrete burns skin and eyes: wear gloves and eye protection. Bags, posts and beams are heavy: lift with two people or a machine, and mind the auger's torque and pinch points.",
   "Do not lift or fasten modules in high or gusty wind: a module is a sail and can injure the crew or be torn loose.",
   "Treat module leads as live in daylight; keep connectors capped until the electrician takes over.",
-  "Check the concrete mix (≥ 2,500 psi premix is typical; the code minimum for post backfill is 2,000 psi) and let it cure before loading the posts.",
-];
+  says`Check the concrete mix (at least ${qty(2500, "psi")} premix is typical; the code minimum for post backfill is ${qty(2000, "psi")}) and let it cure before loading the posts.`,
+].map((c) => (typeof c === "string" ? [c] : c));
+
+/** The site cautions in US customary words (results, CLI, plain text). */
+export const SITE_CAUTIONS: string[] = SITE_CAUTION_TEXTS.map(imperialText);
 
 export const WIND_METHOD_NOTE =
   "Wind: ASCE 7 open monoslope free-roof method (Fig. 27.3-4) for both editions. ASCE 7-22's provisions specific to ground-mounted fixed-tilt solar arrays are not implemented.";

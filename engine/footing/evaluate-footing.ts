@@ -6,6 +6,7 @@
  * (IBC §1809.4 depth of footings, 12 in minimum; §1809.5 frost protection). Diameter checks: bearing (Table 1806.2), hole ≥ post + 4 in (§1807.3.3),
  * post bending (AISC 360 §F8, independent of the hole).
  */
+import { imperialText, qty, says } from "../quantity-text";
 import type { FactoredPostLoad } from "../loads/factored";
 import { bearingPressurePsf } from "./bearing";
 import { makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
@@ -57,7 +58,8 @@ function lateralCheck(row: FactoredPostLoad | null, ratio: number, source: strin
   const byMoment = P < 1e-9;
   const demand = byMoment ? M : P;
   const c = makeCheck("lateral", demand, ratio > 0 ? demand / ratio : Infinity, byMoment ? "lb-ft" : "lb", source, gov(row), needIn);
-  c.detail = byMoment ? "pure moment at grade" : `P = ${P.toFixed(0)} lb at h = M/P = ${(M / P).toFixed(2)} ft above grade`;
+  c.detailText = byMoment ? ["pure moment at grade"] : says`P = ${qty(Math.round(P), "lb")} at h = M/P = ${qty(M / P, "ft", 2)} above grade`;
+  c.detail = imperialText(c.detailText);
   return c;
 }
 
