@@ -36,6 +36,10 @@ export const BEAM_SHARING_CONTINUOUS =
   "Post loads are the reactions of the beam continuous over its posts (three-moment equation, rigid supports, overhangs as cantilevers); every load case is uniform along the beam, so each post's reaction factor (its share ÷ its tributary share) is the same for dead, snow and every wind case.";
 export const BEAM_SHARING_TWO_POSTS = "Two posts: each carries its tributary share, which statics gives exactly (reaction factor 1).";
 
+/** The footing-depth sections, with the 12 in minimum as a quantity. */
+export const FOOTING_DEPTH_SECTIONS_TEXT: QuantityText = says`IBC §1809.4 depth of footings (${qty(12, "in")} minimum); §1809.5 frost protection`;
+const FOOTING_DEPTH_SECTIONS = imperialText(FOOTING_DEPTH_SECTIONS_TEXT);
+
 export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; aisc: string; sections: string[] } {
   const e = input.site.edition;
   const lateral = input.posts.constrainedAtGrade ? "IBC §1807.3.2.2 Eq. 18-2 (constrained)" : "IBC §1807.3.2.1 Eq. 18-1 (nonconstrained)";
@@ -50,7 +54,7 @@ export function sectionsUsed(input: DesignInput): { asce: string; ibc: string; a
     soil,
     ...(input.posts.isolatedPoleIncrease ? ["IBC §1806.3.4 lateral value doubled for an isolated pole (designer's choice)"] : []),
     "IBC §1807.3.3 post backfill and hole size",
-    "IBC §1809.4 depth of footings (12 in minimum); §1809.5 frost protection",
+    FOOTING_DEPTH_SECTIONS,
     "AISC 360-16 §F8 round HSS flexure, Ω = 1.67",
   ];
   return { asce: `ASCE 7-${e.slice(2)}`, ibc: "IBC 2018/2021", aisc: "AISC 360-16", sections };

@@ -7,3 +7,9 @@ import { parseUnitSystem, UNITS_COOKIE } from "@/components/format/unit-preferen
 export async function readerUnits(): Promise<UnitSystem> {
   return parseUnitSystem((await cookies()).get(UNITS_COOKIE)?.value);
 }
+
+/** The cookie's choice, or undefined when this browser has not chosen through it yet. */
+export async function chosenUnits(): Promise<UnitSystem | undefined> {
+  const value = (await cookies()).get(UNITS_COOKIE)?.value;
+  return value ? parseUnitSystem(value) : undefined;
+}

@@ -1,6 +1,7 @@
 import { imperialText, isQuantity, type QuantityText, type QuantityUnit } from "@/engine/quantity-text";
 import { CHECK_TITLE_TEXTS } from "@/engine/footing/checks";
-import { formatQuantity, type UnitKind, type UnitSystem } from "./quantity";
+import { knownText } from "@/engine/known-texts";
+import { formatQuantity, unitLabel, type UnitKind, type UnitSystem } from "./quantity";
 
 /** The display kind of each unit an engine sentence carries. */
 const KIND: Record<QuantityUnit, UnitKind> = {
@@ -30,3 +31,21 @@ export function checkTitleIn(check: { id?: string; checkId?: string; title: stri
   const id = check.id ?? check.checkId ?? "";
   return id in CHECK_TITLE_TEXTS ? sayIn(CHECK_TITLE_TEXTS[id as keyof typeof CHECK_TITLE_TEXTS], system) : check.title;
 }
+
+/** A stored engine sentence (caution, section, source, mix line) in the reader's units. */
+export function storedIn(stored: string, system: UnitSystem): string {
+  return system === "imperial" ? stored : sayIn(knownText(stored), system);
+}
+
+/**
+ * The schema's range message ("… must be between 24 and 240 in") in the field's own unit system:
+ * the field knows its unit kind, so only that unit's range is reworded (metric "between 610 and 6,096 mm").
+ */
+export function rangeMessageIn(message: string | undefined, kind: UnitKind, units: UnitSystem): string | undefined {
+  const imperial = unitLabel(kind, "imperial");
+  if (!message || units === "imperial" || !imperial) return message;
+  const escaped = imperial.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+  return message.replace(new RegExp(`(-?[\\d,.]+) and (-?[\\d,.]+) ${escaped}(?![\\w])`), (_, a: string, b: string) =>
+    `${formatQuantity(Number(a.replace(/,/g, "")), kind, units)} and ${formatQuantity(Number(b.replace(/,/g, "")), kind, units)}`.replace(` ${unitLabel(kind, units)} and`, " and"));
+}
+

@@ -118,3 +118,18 @@ export function formatBags(count: number, bagLb: number, system: UnitSystem): st
 export function bagSize(bagLb: number, system: UnitSystem): string {
   return system === "imperial" ? `${bagLb}-lb bags` : `${formatQuantity(bagLb, "lbMass", system)} bags`;
 }
+
+/** ASME B36.10 nominal pipe size → its metric nominal diameter (DN), ISO 6708 [common practice]. */
+const PIPE_DN: Record<string, number> = { "2-1/2": 65, "3": 80, "3-1/2": 90, "4": 100, "5": 125, "6": 150 };
+
+/** A standard pipe by its trade size: "3 in standard pipe" / "DN 80 standard pipe (NPS 3)". */
+export function formatPipeSize(size: string, system: UnitSystem): string {
+  const nps = size.replace("-", " ");
+  if (system === "imperial" || !PIPE_DN[size]) return `${nps} in standard pipe`;
+  return `DN ${PIPE_DN[size]} standard pipe (NPS ${nps})`;
+}
+
+/** The footing in one phrase, the same on every screen: "18 in diameter × 66 in deep" / "457 mm diameter × 1,676 mm deep". */
+export function formatFootingSize(diameterIn: number, depthIn: number, system: UnitSystem): string {
+  return `${formatQuantity(diameterIn, "in", system)} diameter × ${formatQuantity(depthIn, "in", system)} deep`;
+}

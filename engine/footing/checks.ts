@@ -49,6 +49,10 @@ export const CHECK_TITLES: Record<CheckId, string> = Object.fromEntries(
   Object.entries(CHECK_TITLE_TEXTS).map(([id, text]) => [id, imperialText(text)]),
 ) as Record<CheckId, string>;
 
+/** The frost check's source, with the 12 in minimum as a quantity. */
+export const FROST_CHECK_SOURCE_TEXT: QuantityText = says`IBC §1809.4 (depth of footings, ${qty(12, "in")} minimum), §1809.5 (frost protection)`;
+export const FROST_CHECK_SOURCE = imperialText(FROST_CHECK_SOURCE_TEXT);
+
 /** The structured title of a check id (an unknown id from an older result reads as itself). */
 export function checkTitleText(id: string): QuantityText {
   return CHECK_TITLE_TEXTS[id as CheckId] ?? [id];

@@ -9,7 +9,7 @@
 import { imperialText, qty, says } from "../quantity-text";
 import type { FactoredPostLoad } from "../loads/factored";
 import { bearingPressurePsf } from "./bearing";
-import { makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
+import { FROST_CHECK_SOURCE, makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
 import { lateralRatio, requiredLateralDepthFt } from "./embedment";
 import type { PipeMoment } from "./pipe";
 import { roundUpIn } from "./solve-depth";
@@ -150,7 +150,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   const checks: FootingCheck[] = [
     lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
     makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
-    makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (depth of footings, 12 in minimum), §1809.5 (frost protection)", null, need.frost),
+    makeCheck("frost", frostIn, depthIn, "in", FROST_CHECK_SOURCE, null, need.frost),
     makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.netBearingSoilPcf ? `${ctx.soil.source}; net pressure, soil removed credited at ${ctx.netBearingSoilPcf} pcf (engineer's option)` : ctx.soil.source, brgRow && gov(brgRow)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 backfill (value as recalled; confirm against the printed code)", null),
     makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),
