@@ -10,7 +10,7 @@
  * sequential scan of a table over 10,000 rows.
  *
  *   npm run bench:db                      ×1, ×100, ×1000, 10 timed requests per route after 2 warm-ups
- *   npm run bench:db -- --scales=1,10     smaller, for trying the script
+ *   npm run bench:db -- --scales=1,100    a subset (also --sizes=, or PIERWISE_BENCH_SCALES=1,100)
  *   npm run bench:db -- --requests=30
  *   npm run bench:db -- --json=out.json   also write the numbers as JSON
  *
@@ -37,7 +37,7 @@ import { explainRoute, percentile, setAutoExplain, signIn, tableSizes, timeRoute
 const root = fileURLToPath(new URL("../..", import.meta.url));
 const workDir = path.join(root, ".test-data", `bench-${process.pid}`);
 const arg = (name: string) => process.argv.find((a) => a.startsWith(`--${name}=`))?.split("=")[1];
-const scales = (arg("scales") ?? "1,100,1000").split(",").map(Number).filter((n) => n > 0).sort((a, b) => a - b);
+const scales = (arg("scales") ?? arg("sizes") ?? process.env.PIERWISE_BENCH_SCALES ?? "1,100,1000").split(",").map(Number).filter((n) => n > 0).sort((a, b) => a - b);
 const requests = Number(arg("requests") ?? 10);
 const jsonOut = arg("json");
 const APP_ROLE = "pierwise_bench";
@@ -52,6 +52,7 @@ const personas: Record<string, string> = {
   designer: "designer@demo.pierwise.test",
   engineer: "engineer@demo.pierwise.test",
   installer: "installer@demo.pierwise.test",
+  outside: "engineer@outside.pierwise.test",
 };
 
 /** Every list route and page, as the demo organisation's people use them. */
@@ -67,6 +68,9 @@ function routes(bigDesignId: string, auditLastPage: number, projectsMidPage: num
     { name: "page design ?r_sort=depthIn", persona: "designer", path: `${design}?r_sort=depthIn&r_dir=desc` },
     { name: "page /reviews (engineer)", persona: "engineer", path: "/reviews" },
     { name: "page /reviews (designer)", persona: "designer", path: "/reviews" },
+    { name: "page /queue (engineer)", persona: "engineer", path: "/queue" },
+    { name: "page /queue?state=waiting (engineer)", persona: "engineer", path: "/queue?state=waiting" },
+    { name: "page /queue (outside engineer)", persona: "outside", path: "/queue" },
     { name: "page /field", persona: "installer", path: "/field" },
     { name: "page /admin/audit", persona: "admin", path: "/admin/audit" },
     // Keyset paging asks for the oldest page by name; offset paging (before issue 19) by number.
@@ -154,8 +158,14 @@ async function main(): Promise<void> {
   await migrator.seed.run();
   await migrator.destroy();
 
-  const admin = new pg.Client({ host: cluster.dataDir, port: cluster.port, user: "postgres", database: "pierwise_bench" });
-  await admin.connect();
+  const superuser = async () => {
+    const client = new pg.Client({ host: cluster!.dataDir, port: cluster!.port, user: "postgres", database: "pierwise_bench" });
+    await client.connect();
+    return client;
+  };
+  const admin = await superuser();
+  // A second connection shares the generation (a bulk load: triggers off, indexes rebuilt after; grow.ts).
+  const loader = await superuser();
   await prepare(admin);
   const bigDesignId = (await admin.query(`SELECT ${BIG_DESIGN_ID_SQL} AS id`)).rows[0].id as string;
   console.log(`bench:db: cluster, migrations and seed ready (${elapsed()})`);
@@ -179,7 +189,7 @@ async function main(): Promise<void> {
   const results: ScaleResult[] = [];
   let units = 0;
   for (const scale of scales) {
-    await grow(admin, units, scale);
+    await grow(admin, units, scale, { bulk: { extra: [loader] } });
     units = scale;
     const counts = await tableCounts(admin);
     console.log(`bench:db: grown to ×${scale} (${elapsed()})`);
@@ -204,6 +214,7 @@ async function main(): Promise<void> {
   printGrowth(results);
   if (jsonOut) fs.writeFileSync(jsonOut, JSON.stringify(results, null, 2));
   await admin.end();
+  await loader.end();
   console.log(`\nbench:db: done in ${elapsed()}`);
 }
 
