@@ -9,6 +9,7 @@ import { DesignReviewBar } from "@/components/review/design-review-bar";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
+import { chosenUnits } from "@/app/_lib/unit-preference";
 import { RevisionsTable } from "./_components/revisions-table";
 import { shortDateTime } from "@/components/ui/dates";
 import { editorPinnedComments } from "@/app/_lib/services/review-comments";
@@ -91,6 +92,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
           readOnly={!canWrite || isOld}
           card={card ? { label: `${card.jurisdiction}, ${card.state}`, values: card.values } : null}
           pinnedComments={pinnedComments}
+          units={await chosenUnits()}
         />
       </div>
 
