@@ -77,7 +77,16 @@ export function startingSize(input: DesignInput): StartingSize {
   const closest = sizeParsedDesign(withSize(input, pipe, "auto"));
   const kept = withSize(input, pipe, closest.footing.diameterIn);
   const result = sizeParsedDesign(kept);
-  return { input: kept, result, pass: result.footing.pass, changes: describeChanges(input, kept, pipe, false, bendingPipe !== null), advice: adviceFor(input, result, bendingPipe) };
+  const changes = describeChanges(input, kept, pipe, false, bendingPipe !== null);
+  if (result.footing.pass) {
+    // Every check passes, only deeper than the hole the designer called reasonable: say so, no advice needed.
+    const hole = changes.findIndex((c) => c.includes(" in holes"));
+    const deep = `${kept.posts.holeDiameterIn} in holes ${result.footing.depthIn} in deep: every check passes, deeper than the ${input.posts.maxAutoDepthIn} in set as the deepest reasonable hole (more posts or larger augers make it shallower)`;
+    if (hole === -1) changes.push(deep);
+    else changes[hole] = deep;
+    return { input: kept, result, pass: true, changes, advice: [] };
+  }
+  return { input: kept, result, pass: false, changes, advice: adviceFor(input, result, bendingPipe) };
 }
 
 function describeChanges(from: DesignInput, to: DesignInput, pipe: PipeSize, pass: boolean, carriesBending = true): string[] {
