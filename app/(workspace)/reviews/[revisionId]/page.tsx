@@ -2,7 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { checkOutcome } from "@/components/review/check-outcome";
+import { checkOutcome, outcomeIn, overridesIn } from "@/components/review/check-outcome";
+import { readerUnits } from "@/app/_lib/unit-preference";
+import { formatQuantity } from "@/components/format/quantity";
+import { warningIn } from "@/components/format/quantity-text";
+import { UnitsSwitch } from "@/components/format/units-switch";
 import { dateInWords } from "@/components/ui/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
 import { checksTable, concreteLines, criteriaTable, fmt, governingLines, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
@@ -69,21 +73,25 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
   const inputs = Object.entries(flatInputs(ctx.input));
   const offCard = criteriaDifferences(ctx.input, ctx.criteria?.values);
-  const outcome = checkOutcome(r);
+  const units = await readerUnits();
+  // Check titles in the reader's units for every panel below (the hole-size check names a length).
+  const outcome = outcomeIn(checkOutcome(r), units);
+  const len = (inches: number) => formatQuantity(inches, "in", units, { decimals: 2 });
 
   return (
     <div className="space-y-6">
       <div className="space-y-2">
         <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
-        <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
+        <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []} units={units}
           lead={outcome.failing.length && ctx.status !== "approved" ? "A failing check can still be submitted and approved, but only with the engineer's written reason for each one." : undefined} />
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <span>Status:</span> <StatusBadge status={standing.status} onHold={standing.holds.length > 0} />
           <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {dateInWords(ctx.createdAt, ctx.timeZone)}</span>
           {ctx.factsPinned ? <span className="text-slate-600">· project facts as approved</span> : null}
         </div>
-        <div className="no-print flex flex-wrap gap-2 text-sm">
+        <div className="no-print flex flex-wrap items-center gap-2 text-sm">
+          <UnitsSwitch units={units} />
           <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800">Download calculation report (PDF)</a>
           <Link href={`/projects/${ctx.projectId}/designs/${ctx.designId}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Open the design</Link>
           {ctx.status === "approved" ? <Link href={`/field/${ctx.id}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Field spec for the crew</Link> : null}
@@ -103,7 +111,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
             {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
               <ul className="mt-2 space-y-1 text-sm">
-                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span>: {inputValueText(c.path, c.from)} → <strong>{inputValueText(c.path, c.to)}</strong></li>)}
+                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span>: {inputValueText(c.path, c.from, units)} → <strong>{inputValueText(c.path, c.to, units)}</strong></li>)}
               </ul>
             )}
             {previousComments.length ? (
@@ -114,7 +122,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             ) : null}
           </section>
 
-          <PlainTable id="criteria-h" table={criteriaTable(ctx)} numericFrom={99} />
+          <PlainTable id="criteria-h" table={criteriaTable(ctx, units)} numericFrom={99} />
 
           <section aria-labelledby="inputs-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="inputs-h" className="text-base font-semibold">Every input</h2>
@@ -122,8 +130,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               {inputs.map(([path, value]) => (
                 <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
                   <dt className="text-slate-700">{fieldLabel(path)}</dt>
-                  <dd className="font-medium tabular-nums">{inputValueText(path, value)}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
-                  {path in offCard ? <dd className="w-full rounded bg-orange-100 px-2 py-1 text-xs font-medium text-orange-950">Differs from the criteria card: card says {inputValueText(path, offCard[path])}</dd> : null}
+                  <dd className="font-medium tabular-nums">{inputValueText(path, value, units)}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
+                  {path in offCard ? <dd className="w-full rounded bg-orange-100 px-2 py-1 text-xs font-medium text-orange-950">Differs from the criteria card: card says {inputValueText(path, offCard[path], units)}</dd> : null}
                   {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
                 </div>
               ))}
@@ -132,27 +140,27 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
 
           <section aria-labelledby="method-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="method-h" className="text-base font-semibold">Method, editions and sections</h2>
-            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r).map((m) => <li key={m}>{m}</li>)}</ul>
+            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r, units).map((m) => <li key={m}>{m}</li>)}</ul>
           </section>
-          <PlainTable id="wind-h" table={windTable(r)} />
+          <PlainTable id="wind-h" table={windTable(r, units)} />
           <section aria-labelledby="gov-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="gov-h" className="text-base font-semibold">Governing loads</h2>
-            <ul className="mt-2 space-y-1 text-sm">{governingLines(r).map((g) => <li key={g}>{g}</li>)}</ul>
+            <ul className="mt-2 space-y-1 text-sm">{governingLines(r, units).map((g) => <li key={g}>{g}</li>)}</ul>
           </section>
-          <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} />
-          <PlainTable id="checks-h" table={checksTable(r)} />
+          <PlainTable id="loads-h" table={loadsTable(r, units)} numericFrom={2} />
+          <PlainTable id="checks-h" table={checksTable(r, units)} />
           <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="conc-h" className="text-base font-semibold">Concrete and field dimensions</h2>
             <ul className="mt-2 space-y-1 text-sm">
-              {concreteLines(r).map((c) => <li key={c}>{c}</li>)}
-              {r.field.posts.map((p) => <li key={p.id}>Post {p.id}: {fmt(p.heightAboveGradeIn)} in above grade + {fmt(p.embedmentIn)} in embedded = {fmt(p.postLengthIn)} in</li>)}
-              <li>Lowest-edge clearance {fmt(r.geometry.minClearanceIn)} in at {fmt(r.geometry.tiltDeg)}° tilt</li>
+              {concreteLines(r, units).map((c) => <li key={c}>{c}</li>)}
+              {r.field.posts.map((p) => <li key={p.id}>Post {p.id}: {len(p.heightAboveGradeIn)} above grade + {len(p.embedmentIn)} embedded = {len(p.postLengthIn)}</li>)}
+              <li>Lowest-edge clearance {len(r.geometry.minClearanceIn)} at {fmt(r.geometry.tiltDeg)}° tilt</li>
             </ul>
           </section>
           <section aria-labelledby="warn-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="warn-h" className="text-base font-semibold">Warnings ({r.warnings.length})</h2>
             {r.warnings.length === 0 ? <p className="mt-1 text-sm text-slate-600">None: no method limit is crossed.</p> : (
-              <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {w.message}</li>)}</ul>
+              <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {warningIn(w, units)}</li>)}</ul>
             )}
           </section>
           <section aria-labelledby="files-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -171,7 +179,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               </ul>
             )}
           </section>
-          <ReviewPreview input={ctx.input as DesignInput} result={r} />
+          <ReviewPreview input={ctx.input as DesignInput} result={r} units={units} />
         </div>
 
         <aside className="order-1 min-w-0 space-y-4 lg:order-2">
@@ -180,8 +188,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}
               licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} (valid through ${eligibility.licence.expiresOn}), the time and the project facts as they stand now. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
           ) : null}
-          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} /> : null}
-          <ReviewHistory standing={standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
+          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} units={units} /> : null}
+          <ReviewHistory standing={standing.approval ? { ...standing, approval: { ...standing.approval, overrides: overridesIn(standing.approval.overrides, units) } } : standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
         </aside>
       </div>
     </div>
