@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { quarterIn } from "@/app/_lib/review/field-format";
+import { tapeInches } from "@/components/format/tape";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { approvedSpecs } from "@/db/queries/review-queue";
@@ -14,6 +15,7 @@ export const metadata: Metadata = { title: "Field specs" };
 export default async function FieldSpecsPage() {
   const user = await forPage(() => requireUser(), "/field");
   const specs = await approvedSpecs(user.organisationId);
+  const units = await readerUnits();
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-2xl font-semibold">Field specs</h1>
@@ -29,7 +31,7 @@ export default async function FieldSpecsPage() {
                   Revision {s.number} <StatusBadge status={s.superseded ? "superseded" : "approved"} onHold={s.onHold} />
                   {s.approvedAt ? <span className="text-slate-600">approved {shortDate(s.approvedAt, user.timeZone)}</span> : null}
                 </p>
-                <p className="mt-1 text-base">{s.posts} holes, {quarterIn(s.diameterIn)} across × {quarterIn(s.depthIn)} deep</p>
+                <p className="mt-1 text-base">{s.posts} holes, {tapeInches(s.diameterIn, units)} across × {tapeInches(s.depthIn, units)} deep</p>
               </Link>
             </li>
           ))}
