@@ -6,7 +6,7 @@ import type { DesignResult } from "@/engine";
 import type { RevisionContext } from "@/db/queries/reviews";
 import type { Table } from "@/components/review/plain-table";
 import { formatBags, formatFootingSize, formatPipeSize, formatQuantity, unitLabel, type UnitKind, type UnitSystem } from "@/components/format/quantity";
-import { checkTitleIn, storedIn } from "@/components/format/quantity-text";
+import { checkSourceIn, checkTitleIn, storedIn } from "@/components/format/quantity-text";
 import { ratioWithVerdict } from "@/components/format/ratio";
 import { CHECK_UNIT_KINDS } from "@/engine/footing/checks";
 import { largestWindUpliftLb } from "@/components/design/revision-diff";
@@ -112,7 +112,7 @@ export function checksTable(r: DesignResult, units: UnitSystem = "imperial"): Ta
     columns: ["Check", "Demand", "Capacity", "Unit", "Ratio", "Result", "Source"],
     rows: r.footing.checks.map((c) => {
       const kind: UnitKind = (CHECK_UNIT_KINDS[c.unit] as UnitKind | undefined) ?? "none";
-      return [checkTitleIn(c, units), cell(c.demand, kind, units, 2), cell(c.capacity, kind, units, 2), kind === "none" ? c.unit : unitLabel(kind, units), ratioWithVerdict(c.ratio), c.pass ? "passes" : "FAILS", userText(storedIn(c.source, units))];
+      return [checkTitleIn(c, units), cell(c.demand, kind, units, 2), cell(c.capacity, kind, units, 2), kind === "none" ? c.unit : unitLabel(kind, units), ratioWithVerdict(c.ratio), c.pass ? "passes" : "FAILS", userText(checkSourceIn(c, units))];
     }),
   };
 }
