@@ -4,6 +4,7 @@ import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
+import { composeMail } from "@/app/_lib/mail-template";
 import { requestIp } from "@/app/_lib/request-ip";
 import { resetRequestSchema } from "@/app/_lib/schemas/account";
 import { PASSWORD_RESET_TTL_MS, newToken } from "@/app/_lib/tokens";
@@ -21,15 +22,16 @@ async function issueResetLink(email: string, ip: string): Promise<void> {
   if (!(await createPasswordReset(user.id, tokenHash, new Date(Date.now() + PASSWORD_RESET_TTL_MS), MAX_LINKS_PER_HOUR))) return;
   await sendMail({
     to: user.email,
-    subject: "Set a new Pierwise password",
-    text: [
-      `Someone (we hope you) asked to set a new password for the Pierwise account ${user.email}.`,
-      "",
-      "Open this link to choose a new password (it works once, for 1 hour):",
-      `${env.appUrl}/reset/${token}`,
-      "",
-      "If you did not ask, ignore this e-mail: your password stays as it is.",
-    ].join("\n"),
+    ...composeMail({
+      subject: "Set a new Pierwise password",
+      heading: "Set a new password",
+      paragraphs: [
+        `Someone (we hope you) asked to set a new password for the Pierwise account ${user.email}.`,
+        "The link works once, for 1 hour.",
+      ],
+      action: { label: "Choose a new password", url: `${env.appUrl}/reset/${token}` },
+      footnote: "If you did not ask, ignore this e-mail: your password stays as it is.",
+    }),
   });
   const membership = await findSignInCandidate(user.email);
   await recordAudit({ organisationId: membership?.organisationId, action: "password-reset-requested", subject: user.email, ip });

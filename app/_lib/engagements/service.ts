@@ -3,6 +3,7 @@ import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
 import { projectFor } from "@/app/_lib/designs";
 import { env } from "@/app/_lib/env";
 import { sendMail } from "@/app/_lib/mail";
+import { composeMail } from "@/app/_lib/mail-template";
 import { engagementSchema, type EngagementInput } from "@/app/_lib/schemas/engagement";
 import { newToken } from "@/app/_lib/tokens";
 import { db } from "@/db/client";
@@ -57,15 +58,17 @@ export async function engageEngineer(user: CurrentUser, projectId: string, body:
   await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-invited", subject: project.id, detail: { engagementId: id, email: input.email } });
   await sendMail({
     to: input.email,
-    subject: `Review engagement: ${project.name} for ${user.organisationName}`,
-    text: [
-      `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
-      ...(input.message ? ["", input.message] : []),
-      "",
-      `Accept or decline here: ${engagementUrl(token)}`,
-      "",
-      "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
-    ].join("\n"),
+    ...composeMail({
+      subject: `Review engagement: ${project.name} for ${user.organisationName}`,
+      heading: "You are asked to review a project",
+      project: `${project.name} (${project.state})`,
+      paragraphs: [
+        `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
+        ...(input.message ? [input.message] : []),
+      ],
+      action: { label: "Accept or decline", url: engagementUrl(token) },
+      footnote: "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
+    }),
   });
   return engagementView((await getEngagement(id))!);
 }
@@ -102,8 +105,13 @@ export async function revokeEngagement(user: CurrentUser, projectId: string, eng
   await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-revoked", subject: project.id, detail: { engagementId, withdrawnRevisionIds: withdrawn } });
   await sendMail({
     to: engagement.email,
-    subject: `Engagement ended: ${project.name}`,
-    text: `${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`,
+    ...composeMail({
+      subject: `Engagement ended: ${project.name}`,
+      heading: "Your engagement has ended",
+      project: project.name,
+      paragraphs: [`${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`],
+      action: { label: "Open Pierwise", url: `${env.appUrl}/queue` },
+    }),
   });
   return engagementView((await getEngagement(engagement.id))!);
 }
@@ -146,13 +154,16 @@ export async function answerEngagement(user: CurrentUser, engagementId: string, 
   if (to_) {
     await sendMail({
       to: to_.email,
-      subject: `${user.name} ${to} the engagement on ${e.projectName}`,
-      text: [
-        `${user.name} (${user.organisationName}) ${to} your engagement on "${e.projectName}".`,
-        ...(to === "accepted" ? ["You can now submit revisions of this project to them for review."] : []),
-        "",
-        `Project: ${env.appUrl}/projects/${e.projectId}`,
-      ].join("\n"),
+      ...composeMail({
+        subject: `${user.name} ${to} the engagement on ${e.projectName}`,
+        heading: `Engagement ${to}`,
+        project: e.projectName,
+        paragraphs: [
+          `${user.name} (${user.organisationName}) ${to} your engagement on "${e.projectName}".`,
+          ...(to === "accepted" ? ["You can now submit revisions of this project to them for review."] : []),
+        ],
+        action: { label: "Open the project", url: `${env.appUrl}/projects/${e.projectId}` },
+      }),
     });
   }
   return { id: e.id, status: to };
