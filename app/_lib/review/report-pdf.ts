@@ -12,7 +12,7 @@ import { DEFER_TO_CODE } from "@/engine";
 import { SITE_CAUTION_TEXTS } from "@/engine/notices";
 import { formatFootingSize, formatPipeSize, formatQuantity, type UnitSystem } from "@/components/format/quantity";
 import { checkTitleIn, sayIn, storedIn, warningIn } from "@/components/format/quantity-text";
-import { ratioWithVerdict } from "@/components/format/ratio";
+import { formatRatio, ratioWithVerdict } from "@/components/format/ratio";
 import { fieldLabel } from "@/engine/field-labels";
 import type { RevisionContext } from "@/db/queries/reviews";
 import { checkOutcome } from "@/components/review/check-outcome";
@@ -122,7 +122,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
     if (a.overrides.length) {
       doc.moveDown(0.3);
       line(`APPROVED ALTHOUGH ${a.overrides.length === 1 ? "A CHECK FAILS" : `${a.overrides.length} CHECKS FAIL`}: the engineer's reasons`, { bold: true, colour: BAD, size: 10 });
-      for (const o of a.overrides) line(`${checkTitleIn(o, units)} (ratio ${ratioWithVerdict(o.ratio)}): ${o.reason}`, { colour: BAD, indent: 10 });
+      for (const o of a.overrides) line(`${checkTitleIn(o, units)} (ratio ${formatRatio(o.ratio)}): ${o.reason}`, { colour: BAD, indent: 10 });
     }
   } else {
     doc.moveDown(0.3);

@@ -13,7 +13,7 @@ import {
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
 } from "@/db/queries/reviews";
 import { confirmSignature, decideOverrides } from "./approval-signature";
-import { ratioWithVerdict } from "@/components/format/ratio";
+import { formatRatio } from "@/components/format/ratio";
 import { composeMail } from "@/app/_lib/mail-template";
 import { fieldLabel } from "@/components/design/fields";
 import { engineerEligibility, licenceEligibility } from "./eligibility";
@@ -159,7 +159,7 @@ export async function decideRevision(
           ...(overrides.length || body.comments.length ? [overrides.length ? "Approved although checks fail, for the reasons given; and the engineer's comments:" : "The engineer's comments:"] : []),
         ],
         list: [
-          ...overrides.map((o) => `Fails, accepted: ${o.title} (ratio ${ratioWithVerdict(o.ratio)}): ${o.reason}`),
+          ...overrides.map((o) => `Fails, accepted: ${o.title} (ratio ${formatRatio(o.ratio)}): ${o.reason}`),
           ...body.comments.map((c) => `${c.fieldPath ? `[${fieldLabel(c.fieldPath)}] ` : ""}${c.body}`),
         ],
         action: { label: "Open the review", url: reviewUrl(revisionId) },
