@@ -7,7 +7,7 @@
 import { describe, expect, it } from "vitest";
 import { requestPasswordResetAction } from "@/app/(auth)/reset/actions";
 import { recordAsBuiltAction } from "@/app/(workspace)/field/[revisionId]/actions";
-import { invitationMail } from "@/app/(workspace)/admin/members/invitation-mail";
+import { invitationMail } from "@/app/_lib/invitation-mail";
 import { POST as engageRoute } from "@/app/api/projects/[projectId]/engagements/route";
 import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";

@@ -6,15 +6,17 @@ import { tapeInches } from "@/components/format/tape";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
-import { approvedSpecs } from "@/db/queries/review-queue";
+import { approvedSpecs, fieldCursorText, parseFieldCursor } from "@/db/queries/review-queue";
 import { shortDate } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Field specs" };
 
 /** The crew's list: only approved revisions have a field spec; superseded ones say so. */
-export default async function FieldSpecsPage() {
+export default async function FieldSpecsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/field");
-  const specs = await approvedSpecs(user.organisationId);
+  const older = (await searchParams).older;
+  const specs = await approvedSpecs(user.organisationId, { older: parseFieldCursor(Array.isArray(older) ? older[0] : older) });
+  const last = specs.at(-1);
   const units = await readerUnits();
   return (
     <div className="mx-auto max-w-3xl space-y-4">
@@ -37,6 +39,11 @@ export default async function FieldSpecsPage() {
           ))}
         </ul>
       )}
+      {specs.more && last?.approvedAt ? (
+        <p className="text-base">
+          <Link href={`/field?older=${encodeURIComponent(fieldCursorText({ approvedAt: last.approvedAt, designId: last.designId }))}`} className="font-medium text-accent-800 underline">Older specs</Link>
+        </p>
+      ) : null}
       <Caution />
     </div>
   );

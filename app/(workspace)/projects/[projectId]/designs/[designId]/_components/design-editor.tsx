@@ -20,6 +20,8 @@ import { FootingHeadline, ResultsPanel } from "./results-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useLiveResult, type LiveStatus } from "./use-live-result";
 import { enterMovesToNextField, useEditorDraft } from "./use-editor-draft";
+import { PinnedCommentsPanel, PinnedCommentsProvider, pinnedByPath } from "./pinned-comments";
+import type { PinnedCommentView } from "@/components/design/pinned-comments";
 
 /**
  * The designer's editor: inputs on the left, live results on the right (stacked on a phone), the
@@ -34,6 +36,8 @@ export interface EditorProps {
   baseNumber: number;
   readOnly: boolean;
   card: { label: string; values: CriteriaCardValues } | null;
+  /** The engineer's comments pinned to inputs (latest decision), shown beside their fields. */
+  pinnedComments?: PinnedCommentView[];
   /** The reader's unit system from the preference cookie (absent: from this browser's storage). */
   units?: UnitSystem;
 }
@@ -126,6 +130,8 @@ export function DesignEditor(props: EditorProps) {
     },
   } : null, [props.card, form]);
 
+  const pinned = useMemo(() => pinnedByPath(props.pinnedComments ?? []), [props.pinnedComments]);
+
   // A read-only revision shows what was saved (the record) even where today's engine differs.
   const result = props.readOnly && live.savedDiffers ? saved.result : live.result;
   // The 3D preview follows once the numbers are painted, so a keystroke never waits for a redraw.
@@ -149,11 +155,14 @@ export function DesignEditor(props: EditorProps) {
               <button type="button" onClick={draft.dismiss} className="rounded-md px-2 py-1 underline">Keep editing</button>
             </div>
           ) : null}
-          <fieldset disabled={props.readOnly} className="space-y-4">
-            <SiteInputs units={units} card={cardOffer} />
-            <ArrayInputs units={units} />
-            <PostsInputs units={units} />
-          </fieldset>
+          <PinnedCommentsPanel comments={props.pinnedComments ?? []} />
+          <PinnedCommentsProvider comments={pinned}>
+            <fieldset disabled={props.readOnly} className="space-y-4">
+              <SiteInputs units={units} card={cardOffer} />
+              <ArrayInputs units={units} />
+              <PostsInputs units={units} />
+            </fieldset>
+          </PinnedCommentsProvider>
 
           {!props.readOnly ? (
             <div className="rounded-lg border border-slate-200 bg-white p-4">

@@ -5,6 +5,7 @@ import { useController } from "react-hook-form";
 import { FIELD_META } from "@/components/design/fields";
 import { rangeMessageIn, sayIn } from "@/components/format/quantity-text";
 import { fromDisplay, roundFor, toDisplay, unitLabel, type UnitKind, type UnitSystem } from "@/components/format/quantity";
+import { PinnedNotes } from "./pinned-comments";
 
 /**
  * Editor inputs bound to react-hook-form by the schema's dotted path. Each shows its label, its
@@ -18,7 +19,7 @@ function idFor(name: string) {
   return `in-${name.replace(/\./g, "-")}`;
 }
 
-function Shell({ name, label, unit, error, children, help, units }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string; units: UnitSystem }) {
+function Shell({ name, label, unit, error, children, help, units, value }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string; units: UnitSystem; value: unknown }) {
   const meta = FIELD_META[name];
   const id = idFor(name);
   const helpText = help ?? helpIn(name, units);
@@ -31,6 +32,7 @@ function Shell({ name, label, unit, error, children, help, units }: { name: stri
       </div>
       {error ? <p id={`${id}-error`} className="text-sm font-medium text-red-700">{error}</p> : null}
       {helpText ? <p id={`${id}-help`} className="text-xs text-slate-500">{helpText}</p> : null}
+      <PinnedNotes name={name} value={value} />
     </div>
   );
 }
@@ -57,7 +59,7 @@ export function NumberField({ name, units, optional = false, label, help }: { na
   const error = rangeMessageIn(fieldState.error?.message, kind, units);
   const unit = unitLabel(kind, units);
   return (
-    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error} units={units}>
+    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error} value={value} units={units}>
       <input
         id={idFor(name)}
         name={name}
@@ -97,7 +99,7 @@ export function ListField({ name, units, optional = false }: { name: string; uni
   const shown = list.map((v) => String(units === "imperial" ? roundFor(v, kind, units, 4) : roundFor(toDisplay(v, kind, units), kind, units))).join(", ");
   const error = rangeMessageIn(fieldState.error?.message ?? firstNestedError(fieldState.error), kind, units);
   return (
-    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error} units={units}>
+    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error} value={field.value} units={units}>
       <input
         id={idFor(name)}
         name={name}
@@ -135,7 +137,7 @@ export function SelectField({ name, options, numeric = false, onPick }: { name: 
   const { field, fieldState } = useController({ name });
   const error = fieldState.error?.message;
   return (
-    <Shell name={name} error={error} units="imperial">
+    <Shell name={name} error={error} value={field.value} units="imperial">
       <select
         id={idFor(name)}
         name={name}
@@ -164,6 +166,7 @@ export function CheckField({ name, units = "imperial" }: { name: string; units?:
         <label htmlFor={id} className="text-sm font-medium text-slate-800">{meta?.label ?? name}</label>
         {meta?.help ? <p id={`${id}-help`} className="text-xs text-slate-500">{helpIn(name, units)}</p> : null}
         {fieldState.error ? <p className="text-sm font-medium text-red-700">{fieldState.error.message}</p> : null}
+        <PinnedNotes name={name} value={field.value} />
       </div>
     </div>
   );
