@@ -30,7 +30,7 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
-/** A review's state from the review row alone; `held` is the CTE of approved revisions of designs with an open hold. */
+/** A review's state from the review row alone; `held` is the CTE of the revisions of designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
   when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
   else 'decided' end`;
@@ -54,8 +54,8 @@ export interface QueueFilter {
 /**
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`: the projects this engineer holds an accepted engagement on (a few rows);
- * - `held`: approved revisions of designs with an open hold, in the organisations they review for
- *   (open holds are few; each is looked up through the approved-revisions index);
+ * - `held`: the revisions of designs with an open hold, in the organisations they review for
+ *   (open holds are few; each design's revisions are one range of its (design, number) index);
  * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
  *   with the state and sort key; a review in another organisation is checked against `engaged`
  *   through its revision and design. Names of contractor, project and design are joined here only
@@ -90,7 +90,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     WITH engaged AS MATERIALIZED (
       SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
     ), held AS MATERIALIZED (
-      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
+      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
     ), visible AS (
       SELECT v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at,
