@@ -27,7 +27,8 @@ import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { buildApp, buildIsStale } from "../../db/lib/build";
 import { freePort } from "../../db/lib/ports";
-import { ensureAppDatabase, ensureCluster, findServerBinaries, psql, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureCluster, findServerBinaries, psql, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { waitForHttp } from "../support/runner";
 import { BIG_DESIGN_ID_SQL, DEMO_ORG_ID, DEMO_PROJECT_ID, grow, prepare, tableCounts } from "./grow";
@@ -145,11 +146,14 @@ async function main(): Promise<void> {
     "auto_explain.log_buffers = on", "auto_explain.log_format = 'json'", "auto_explain.log_nested_statements = on",
   ]) psql(cluster, `ALTER SYSTEM SET ${setting}`);
   psql(cluster, "SELECT pg_reload_conf()");
-  const databaseUrl = ensureAppDatabase(cluster, APP_ROLE, crypto.randomBytes(12).toString("hex"), "pierwise_bench");
+  const roles = ensureDatabaseRoles(cluster, {
+    appRole: APP_ROLE, appPassword: crypto.randomBytes(12).toString("hex"), ownerPassword: crypto.randomBytes(12).toString("hex"), database: "pierwise_bench",
+  });
+  const databaseUrl = roles.appUrl;
   psql(cluster, "CREATE EXTENSION pg_stat_statements", "pierwise_bench");
   const logFile = path.join(cluster.dataDir, "log", "bench.json");
 
-  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  const migrator = knex({ ...knexConfig, connection: roles.ownerUrl });
   await migrator.migrate.latest();
   await migrator.seed.run();
   await migrator.destroy();

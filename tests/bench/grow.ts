@@ -184,12 +184,16 @@ export async function grow(client: pg.Client, from: number, to: number, options:
   await Promise.all(clients.map(async (c, i) => {
     const [a, b] = shares[i];
     if (b <= a) return;
+    // One transaction per share: an approved revision needs its approval record by commit
+    // (20261203100000), and the reviews are inserted after the revisions they refer to.
+    await c.query("BEGIN");
     for (const sql of statements(a, b, verifiable, engaging)) {
       const t = Date.now();
       await c.query(sql);
       const table = /INSERT INTO (\w+)/.exec(sql)![1];
       took.set(table, Math.max(took.get(table) ?? 0, Date.now() - t));
     }
+    await c.query("COMMIT");
   }));
   notes.push(...[...took].map(([table, ms]) => `${table} ${(ms / 1000).toFixed(1)} s`));
   if (options.bulk) {
