@@ -53,13 +53,14 @@ export interface QueueFilter {
 
 /**
  * One statement, built so its cost follows the page, not the engineer's whole history:
- * - `engaged`: the projects this engineer holds an accepted engagement on (a few rows);
+ * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
+ *   their designs (a few rows);
  * - `held`: the revisions of designs with an open hold, in the organisations they review for
  *   (open holds are few; each design's revisions are one range of its (design, number) index);
  * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
- *   with the state and sort key; a review in another organisation is checked against `engaged`
- *   through its revision and design. Names of contractor, project and design are joined here only
- *   when the search or the sort needs them;
+ *   with the state and sort key; a review in another organisation is checked against
+ *   `engaged_designs` through its revision (one primary-key probe). Names of contractor, project
+ *   and design are joined here only when the search or the sort needs them;
  * - `page`: sorted, counted (a window count over `picked`, so no second statement) and limited;
  * - only the page's rows are joined to revision, design, project and contractor, and only their
  *   result JSON is read (for the failing checks; the footing figures are columns).
@@ -89,6 +90,8 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const sql = `
     WITH engaged AS MATERIALIZED (
       SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
+    ), engaged_designs AS MATERIALIZED (
+      SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
       SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
@@ -100,9 +103,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       FROM reviews v ${contractorName ? "JOIN organisations o ON o.id = v.organisation_id" : ""}
       ${names ? "JOIN revisions rn ON rn.id = v.revision_id JOIN designs dn ON dn.id = rn.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
       WHERE v.engineer_id = ?
-        AND (v.organisation_id = ? OR EXISTS (
-          SELECT 1 FROM revisions er JOIN designs ed ON ed.id = er.design_id
-          WHERE er.id = v.revision_id AND ed.project_id IN (SELECT project_id FROM engaged)))
+        AND (v.organisation_id = ? OR (SELECT er.design_id FROM revisions er WHERE er.id = v.revision_id) IN (SELECT id FROM engaged_designs))
         ${where.map((w) => `AND ${w}`).join(" ")}
     ), picked AS (
       SELECT * FROM visible ${stateWhere}
