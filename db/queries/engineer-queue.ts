@@ -75,6 +75,9 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const contractorName = Boolean(q) || sort === "contractor";
   const bindings: unknown[] = [user.userId, user.organisationId, user.userId, user.organisationId];
   const where: string[] = [];
+  // Waiting is told by the review alone: no held revisions to look up. (No "decision IS NULL" here:
+  // the planner would take the open-queue index and its table rows over the index-only scan.)
+  const waitingOnly = filter.state === "waiting";
   if (filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor)) {
     where.push("v.organisation_id = ?");
     bindings.push(filter.contractor);
@@ -95,6 +98,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     ), held AS MATERIALIZED (
       SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
+        ${waitingOnly ? "AND false" : ""}
     ), visible AS (
       SELECT v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at,
              ${contractorName ? "o.name" : "NULL::text"} AS contractor,
