@@ -1,4 +1,5 @@
 import { toMetric, fromMetric, type CustomaryUnit } from "@/engine/units";
+import { groupedNumber } from "@/components/ui/grouped-number";
 
 /**
  * Imperial/metric display at the edges. The engine and the saved revisions stay in US customary
@@ -71,7 +72,7 @@ export function formatQuantity(value: number | null | undefined, kind: UnitKind,
   if (value === null || value === undefined || !Number.isFinite(value)) return "—";
   const shown = toDisplay(value, kind, system);
   const decimals = opts.decimals ?? DISPLAY_UNITS[kind].decimals[system];
-  const text = shown.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+  const text = groupedNumber(shown, decimals);
   const label = unitLabel(kind, system);
   return label ? (label === "°" || label === "%" ? `${text}${label}` : `${text} ${label}`) : text;
 }

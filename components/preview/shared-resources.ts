@@ -21,8 +21,6 @@ export const MATERIALS = {
   moduleCell: new MeshStandardMaterial({ color: COLOURS.module, metalness: 0.2, roughness: 0.35 }),
   wind: new MeshBasicMaterial({ color: COLOURS.wind }),
   north: new MeshBasicMaterial({ color: COLOURS.north }),
-  /** Labels draw over everything (text colour is set per label by the text library). */
-  label: new MeshBasicMaterial({ depthTest: false, depthWrite: false, transparent: true, toneMapped: false }),
 };
 
 /** Screen-width lines (px): the ground's edge, and the dimension lines drawn over everything. */

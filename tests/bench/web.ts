@@ -9,7 +9,9 @@
  *
  * Options (environment): BENCH_KEYSTROKES (default 16), BENCH_HTTP_SECONDS (per round, default 3),
  * BENCH_ROUNDS (default 3), BENCH_EDITOR_RUNS (default 2), PIERWISE_BENCH_DIST_DIR (default .next-bench),
- * BENCH_SKIP_BUILD=1 (serve the build already in that folder, e.g. a copy of an earlier build to compare).
+ * BENCH_SKIP_BUILD=1 (serve the build already in that folder, e.g. a copy of an earlier build to compare),
+ * BENCH_ONLY=editor (only the editor figures), BENCH_PROFILE=1 (add a CPU profile of one more editor
+ * load and typing: what runs on the main thread, by script and by function).
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import crypto from "node:crypto";
@@ -32,6 +34,7 @@ import { ensureChromium, waitForHttp } from "../support/runner";
 import { routeWeights } from "./web-bundles";
 import { measureEditor, type EditorFigures } from "./web-editor";
 import { load, median, percentile, type LoadResult } from "./web-http";
+import { profileEditor, profileLines } from "./web-profile";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
 const workDir = path.join(root, ".test-data", `bench-web-${process.pid}`);
@@ -40,6 +43,8 @@ const KEYSTROKES = Number(process.env.BENCH_KEYSTROKES ?? 16);
 const HTTP_SECONDS = Number(process.env.BENCH_HTTP_SECONDS ?? 3);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 const EDITOR_RUNS = Number(process.env.BENCH_EDITOR_RUNS ?? 2);
+const ONLY_EDITOR = process.env.BENCH_ONLY === "editor";
+const PROFILE = process.env.BENCH_PROFILE === "1";
 const DESIGNER = "designer@demo.pierwise.test";
 const ADMIN = "admin@demo.pierwise.test";
 
@@ -118,7 +123,7 @@ async function main(): Promise<void> {
 
   // Warm the server (first render of each route compiles nothing in production, but fills caches).
   for (const r of routes) await fetch(base + r.path, { headers: r.as ? { cookie: r.as === DESIGNER ? cookie : await signIn(base, ADMIN) } : {} });
-  const weights = await routeWeights(noGl, routes, (b, as) => contextFor(b, base, as));
+  const weights = ONLY_EDITOR ? [] : await routeWeights(noGl, routes, (b, as) => contextFor(b, base, as));
 
   const editorRuns: EditorFigures[] = [];
   const loads: LoadResult[] = [];
@@ -128,7 +133,7 @@ async function main(): Promise<void> {
     { label: "/api/calc", url: `${base}/api/calc` },
     { label: "/api/calc?sections=footing", url: `${base}/api/calc?sections=footing` },
   ];
-  for (const t of targets) await load({ ...t, body, cookie, seconds: 1, connections: 8 }); // warm-up
+  if (!ONLY_EDITOR) for (const t of targets) await load({ ...t, body, cookie, seconds: 1, connections: 8 }); // warm-up
   // Interleaved: editor run, then a round of each handler, repeated.
   for (let round = 0; round < Math.max(ROUNDS, EDITOR_RUNS); round++) {
     if (round < EDITOR_RUNS) {
@@ -136,13 +141,20 @@ async function main(): Promise<void> {
       editorRuns.push(await measureEditor(context, base + editorPath, KEYSTROKES));
       await context.close();
     }
-    if (round < ROUNDS) for (const t of targets) loads.push(await load({ ...t, body, cookie, seconds: HTTP_SECONDS, connections: 8 }));
+    if (round < ROUNDS && !ONLY_EDITOR) for (const t of targets) loads.push(await load({ ...t, body, cookie, seconds: HTTP_SECONDS, connections: 8 }));
   }
+
+  const profile = PROFILE ? await (async () => {
+    const context = await contextFor(gl, base, DESIGNER);
+    const summaries = await profileEditor(context, base + editorPath, 6);
+    await context.close();
+    return summaries;
+  })() : [];
 
   // ---- report ----
   const lines: string[] = [];
   const out = (s = "") => lines.push(s);
-  const signInKb = weights[0].gzipKb;
+  const signInKb = weights[0]?.gzipKb ?? NaN;
   out(`bench:web — ${new Date().toISOString()} · ${os.cpus().length} cores · load average at end ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}`);
   out();
   out("First-load JS (gzip -9, every script fetched until network idle; WebGL off, so no 3D scene)");
@@ -176,7 +188,7 @@ async function main(): Promise<void> {
     const xs = loads.filter((l) => l.label === "empty handler");
     return xs.reduce((a, l) => a + l.requests, 0) / xs.reduce((a, l) => a + l.seconds, 0);
   })();
-  for (const t of targets) {
+  for (const t of ONLY_EDITOR ? [] : targets) {
     const xs = loads.filter((l) => l.label === t.label);
     const rate = xs.reduce((a, l) => a + l.requests, 0) / xs.reduce((a, l) => a + l.seconds, 0);
     const lat = xs.flatMap((l) => l.latenciesMs);
@@ -184,6 +196,10 @@ async function main(): Promise<void> {
     out(`  ${pad(t.label, 30)}${lpad(f(rate, 0), 8)}${lpad(f(rate / emptyRate, 2), 9)}${lpad(f(median(lat), 1), 9)}${lpad(f(percentile(lat, 99), 1), 9)}${lpad(f(xs[0].replyBytes / 1024, 1), 10)}${lpad(String(xs.reduce((a, l) => a + l.errors, 0)), 8)}   rounds ${perRound}`);
   }
   out("  target: /api/calc ≥ 0.6 × the empty handler's req/s");
+  if (profile.length) {
+    out();
+    for (const l of profileLines(profile)) out(l);
+  }
   console.log("\n" + lines.join("\n"));
 }
 
