@@ -69,6 +69,7 @@ export async function profileEditor(context: BrowserContext, url: string, keystr
   const wind = page.getByLabel("Basic wind speed");
   await wind.fill("125");
   await page.waitForTimeout(1500);
+  if (traceFile) await context.browser()!.startTracing(page, { path: traceFile.replace(/\.json$/, "") + ".typing.json", categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "v8.execute", "blink.user_timing", "toplevel", "blink", "gpu"] });
   await cdp.send("Profiler.start");
   for (let i = 0; i < keystrokes; i++) {
     await wind.evaluate((el: HTMLInputElement) => {
@@ -79,6 +80,7 @@ export async function profileEditor(context: BrowserContext, url: string, keystr
     await page.waitForTimeout(400);
   }
   const typing = (await cdp.send("Profiler.stop")).profile as Profile;
+  if (traceFile) await context.browser()!.stopTracing();
   await page.close();
   return [{ ...summarise("editor load", load), timeline }, summarise(`typing ${keystrokes} keys`, typing)];
 }

@@ -10,7 +10,7 @@
  * Options (environment): BENCH_KEYSTROKES (default 16), BENCH_HTTP_SECONDS (per round, default 3),
  * BENCH_ROUNDS (default 3), BENCH_EDITOR_RUNS (default 2), PIERWISE_BENCH_DIST_DIR (default .next-bench),
  * BENCH_SKIP_BUILD=1 (serve the build already in that folder, e.g. a copy of an earlier build to compare),
- * BENCH_ONLY=editor (only the editor figures), BENCH_PROFILE=1 (add a CPU profile of one more editor
+ * BENCH_ONLY=editor or http (only the editor figures, or only the handlers), BENCH_PROFILE=1 (add a CPU profile of one more editor
  * load and typing: what runs on the main thread, by script and by function),
  * BENCH_BEFORE_DIST_DIR=.next-old (a copy of an earlier bench build: served beside this one on the
  * same database, every figure measured for both, runs interleaved, so a before/after comparison
@@ -47,6 +47,7 @@ const HTTP_SECONDS = Number(process.env.BENCH_HTTP_SECONDS ?? 3);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 const EDITOR_RUNS = Number(process.env.BENCH_EDITOR_RUNS ?? 2);
 const ONLY_EDITOR = process.env.BENCH_ONLY === "editor";
+const ONLY_HTTP = process.env.BENCH_ONLY === "http";
 const PROFILE = process.env.BENCH_PROFILE === "1";
 const DESIGNER = "designer@demo.pierwise.test";
 const ADMIN = "admin@demo.pierwise.test";
@@ -99,10 +100,9 @@ async function main(): Promise<void> {
   };
   if (process.env.BENCH_SKIP_BUILD !== "1" && buildIsStale(root, distDir)) buildApp(root, env);
   const serve = (dir: string, port: number) => {
-    // BENCH_SERVER_PROFILE=folder: V8 CPU profiles of the server(s), written when they stop.
-    const prof = process.env.BENCH_SERVER_PROFILE ? ["--cpu-prof", `--cpu-prof-dir=${process.env.BENCH_SERVER_PROFILE}/${path.basename(dir)}`] : [];
-    const next = path.join(root, "node_modules/next/dist/bin/next");
-    servers.push(spawn(process.execPath, [...prof, next, "start", "-H", "127.0.0.1", "-p", String(port)], { cwd: root, env: { ...env, PIERWISE_DIST_DIR: dir }, stdio: ["ignore", "ignore", "inherit"] }));
+    // BENCH_SERVER_PROFILE=folder: a V8 CPU profile of each server (Next.js's own profiler), written when it stops.
+    const prof = process.env.BENCH_SERVER_PROFILE ? { NEXT_CPU_PROF: "1", NEXT_CPU_PROF_DIR: path.join(process.env.BENCH_SERVER_PROFILE, path.basename(dir)) } : {};
+    servers.push(spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], { cwd: root, env: { ...env, ...prof, PIERWISE_DIST_DIR: dir }, stdio: ["ignore", "ignore", "inherit"] }));
     return `http://127.0.0.1:${port}`;
   };
   const base = serve(distDir, ports.app);
@@ -135,7 +135,7 @@ async function main(): Promise<void> {
   // Warm the server (first render of each route compiles nothing in production, but fills caches).
   for (const b of builds) for (const r of routes) await fetch(b.base + r.path, { headers: r.as ? { cookie: r.as === DESIGNER ? cookie : await signIn(base, ADMIN) } : {} });
   const weightsBy = new Map<string, Awaited<ReturnType<typeof routeWeights>>>();
-  for (const b of builds) weightsBy.set(b.label, ONLY_EDITOR ? [] : await routeWeights(noGl, routes, (br, as) => contextFor(br, b.base, as)));
+  for (const b of builds) weightsBy.set(b.label, ONLY_EDITOR || ONLY_HTTP ? [] : await routeWeights(noGl, routes, (br, as) => contextFor(br, b.base, as)));
   const weights = weightsBy.get(builds.at(-1)!.label)!;
 
   const editorRuns: (EditorFigures & { build: string })[] = [];
@@ -150,7 +150,7 @@ async function main(): Promise<void> {
   if (!ONLY_EDITOR) for (const t of targets) await load({ ...t, body, cookie, seconds: 1, connections: 8 }); // warm-up
   // Interleaved: editor run (each build), then a round of each handler, repeated.
   for (let round = 0; round < Math.max(ROUNDS, EDITOR_RUNS); round++) {
-    if (round < EDITOR_RUNS) for (const b of builds) {
+    if (round < EDITOR_RUNS && !ONLY_HTTP) for (const b of builds) {
       const context = await contextFor(gl, b.base, DESIGNER);
       editorRuns.push({ ...(await measureEditor(context, b.base + editorPath, KEYSTROKES)), build: b.label });
       await context.close();
