@@ -18,8 +18,9 @@ import { acquireStartLock, releaseStartLock, stopOrphans, recordChild } from "./
 import { assertPortFree } from "./lib/ports";
 import { markClusterCreated, resolveClusterLocation } from "./lib/cluster-location";
 import { migrateToLatest } from "./lib/migrate";
-import { ensureAppDatabase, ensureCluster, findServerBinaries, isRunning, startServer, stopServer, type Cluster } from "./lib/postgres";
+import { ensureCluster, findServerBinaries, isRunning, startServer, stopServer, type Cluster } from "./lib/postgres";
 import { startStandIns, type StandIns } from "./lib/stand-ins";
+import { ensureDatabaseRoles } from "./lib/database-roles";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 const dataDir = path.join(root, ".data");
@@ -95,12 +96,17 @@ async function main(): Promise<void> {
     startServer(cluster, { throwaway: false });
     startedCluster = true;
   }
-  const databaseUrl = ensureAppDatabase(cluster, "pierwise", keptSecret("db-password"), "pierwise");
+  // The app connects as `pierwise` (rows only); migrations and seeds as `pierwise_owner`, which owns
+  // the schema. An older .data folder, where `pierwise` owned everything, is handed over here.
+  const roles = ensureDatabaseRoles(cluster, {
+    appRole: "pierwise", appPassword: keptSecret("db-password"), ownerPassword: keptSecret("db-owner-password"), database: "pierwise",
+  });
+  const databaseUrl = roles.appUrl;
   process.env.DATABASE_URL = databaseUrl;
 
-  const applied = await migrateToLatest(databaseUrl, cluster.dataDir);
+  const applied = await migrateToLatest(roles.ownerUrl, cluster.dataDir);
   if (applied) console.log(`pierwise: applied ${applied} migration(s).`);
-  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  const migrator = knex({ ...knexConfig, connection: roles.ownerUrl });
   try {
     const [{ count }] = await migrator("organisations").count<{ count: string }[]>({ count: "*" });
     if (Number(count) === 0) {

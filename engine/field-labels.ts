@@ -6,6 +6,8 @@
  * Pure data: the engine's schema, the pages and the PDF all read it.
  */
 
+import { imperialText, qty, says, type QuantityText } from "./quantity-text";
+
 /** Display unit kinds a field is shown in (components/design/units.ts converts each). */
 export type FieldUnit = "in" | "ft" | "mph" | "psf" | "psfPerFt" | "pcf" | "ksi" | "psi" | "lbMass" | "deg" | "pct";
 
@@ -15,12 +17,19 @@ export interface FieldLabel {
   message?: string;
   unit?: FieldUnit;
   help: string;
+  /** The help with its numbers as quantities, when it has any (the editor words it in the reader's units). */
+  helpText?: QuantityText;
+}
+
+/** Help that carries quantities: both its customary words and its structured form. */
+function help(text: QuantityText): { help: string; helpText: QuantityText } {
+  return { help: imperialText(text), helpText: text };
 }
 
 export const FIELD_LABELS: Record<string, FieldLabel> = {
   "site.edition": { label: "ASCE 7 edition", help: "The edition of ASCE 7 your building code adopts (see the criteria card)." },
   "site.riskCategory": { label: "Risk category", help: "II for an ordinary array; the category sets which wind map applies." },
-  "site.windSpeedMph": { label: "Basic wind speed", message: "Wind speed", unit: "mph", help: "Ultimate design wind speed V for the site from the ASCE 7 map or the county: a 3-second gust at 33 ft in open country." },
+  "site.windSpeedMph": { label: "Basic wind speed", message: "Wind speed", unit: "mph", ...help(says`Ultimate design wind speed V for the site from the ASCE 7 map or the county: a 3-second gust at ${qty(33, "ft")} above open country.`) },
   "site.exposure": { label: "Exposure category", help: "B: suburbs or woods close by. C: open fields, scattered trees. D: flat ground facing open water or salt flats." },
   "site.groundElevationFt": { label: "Ground elevation", unit: "ft", help: "Height above sea level. Thinner air at altitude lowers the wind pressure (Ke)." },
   "site.topography.method": { label: "Topography", message: "Topography method", help: "Flat unless the array sits on or near the top of a hill, ridge or escarpment that speeds the wind up." },
@@ -37,7 +46,7 @@ export const FIELD_LABELS: Record<string, FieldLabel> = {
   "site.soil.lateralBearingPsfPerFt": { label: "Lateral bearing", message: "Lateral bearing pressure", unit: "psfPerFt", help: "Sideways soil resistance per foot of depth from the soil report." },
   "site.soil.description": { label: "Soil description", help: "What the report calls the soil, e.g. 'stiff sandy clay'." },
   "site.frostDepthIn": { label: "Frost depth", unit: "in", help: "How deep the ground freezes. Footings go below it so frost heave cannot jack them up." },
-  "site.slopeAlongPct": { label: "Ground slope along the array", unit: "pct", help: "Rise of the ground going right along the rows, per 100 ft of run (negative falls)." },
+  "site.slopeAlongPct": { label: "Ground slope along the array", unit: "pct", help: "Rise of the ground going right along the rows, as a percentage of the run (negative falls)." },
   "site.slopeAcrossPct": { label: "Ground slope front to back", message: "Ground slope across the array", unit: "pct", help: "Rise of the ground from the low (front) edge toward the back (negative falls to the back)." },
   "site.waterTableDepthFt": { label: "Water table depth", unit: "ft", help: "Leave blank if groundwater is well below the footing. Below it, concrete weighs less against uplift." },
   "array.moduleLengthIn": { label: "Module length", unit: "in", help: "Long side of one module, from the datasheet." },
@@ -49,7 +58,7 @@ export const FIELD_LABELS: Record<string, FieldLabel> = {
   "array.gapIn": { label: "Gap between modules", unit: "in", help: "Clamp gap between neighbouring modules." },
   "array.tiltDeg": { label: "Tilt", unit: "deg", help: "Angle of the panels from horizontal." },
   "array.tiltSettingsDeg": { label: "Allowed tilt settings", message: "Tilt settings", unit: "deg", help: "For an adjustable rack: every tilt it may be set to, comma separated. The footing is sized for the worst." },
-  "array.lowestEdgeClearanceIn": { label: "Lowest edge clearance", unit: "in", help: "Gap between the bottom edge of the panels and the ground; 18–24 in keeps snow and weeds off." },
+  "array.lowestEdgeClearanceIn": { label: "Lowest edge clearance", unit: "in", ...help(says`Gap between the bottom edge of the panels and the ground; ${qty(18, "in")} to ${qty(24, "in")} keeps snow and weeds off.`) },
   "array.rackingDeadPsf": { label: "Racking weight", message: "Racking dead load", unit: "psf", help: "Rails, purlins and clamps spread over the panel area." },
   "array.rackDepthIn": { label: "Rack depth", message: "Rack depth (panel underside to post top)", unit: "in", help: "From the panel underside down to the top of the post." },
   "array.flow": { label: "Wind under the array", message: "Wind flow beneath the array", help: "Clear unless stored material or a wall blocks more than half the space under the panels." },
@@ -58,23 +67,23 @@ export const FIELD_LABELS: Record<string, FieldLabel> = {
   "posts.count": { label: "Number of posts", help: "Posts in the single row under the beam." },
   "posts.spacingFt": { label: "Post spacing", unit: "ft", help: "Centre to centre. Leave blank to spread the posts evenly under the array." },
   "posts.pipeSize": { label: "Pipe size", help: "Nominal size of standard-weight (Schedule 40) steel pipe used for the posts." },
-  "posts.yieldKsi": { label: "Post yield strength", unit: "ksi", help: "Fy of the pipe steel; 35 ksi for common ASTM A53 Grade B pipe." },
+  "posts.yieldKsi": { label: "Post yield strength", unit: "ksi", ...help(says`Fy of the pipe steel; ${qty(35, "ksi")} for common ASTM A53 Grade B pipe.`) },
   "posts.holeDiameterIn": { label: "Hole diameter", unit: "in", help: "The auger size. Choose “size it for me” to try the candidate sizes and pick the shallowest reasonable hole." },
   "posts.autoDiametersIn": { label: "Candidate hole sizes", unit: "in", help: "Auger sizes the crew has, tried by “size it for me”." },
   "posts.maxAutoDepthIn": { label: "Deepest reasonable hole", message: "Largest reasonable depth for automatic sizing", unit: "in", help: "“Size it for me” prefers holes no deeper than this." },
   "posts.sweepDiametersIn": { label: "Options table sizes", unit: "in", help: "Hole sizes listed in the diameter options table." },
   "posts.fixedDepthIn": { label: "Given footing depth", unit: "in", help: "Leave blank to size the depth. Give a depth to check a hole that is already dug." },
   "posts.constrainedAtGrade": { label: "Constrained at grade", help: "Only when a slab or rigid collar at the ground stops the post moving sideways." },
-  "posts.isolatedPoleIncrease": { label: "Isolated pole increase", message: "Isolated pole lateral increase (IBC §1806.3.4)", help: "IBC §1806.3.4 doubles lateral bearing for isolated poles that tolerate ½ in movement. Engineer's call." },
-  "posts.concreteUnitWeightPcf": { label: "Concrete unit weight", unit: "pcf", help: "145 pcf for normal-weight concrete." },
+  "posts.isolatedPoleIncrease": { label: "Isolated pole increase", message: "Isolated pole lateral increase (IBC §1806.3.4)", ...help(says`IBC §1806.3.4 doubles lateral bearing for isolated poles that tolerate ${qty(0.5, "in")} movement. Engineer's call.`) },
+  "posts.concreteUnitWeightPcf": { label: "Concrete unit weight", unit: "pcf", ...help(says`${qty(145, "pcf")} for normal-weight concrete.`) },
   "posts.wasteAllowancePct": { label: "Concrete waste allowance", unit: "pct", help: "Extra concrete for ragged holes and spillage; 5–10 % is usual." },
   "posts.subtractPostDisplacement": { label: "Subtract post volume", message: "Subtract post displacement", help: "Take the steel's volume out of the concrete order." },
   "posts.depthIncrementIn": { label: "Round depth up to", message: "Depth increment", unit: "in", help: "Depths are rounded up to this step so the crew marks whole numbers." },
   "posts.bearingPressure": { label: "Bearing check on", message: "Bearing pressure basis", help: "Gross (default, conservative): pier weight counted, no credit for the soil dug out. Net: the engineer's option, crediting the weight of the soil removed; use only with a net allowable value." },
-  "posts.soilUnitWeightPcf": { label: "Soil unit weight (net bearing)", message: "Soil unit weight", unit: "pcf", help: "Weight of the soil the pier replaces, credited only when bearing is checked on net pressure; 100–120 pcf is usual." },
-  "posts.concreteStrengthPsi": { label: "Concrete strength f'c at 28 days", message: "Concrete strength", unit: "psi", help: "Specified compressive strength for the footing concrete; 4,000 psi is usual for post footings. Never below the 2,000 psi minimum for post backfill (IBC §1807.3.3)." },
-  "posts.maxAggregateIn": { label: "Largest aggregate", message: "Maximum aggregate size", unit: "in", help: "Largest stone in the mix, as the engineer sets it; ¾ in is usual for augered holes." },
-  "posts.slumpIn": { label: "Slump", unit: "in", help: "Workability the engineer sets; about 4 in fills an augered hole around a post without honeycombing." },
+  "posts.soilUnitWeightPcf": { label: "Soil unit weight (net bearing)", message: "Soil unit weight", unit: "pcf", ...help(says`Weight of the soil the pier replaces, credited only when bearing is checked on net pressure; ${qty(100, "pcf")} to ${qty(120, "pcf")} is usual.`) },
+  "posts.concreteStrengthPsi": { label: "Concrete strength f'c at 28 days", message: "Concrete strength", unit: "psi", ...help(says`Specified compressive strength for the footing concrete; ${qty(4000, "psi")} is usual for post footings. Never below the ${qty(2000, "psi")} minimum for post backfill (IBC §1807.3.3).`) },
+  "posts.maxAggregateIn": { label: "Largest aggregate", message: "Maximum aggregate size", unit: "in", ...help(says`Largest stone in the mix, as the engineer sets it; ${qty(0.75, "in", 2)} is usual for augered holes.`) },
+  "posts.slumpIn": { label: "Slump", unit: "in", ...help(says`Workability the engineer sets; about ${qty(4, "in")} fills an augered hole around a post without honeycombing.`) },
   "posts.sideFrictionPsf": { label: "Side friction", unit: "psf", help: "Engineer's skin friction against uplift. Leave blank to count concrete weight only." },
   projectName: { label: "Project name on print-outs", help: "" },
 };

@@ -40,3 +40,4 @@ export { DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE } from "./notices";
 export { concreteFromHolesAsDug, type ConcreteAsDug, type HoleAsDug, type HoleAsDugConcrete } from "./concrete/as-dug";
 export { concreteSpecification, CODE_MINIMUM_STRENGTH_PSI, COLD_WEATHER_GUIDANCE, type ConcreteSpecification } from "./concrete/concrete-spec";
 export { continuousBeamShares } from "./geometry/continuous-beam";
+export { startingSize, type StartingSize } from "./options/starting-size";

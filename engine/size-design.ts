@@ -21,7 +21,8 @@ import { parseDesignInput } from "./parse";
 import { governingLoads, postLoadTable, windCaseRows } from "./result-sections";
 import type { DesignInput } from "./schema";
 import type { DesignResult } from "./types";
-import { collectWarnings, type DesignWarning } from "./warnings";
+import { collectWarnings, warningOf, type DesignWarning } from "./warnings";
+import { qty, says } from "./quantity-text";
 import { ENGINE_VERSION } from "./version";
 
 /** The check with this id (a loop, not `find` with a fresh closure, on this per-design path). */
@@ -45,7 +46,7 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
   if (auto) {
     const a = autoDiameter(fctx, posts.autoDiametersIn, posts.maxAutoDepthIn, pipe.outsideDiameterIn);
     ev = a.evaluation;
-    if (!a.reasonable) extra.push({ code: "AUTO_DIAMETER_NO_REASONABLE_DEPTH", severity: "warning", message: `No candidate hole gives a depth within ${posts.maxAutoDepthIn} in with bearing passing; the shallowest (${ev.diameterIn} in) is shown.` });
+    if (!a.reasonable) extra.push(warningOf("AUTO_DIAMETER_NO_REASONABLE_DEPTH", says`No candidate hole gives a depth within ${qty(posts.maxAutoDepthIn, "in")} with bearing passing; the shallowest (${qty(ev.diameterIn, "in")}) is shown.`));
   } else ev = evaluateFooting(fctx, posts.holeDiameterIn as number);
   const diameterIn = ev.diameterIn;
   const hole = concreteForHole({

@@ -15,8 +15,9 @@ import knexConfig from "../knexfile";
 import { appEnvironment } from "../db/lib/app-env";
 import { buildApp, buildIsStale } from "../db/lib/build";
 import { freePort } from "../db/lib/ports";
-import { ensureAppDatabase, ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../db/lib/postgres";
+import { ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../db/lib/postgres";
 import { startStandIns, type StandIns } from "../db/lib/stand-ins";
+import { ensureDatabaseRoles } from "../db/lib/database-roles";
 import { countResults, ensureChromium, waitForHttp } from "./support/runner";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -62,9 +63,14 @@ async function main(): Promise<number> {
   cluster = { binDir, version, dataDir: path.join(clusterParent, "pg"), port: await freePort() };
   ensureCluster(cluster, { throwaway: true });
   startServer(cluster, { throwaway: true });
-  const databaseUrl = ensureAppDatabase(cluster, "pierwise_test", crypto.randomBytes(12).toString("hex"), "pierwise_test");
+  // As in `npm start`: the suites and the app connect as the row-only app role; migrations, seeds
+  // and tests that change the schema use the owner role (PIERWISE_OWNER_DATABASE_URL, tests only).
+  const roles = ensureDatabaseRoles(cluster, {
+    appRole: "pierwise_test", appPassword: crypto.randomBytes(12).toString("hex"), ownerPassword: crypto.randomBytes(12).toString("hex"), database: "pierwise_test",
+  });
+  const databaseUrl = roles.appUrl;
 
-  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  const migrator = knex({ ...knexConfig, connection: roles.ownerUrl });
   await migrator.migrate.latest();
   // The demo organisations and people are the cast of the access tests.
   await migrator.seed.run();
@@ -82,6 +88,7 @@ async function main(): Promise<number> {
       smtpPort: ports.smtp, mailWebPort: ports.mailWeb, s3Port: ports.s3, bucket: "pierwise-test",
     }),
     PIERWISE_TEST_CLUSTER: JSON.stringify(cluster),
+    PIERWISE_OWNER_DATABASE_URL: roles.ownerUrl,
   };
 
   // Type errors anywhere in the tree fail the run (the build itself skips type-checking).

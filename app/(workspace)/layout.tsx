@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { currentUser } from "@/app/_lib/auth";
+import { gateWorkspacePage } from "@/app/_lib/page-gate";
 import { signOutAction } from "@/app/(auth)/login/actions";
 import { Brand } from "@/components/ui/brand";
 import { SkipLink } from "@/components/ui/skip-link";
@@ -7,10 +8,12 @@ import { ROLE_LABELS } from "@/db/roles";
 import { homeFor, menuFor } from "@/components/ui/role-navigation";
 
 /**
- * The signed-in shell. It shows who is signed in but makes no access decision: every page below
- * checks access itself next to its query (layouts do not re-render on navigation).
+ * The signed-in shell. It shows who is signed in; every page below checks access itself next to its
+ * query (layouts do not re-render on navigation). gateWorkspacePage only repeats a page's first
+ * check before the loading shell streams, so a missing or forbidden page answers 404 or 403, not 200.
  */
 export default async function WorkspaceLayout({ children }: { children: React.ReactNode }) {
+  await gateWorkspacePage();
   const user = await currentUser();
   return (
     <div className="min-h-screen">

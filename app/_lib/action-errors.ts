@@ -1,6 +1,7 @@
 import type { ActionState } from "@/components/ui/action-state";
 import { AccessError, ConflictError, validationIssues } from "./errors";
 import { accessInterrupt } from "./page-access";
+import { CONTROL_CHARACTERS_MESSAGE, hasControlCharacters } from "./request-guards";
 
 /** A field's key in ActionState.fieldErrors: the dotted path without a trailing list index ("extraRoles.0" → "extraRoles"), "form" for the whole input. */
 function fieldKey(path: string): string {
@@ -28,8 +29,23 @@ export function actionState(error: unknown, values?: Record<string, string>, ret
   throw error;
 }
 
+/**
+ * A form post whose typed fields hold control characters (NUL cannot be stored; none belongs in a
+ * field): the form state naming each such field, as the JSON API's 422 does; null when clean.
+ * forAction applies it to every use case; actions that do not run through forAction call it first.
+ */
+export function controlCharacterState(values: Record<string, string>): ActionState | null {
+  const fields = Object.keys(values).filter((k) => hasControlCharacters(values[k]) || hasControlCharacters(k));
+  if (fields.length === 0) return null;
+  const fieldErrors: Record<string, string[]> = {};
+  for (const field of fields) fieldErrors[fieldKey(field)] = [CONTROL_CHARACTERS_MESSAGE];
+  return { message: "Check the highlighted fields.", fieldErrors, values };
+}
+
 /** Runs a use case for a server action: its value, or the form state for an expected failure. */
 export async function forAction<T>(run: () => Promise<T>, values?: Record<string, string>, returnTo?: string): Promise<{ ok: true; value: T } | { ok: false; state: ActionState }> {
+  const refused = values ? controlCharacterState(values) : null;
+  if (refused) return { ok: false, state: refused };
   try {
     return { ok: true, value: await run() };
   } catch (error) {

@@ -16,6 +16,22 @@ export interface QueuedMail {
   subject: string;
   text: string;
   html?: string | null;
+  /** What the mail is ("invitation", "password-reset"…): kept when the body is scrubbed. */
+  kind?: string;
+  /**
+   * The mail carries a link with a token in it (single-use invitation, reset and sign-up links, an
+   * engagement link): once the row is done (sent, or given up) its links are replaced by a marker,
+   * so the table never keeps a usable token (db/README.md).
+   */
+  secretLink?: boolean;
+}
+
+/** What stands in a delivered mail's stored body where its single-use link was. */
+export const LINK_REMOVED = "[single-use link removed after delivery]";
+
+/** The stored body with every link replaced by the marker. */
+export function scrubLinks(body: string): string {
+  return body.replace(/https?:\/\/[^\s"'<>]+/g, LINK_REMOVED);
 }
 
 export const MAX_ATTEMPTS = 8;
@@ -25,7 +41,10 @@ const SWEEP_BATCH = 20;
 /** Writes one mail in the caller's transaction; returns its outbox id for deliverSoon. */
 export async function enqueueMail(trx: Knex.Transaction, mail: QueuedMail): Promise<string> {
   const [row] = await trx("email_outbox")
-    .insert({ organisation_id: mail.organisationId, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html ?? null })
+    .insert({
+      organisation_id: mail.organisationId, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html ?? null,
+      kind: mail.kind ?? null, scrub_after_delivery: mail.secretLink ?? false,
+    })
     .returning("id");
   return row.id as string;
 }
@@ -54,17 +73,19 @@ export async function deliverOne(id: string): Promise<boolean> {
       // Backoff after n attempts: 30 s, 1 min, 2 min … capped at 30 min (attempts here is the old value).
       next_attempt_at: db.raw("now() + make_interval(secs => least(30 * power(2, attempts), 1800))"),
     })
-    .returning(["id", "organisation_id", "to", "subject", "text", "html", "attempts"]);
+    .returning(["id", "organisation_id", "to", "subject", "text", "html", "attempts", "scrub_after_delivery"]);
   if (!row) return false;
+  // A done row that carried a single-use link keeps recipient, subject, kind and times, not the link.
+  const scrubbed = row.scrub_after_delivery ? { text: scrubLinks(row.text), html: row.html === null ? null : scrubLinks(row.html) } : {};
   try {
     await sendMail({ to: row.to, subject: row.subject, text: row.text, ...(row.html ? { html: row.html } : {}) });
-    await db("email_outbox").where({ id }).update({ sent_at: db.fn.now(), last_error: null });
+    await db("email_outbox").where({ id }).update({ sent_at: db.fn.now(), last_error: null, ...scrubbed });
     return true;
   } catch (error) {
     const lastError = error instanceof Error ? error.message.slice(0, 500) : String(error).slice(0, 500);
     const givenUp = row.attempts >= MAX_ATTEMPTS;
     await db.transaction(async (trx) => {
-      await trx("email_outbox").where({ id }).update({ last_error: lastError, ...(givenUp ? { failed_at: trx.fn.now() } : {}) });
+      await trx("email_outbox").where({ id }).update({ last_error: lastError, ...(givenUp ? { failed_at: trx.fn.now(), ...scrubbed } : {}) });
       if (givenUp) {
         await recordAudit({
           organisationId: row.organisation_id, action: "mail-failed", subject: row.to,

@@ -91,6 +91,13 @@ export async function readLimitedText(request: Request): Promise<string> {
 // eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 
+/** The one test for control characters (other than tab and line breaks), for JSON bodies and form posts alike. */
+export function hasControlCharacters(text: string): boolean {
+  return CONTROL.test(text);
+}
+
+export const CONTROL_CHARACTERS_MESSAGE = "Must not contain control characters (such as NUL); remove them and send again.";
+
 /**
  * Every string in a JSON body, keys included, free of control characters other than tab and
  * line breaks: PostgreSQL cannot store NUL in text, and none of the others belongs in a field.
@@ -99,7 +106,7 @@ const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 export function assertNoControlCharacters(value: unknown, path: string[] = [], depth = 0): void {
   if (depth > 64) throw new RequestError(422, "The request body is nested too deeply.");
   if (typeof value === "string") {
-    if (CONTROL.test(value)) throw new RequestError(422, "Must not contain control characters (such as NUL); remove them and send again.", path.join("."));
+    if (CONTROL.test(value)) throw new RequestError(422, CONTROL_CHARACTERS_MESSAGE, path.join("."));
     return;
   }
   if (Array.isArray(value)) {

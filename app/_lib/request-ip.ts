@@ -34,6 +34,21 @@ export function clientAddress(h: Headers): string {
   return address;
 }
 
+/**
+ * Whether the person reached the app over https: the app's URL setting (APP_URL) says so, or the
+ * socket is a trusted proxy that terminated TLS and said so in X-Forwarded-Proto. Only its last
+ * entry counts (the one the nearest proxy wrote; anything to the left may come from the client),
+ * and from any other caller the header is ignored: a client cannot make the app think it is
+ * encrypted, nor talk it out of it when APP_URL is https.
+ */
+export function servedOverHttps(h: Headers, appUrl = process.env.APP_URL ?? ""): boolean {
+  if (appUrl.startsWith("https://")) return true;
+  const peer = h.get(PEER_HEADER);
+  if (!peer || !trustedProxies().has(plain(peer))) return false;
+  const proto = (h.get("x-forwarded-proto") ?? "").split(",").map((p) => p.trim().toLowerCase()).filter(Boolean).at(-1);
+  return proto === "https";
+}
+
 export async function requestIp(): Promise<string> {
   return clientAddress(await headers());
 }

@@ -34,7 +34,7 @@ export function contentSecurityPolicy({ nonce, development }: Pick<SecurityConte
 }
 
 /** Pages that carry a secret in their URL: their address must never travel as a Referer. */
-const TOKEN_PAGE = /^\/(reset|invite)\/[^/]+\/?$/;
+const TOKEN_PAGE = /^\/(reset|invite|signup)\/[^/]+\/?$/;
 
 export function securityHeaders(ctx: SecurityContext): Record<string, string> {
   const headers: Record<string, string> = {

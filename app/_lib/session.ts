@@ -1,6 +1,7 @@
 import { getIronSession, unsealData, type SessionOptions } from "iron-session";
-import { cookies } from "next/headers";
+import { cookies, headers } from "next/headers";
 import { env } from "./env";
+import { servedOverHttps } from "./request-ip";
 
 /** What the encrypted session cookie holds: who signed in, in which organisation, and when. */
 export interface SessionData {
@@ -25,8 +26,15 @@ export function sessionOptions(): SessionOptions {
   };
 }
 
+/**
+ * The session for signing in and out. Its cookie is `Secure` whenever this request came over
+ * https, also behind a trusted proxy that terminated TLS (servedOverHttps), so the browser never
+ * sends it over plain http.
+ */
 export async function getSession() {
-  return getIronSession<SessionData>(await cookies(), sessionOptions());
+  const options = sessionOptions();
+  const secure = servedOverHttps(await headers(), env.appUrl);
+  return getIronSession<SessionData>(await cookies(), { ...options, cookieOptions: { ...options.cookieOptions, secure } });
 }
 
 /**

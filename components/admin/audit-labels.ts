@@ -11,6 +11,8 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   "sign-in-failed": "Failed sign-in",
   "sign-in-attack-warned": "Warned the owner of many failed sign-ins",
   "sign-up": "Created the organisation",
+  "sign-up-requested": "Asked to create an organisation (link e-mailed)",
+  "sign-up-attempt-existing": "Sign-up tried with this account's address (owner e-mailed)",
   "invitation-sent": "Sent an invitation",
   "invitation-revoked": "Cancelled an invitation",
   "invitation-accepted": "Accepted an invitation",

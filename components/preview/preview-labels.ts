@@ -2,7 +2,7 @@
  * Labels for the preview in the chosen unit system. Conversion goes through the engine's one unit
  * table (engine/units.ts); nothing here is engineering arithmetic, only display rounding.
  */
-import { toMetric } from "@/engine/units";
+import { formatQuantity } from "@/components/format/quantity";
 import { groupedNumber } from "@/components/ui/grouped-number";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 
@@ -12,7 +12,7 @@ const grouped = (value: number, digits = 0) => groupedNumber(value, digits);
 
 /** A length the engine gives in inches: "24 in" (or "72 in (6 ft 0 in)") / "610 mm". */
 export function formatLengthIn(valueIn: number, units: UnitSystem): string {
-  if (units === "metric") return `${grouped(toMetric(valueIn, "in"))} mm`;
+  if (units === "metric") return formatQuantity(valueIn, "in", units);
   const wholeIn = Math.round(valueIn * 10) / 10;
   const text = `${grouped(wholeIn, Number.isInteger(wholeIn) ? 0 : 1)} in`;
   if (wholeIn < 24) return text;
@@ -22,10 +22,9 @@ export function formatLengthIn(valueIn: number, units: UnitSystem): string {
   return `${text} (${ft} ft ${rest} in)`;
 }
 
-/** A force the engine gives in pounds: "10,579 lb" / "47.06 kN". */
+/** A force the engine gives in pounds: "10,579 lb" / "47.1 kN" (the one formatter). */
 export function formatForceLb(valueLb: number, units: UnitSystem): string {
-  if (units === "metric") return `${grouped(toMetric(valueLb, "lb") / 1000, 2)} kN`;
-  return `${grouped(valueLb)} lb`;
+  return formatQuantity(valueLb, "lb", units);
 }
 
 /** Plain words for the engine's wind direction (γ) so a crew lead need not know the symbol. */

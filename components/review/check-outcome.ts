@@ -43,7 +43,5 @@ export function checkOutcome(r: DesignResult): CheckOutcome {
   };
 }
 
-/** A ratio as engineers read it: 1.03 (two decimals; "over 99" for a ratio with no capacity). */
-export function ratioText(ratio: number): string {
-  return Number.isFinite(ratio) ? ratio.toFixed(2) : "over 99";
-}
+/** A ratio as engineers read it: 1.03 (two decimals; "over 99" for a ratio with no capacity): the one ratio formatter. */
+export { formatRatio as ratioText } from "@/components/format/ratio";

@@ -1,19 +1,20 @@
-import { ratioText, type CheckOutcome, type CheckOverride } from "./check-outcome";
-
-const inches = (n: number) => `${Number(n.toFixed(2))} in`;
+import { formatCount, formatFootingSize, type UnitSystem } from "@/components/format/quantity";
+import { checkTitleIn } from "@/components/format/quantity-text";
+import { RatioText } from "@/components/format/ratio-text";
+import type { CheckOutcome, CheckOverride } from "./check-outcome";
 
 /**
  * The footing, the governing check and every failing check with its ratio, in one box, at the top
  * of every screen that leads to concrete: submit, review, decision, field spec. When the engineer
  * approved failing checks, their reasons are shown in full beside them, never in fine print.
  */
-export function CheckSummary({ outcome, overrides = [], lead }: { outcome: CheckOutcome; overrides?: CheckOverride[]; lead?: string }) {
+export function CheckSummary({ outcome, overrides = [], lead, units = "imperial" }: { outcome: CheckOutcome; overrides?: CheckOverride[]; lead?: string; units?: UnitSystem }) {
   const failing = outcome.failing.length > 0;
   return (
     <section aria-label="Footing and checks" className={`rounded-lg border-2 p-4 ${failing ? "border-red-600 bg-red-50 text-red-950" : "border-emerald-600 bg-emerald-50 text-emerald-950"}`}>
       <p className="text-base font-semibold">
-        Footing {inches(outcome.diameterIn)} diameter × {inches(outcome.depthIn)} deep, {outcome.posts} posts
-        {outcome.governing ? <> · governing check: {outcome.governing.title}, ratio {ratioText(outcome.governing.ratio)}</> : null}
+        Footing {formatFootingSize(outcome.diameterIn, outcome.depthIn, units)}, {formatCount(outcome.posts)} posts
+        {outcome.governing ? <> · governing check: {checkTitleIn(outcome.governing, units)}, ratio <RatioText ratio={outcome.governing.ratio} /></> : null}
       </p>
       {failing ? (
         <>
@@ -25,7 +26,7 @@ export function CheckSummary({ outcome, overrides = [], lead }: { outcome: Check
               const o = overrides.find((x) => x.checkId === f.checkId);
               return (
                 <li key={f.checkId}>
-                  <strong>{f.title}</strong>: ratio {ratioText(f.ratio)} (over 1.00 fails)
+                  <strong>{checkTitleIn(f, units)}</strong>: ratio <RatioText ratio={f.ratio} />
                   {o ? <p className="mt-1 rounded border border-red-300 bg-white p-2 text-sm text-slate-900"><strong>Engineer&apos;s reason for accepting it:</strong> {o.reason}</p> : null}
                 </li>
               );

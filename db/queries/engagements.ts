@@ -45,9 +45,9 @@ function engagementQuery(knex: Knex = db) {
 }
 
 
-export async function createEngagement(e: { organisationId: string; projectId: string; email: string; message: string; tokenHash: string; invitedBy: string }): Promise<string> {
+export async function createEngagement(e: { organisationId: string; projectId: string; email: string; message: string; tokenHash: string; invitedBy: string }, knex: Knex = db): Promise<string> {
   try {
-    const [row] = await db("engagements")
+    const [row] = await knex("engagements")
       .insert({ organisation_id: e.organisationId, project_id: e.projectId, email: e.email, message: e.message, token_hash: e.tokenHash, invited_by: e.invitedBy })
       .returning("id");
     return row.id as string;
@@ -84,8 +84,9 @@ export async function setEngagementStatus(
   from: EngagementStatus[],
   to: EngagementStatus,
   by: { engineerUserId?: string; revokedBy?: string },
+  knex: Knex = db,
 ): Promise<boolean> {
-  const n = await db("engagements")
+  const n = await knex("engagements")
     .where({ id })
     .whereIn("status", from)
     .update({

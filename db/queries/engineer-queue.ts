@@ -1,6 +1,5 @@
 import { db } from "../client";
-import { acceptedProjectIds } from "./engagements";
-import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { likePattern, MAX_PAGE_SIZE, type ListPage, type ListQuery } from "./list-page";
 
 /**
  * One reviewing engineer's queue across every contractor: each review submitted to them, in the
@@ -31,15 +30,20 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
+/** A review's state from the review row alone; `held` is the CTE of approved revisions of designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
-  when v.decision = 'approve' and exists (select 1 from design_holds h where h.design_id = r.design_id and h.cleared_at is null) then 'on_hold'
+  when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
   else 'decided' end`;
 
+/**
+ * Sort names and their expressions over the `picked` rows. The default (state) puts waiting first,
+ * then on hold, then decided; within a state, and for equal keys, oldest submission first.
+ */
 export const QUEUE_SORTS = {
-  submittedAt: "v.submitted_at", decidedAt: "v.decided_at", contractor: "o.name", projectName: "p.name", designName: "d.name",
-  // Waiting first, then on hold, then decided.
-  state: `array_position(array['waiting', 'on_hold', 'decided'], ${STATE_SQL})`,
+  submittedAt: "submitted_at", decidedAt: "decided_at", contractor: "contractor", projectName: "project_name", designName: "design_name",
+  state: "array_position(array['waiting', 'on_hold', 'decided'], state)",
 } as const;
+const NOT_NULL_SORTS = new Set(["submittedAt", "contractor", "projectName", "designName", "state"]);
 
 export interface QueueFilter {
   /** Only this contractor's rows (an organisation id). */
@@ -47,49 +51,112 @@ export interface QueueFilter {
   state?: QueueState;
 }
 
-/** Reviews submitted to this engineer that they may still see (own organisation, or an accepted engagement). */
-function visibleReviews(user: { userId: string; organisationId: string }) {
-  return db("reviews as v")
-    .join("revisions as r", "r.id", "v.revision_id")
-    .join("designs as d", "d.id", "r.design_id")
-    .join("projects as p", "p.id", "d.project_id")
-    .join("organisations as o", "o.id", "p.organisation_id")
-    .where("v.engineer_id", user.userId)
-    .where((w) => w.where("v.organisation_id", user.organisationId).orWhereIn("p.id", acceptedProjectIds(user.userId)));
+/**
+ * One statement, built so its cost follows the page, not the engineer's whole history:
+ * - `engaged`: the projects this engineer holds an accepted engagement on (a few rows);
+ * - `held`: approved revisions of designs with an open hold, in the organisations they review for
+ *   (open holds are few; each is looked up through the approved-revisions index);
+ * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
+ *   with the state and sort key; a review in another organisation is checked against `engaged`
+ *   through its revision and design. Names of contractor, project and design are joined here only
+ *   when the search or the sort needs them;
+ * - `page`: sorted, counted (a window count over `picked`, so no second statement) and limited;
+ * - only the page's rows are joined to revision, design, project and contractor, and only their
+ *   result JSON is read (for the failing checks; the footing figures are columns).
+ */
+function queueSql(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter) {
+  const q = (query.q ?? "").trim().slice(0, 200);
+  const sort = query.sort && Object.hasOwn(QUEUE_SORTS, query.sort) ? (query.sort as keyof typeof QUEUE_SORTS) : "state";
+  const dir = query.dir === "asc" || query.dir === "desc" ? query.dir : "asc";
+  const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(query.pageSize ?? 20)));
+  const page = Math.max(1, Math.floor(query.page ?? 1));
+  const names = Boolean(q) || sort === "projectName" || sort === "designName";
+  const contractorName = Boolean(q) || sort === "contractor";
+  const bindings: unknown[] = [user.userId, user.organisationId, user.userId, user.organisationId];
+  const where: string[] = [];
+  if (filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor)) {
+    where.push("v.organisation_id = ?");
+    bindings.push(filter.contractor);
+  }
+  if (q) {
+    where.push("(pn.name ILIKE ? ESCAPE '\\' OR dn.name ILIKE ? ESCAPE '\\' OR o.name ILIKE ? ESCAPE '\\')");
+    bindings.push(likePattern(q), likePattern(q), likePattern(q));
+  }
+  const stateWhere = filter.state ? "WHERE state = ?" : "";
+  if (filter.state) bindings.push(filter.state);
+  const order = `${QUEUE_SORTS[sort]} ${dir}${NOT_NULL_SORTS.has(sort) ? "" : " NULLS LAST"}, submitted_at, id`;
+  bindings.push(pageSize, (page - 1) * pageSize);
+  const sql = `
+    WITH engaged AS MATERIALIZED (
+      SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
+    ), held AS MATERIALIZED (
+      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
+      WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
+    ), visible AS (
+      SELECT v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at,
+             ${contractorName ? "o.name" : "NULL::text"} AS contractor,
+             ${names ? "pn.name AS project_name, dn.name AS design_name" : "NULL::text AS project_name, NULL::text AS design_name"},
+             ${STATE_SQL} AS state
+      FROM reviews v ${contractorName ? "JOIN organisations o ON o.id = v.organisation_id" : ""}
+      ${names ? "JOIN revisions rn ON rn.id = v.revision_id JOIN designs dn ON dn.id = rn.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
+      WHERE v.engineer_id = ?
+        AND (v.organisation_id = ? OR EXISTS (
+          SELECT 1 FROM revisions er JOIN designs ed ON ed.id = er.design_id
+          WHERE er.id = v.revision_id AND ed.project_id IN (SELECT project_id FROM engaged)))
+        ${where.map((w) => `AND ${w}`).join(" ")}
+    ), picked AS (
+      SELECT * FROM visible ${stateWhere}
+    ), page AS (
+      SELECT picked.*, count(*) OVER () AS total, row_number() OVER (ORDER BY ${order}) AS ord FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
+    )
+    SELECT page.id AS "reviewId", r.id AS "revisionId", r.number, d.id AS "designId", d.name AS "designName", p.id AS "projectId",
+           p.name AS "projectName", p.state AS "projectState", o.id AS "organisationId", o.name AS contractor, page.state, page.decision,
+           page.submitted_at AS "submittedAt", page.decided_at AS "decidedAt", page.total, page.ord,
+           r.footing_depth_in AS "depthIn", r.footing_diameter_in AS "diameterIn", r.field_post_count AS posts,
+           coalesce((SELECT jsonb_agg(c->>'title') FROM jsonb_array_elements(r.result->'footing'->'checks') c WHERE (c->>'pass')::boolean IS FALSE), '[]'::jsonb) AS failing
+    FROM page JOIN revisions r ON r.id = page.revision_id JOIN designs d ON d.id = r.design_id
+    JOIN projects p ON p.id = d.project_id JOIN organisations o ON o.id = p.organisation_id
+    ORDER BY page.ord`;
+  return { sql, bindings, sort, dir, page, pageSize, q };
 }
 
 export async function engineerQueue(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter = {}): Promise<ListPage<EngineerQueueRow>> {
-  const base = visibleReviews(user);
-  if (filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor)) base.where("p.organisation_id", filter.contractor);
-  if (filter.state) base.whereRaw(`(${STATE_SQL}) = ?`, [filter.state]);
-  const page = await listPage<EngineerQueueRow & { submittedAt: Date; decidedAt: Date | null; failing: unknown }>(base, query, {
-    sortable: QUEUE_SORTS,
-    defaultSort: "state",
-    defaultDir: "asc",
-    search: ["p.name", "d.name", "o.name"],
-    select: (qb) =>
-      qb.select(
-        "v.id as reviewId", "r.id as revisionId", "r.number", "d.id as designId", "d.name as designName", "p.id as projectId", "p.name as projectName",
-        "p.state as projectState", "o.id as organisationId", "o.name as contractor", "v.decision", "v.submitted_at as submittedAt", "v.decided_at as decidedAt",
-        db.raw(`(${STATE_SQL}) as state`),
-        db.raw(`(r.result->'footing'->>'depthIn')::float as "depthIn"`),
-        db.raw(`(r.result->'footing'->>'diameterIn')::float as "diameterIn"`),
-        db.raw(`jsonb_array_length(r.result->'field'->'posts') as posts`),
-        db.raw(`coalesce((select jsonb_agg(c->>'title') from jsonb_array_elements(r.result->'footing'->'checks') c where (c->>'pass')::boolean is false), '[]'::jsonb) as failing`),
-      ),
-  });
+  const built = queueSql(user, query, filter);
+  const { rows } = await db.raw(built.sql, built.bindings as never[]);
+  let total = rows.length ? Number(rows[0].total) : 0;
+  // A page past the end has no row to carry the count: count on its own (only then).
+  if (!rows.length && built.page > 1) {
+    const counted = queueSql(user, { ...query, page: 1, pageSize: 1 }, filter);
+    const first = (await db.raw(counted.sql, counted.bindings as never[])).rows[0];
+    total = first ? Number(first.total) : 0;
+  }
   return {
-    ...page,
-    rows: page.rows.map((r) => ({
-      ...r,
-      submittedAt: new Date(r.submittedAt).toISOString(),
-      decidedAt: r.decidedAt ? new Date(r.decidedAt).toISOString() : null,
-      failing: (typeof r.failing === "string" ? JSON.parse(r.failing) : r.failing) as string[],
-    })),
+    rows: (rows as (EngineerQueueRow & { submittedAt: Date; decidedAt: Date | null; failing: unknown; total: string; ord: string })[]).map(
+      ({ total: _total, ord: _ord, ...r }) => ({
+        ...r,
+        submittedAt: new Date(r.submittedAt).toISOString(),
+        decidedAt: r.decidedAt ? new Date(r.decidedAt).toISOString() : null,
+        failing: (typeof r.failing === "string" ? JSON.parse(r.failing) : r.failing) as string[],
+      })),
+    total, page: built.page, pageSize: built.pageSize, sort: built.sort, dir: built.dir, q: built.q,
   };
 }
 
-/** The contractors that appear in this engineer's queue, for the filter. */
+/**
+ * The contractors that appear in this engineer's queue, for the filter: their own organisation when
+ * a review of it was submitted to them, and each organisation that engaged them on a project with
+ * a review submitted to them. Each is one index probe, not a pass over the queue.
+ */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
-  return visibleReviews(user).distinct("o.id", "o.name").orderBy("o.name");
+  const { rows } = await db.raw(
+    `SELECT o.id, o.name FROM organisations o
+     WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
+        OR o.id IN (SELECT g.organisation_id FROM engagements g
+                    WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND EXISTS (
+                      SELECT 1 FROM designs d JOIN revisions r ON r.design_id = d.id JOIN reviews v ON v.revision_id = r.id
+                      WHERE d.project_id = g.project_id AND v.engineer_id = ?))
+     ORDER BY o.name`,
+    [user.organisationId, user.userId, user.userId, user.userId],
+  );
+  return rows;
 }

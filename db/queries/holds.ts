@@ -66,8 +66,14 @@ export async function holdAudience(revisionId: string): Promise<{ email: string;
   return db("users").whereIn("id", ids).orderBy("email").select("email", "name");
 }
 
-/** Open holds of the organisation with the revision each was raised on, oldest first: the engineer's list opens with them. */
-export async function openHoldsOfOrganisation(organisationId: string): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null })[]> {
+/** Open holds of the organisation, counted through the open-holds index (the list shows at most a page). */
+export async function countOpenHolds(organisationId: string): Promise<number> {
+  const [{ n }] = await db("design_holds").where({ organisation_id: organisationId }).whereNull("cleared_at").count<{ n: string }[]>({ n: "*" });
+  return Number(n);
+}
+
+/** Open holds of the organisation with the revision each was raised on, oldest first (at most `limit`): the engineer's list opens with them. */
+export async function openHoldsOfOrganisation(organisationId: string, limit = 25): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null })[]> {
   return holdsQuery()
     .join("designs as d", "d.id", "h.design_id")
     .join("projects as p", "p.id", "d.project_id")
@@ -75,5 +81,6 @@ export async function openHoldsOfOrganisation(organisationId: string): Promise<(
     .select(["d.name as designName", "p.name as projectName", "rv.number"])
     .where("h.organisation_id", organisationId)
     .whereNull("h.cleared_at")
-    .orderBy("h.raised_at", "asc");
+    .orderBy("h.raised_at", "asc")
+    .limit(limit);
 }

@@ -16,7 +16,10 @@ export interface InvitationView {
   acceptedAt: Date | null;
 }
 
-/** Records an invitation; older unaccepted invitations for the same person and organisation stop working. */
+/**
+ * Records an invitation; older unaccepted invitations for the same person and organisation stop
+ * working. Pass the use case's transaction so its audit event and e-mail commit with it.
+ */
 export async function createInvitation(input: {
   organisationId: string;
   email: string;
@@ -24,8 +27,8 @@ export async function createInvitation(input: {
   tokenHash: string;
   invitedBy: string;
   expiresAt: Date;
-}): Promise<string> {
-  return db.transaction(async (trx) => {
+}, outer?: Knex.Transaction): Promise<string> {
+  const run = async (trx: Knex.Transaction) => {
     await trx("invitations")
       .where({ organisation_id: input.organisationId, email: input.email })
       .whereNull("accepted_at")
@@ -42,7 +45,8 @@ export async function createInvitation(input: {
       })
       .returning("id");
     return row.id as string;
-  });
+  };
+  return outer ? run(outer) : db.transaction(run);
 }
 
 function invitationQuery(knex: Knex | Knex.Transaction) {
@@ -77,8 +81,8 @@ export async function findInvitationById(id: string): Promise<InvitationView | u
 }
 
 /** Makes a pending invitation stop working now. */
-export async function revokeInvitation(id: string): Promise<void> {
-  await db("invitations").where("id", id).whereNull("accepted_at").update({ expires_at: db.fn.now() });
+export async function revokeInvitation(id: string, knex: Knex = db): Promise<void> {
+  await knex("invitations").where("id", id).whereNull("accepted_at").update({ expires_at: knex.fn.now() });
 }
 
 export type AcceptResult =
@@ -94,6 +98,8 @@ export type AcceptResult =
 export async function acceptInvitation(
   tokenHash: string,
   who: { newUser: { name: string; passwordHash: string } } | { existingUserId: string },
+  /** Runs inside the transaction once accepted (the audit event), so both commit or neither does. */
+  alongside?: (trx: Knex.Transaction, accepted: { userId: string; organisationId: string; email: string; roles: Role[] }) => Promise<void>,
 ): Promise<AcceptResult> {
   try {
     return await db.transaction(async (trx) => {
@@ -123,7 +129,9 @@ export async function acceptInvitation(
         .insert({ organisation_id: claimed.organisation_id, user_id: userId, roles: rolesLiteral(trx, roles) })
         .onConflict(["organisation_id", "user_id"])
         .merge({ roles: rolesLiteral(trx, roles), deactivated_at: null });
-      return { ok: true, userId, organisationId: claimed.organisation_id, email: claimed.email, roles } as const;
+      const accepted = { userId, organisationId: claimed.organisation_id as string, email: claimed.email as string, roles };
+      if (alongside) await alongside(trx, accepted);
+      return { ok: true, ...accepted } as const;
     });
   } catch (error) {
     if (isUniqueViolation(error)) return { ok: false, reason: "email-in-use" };

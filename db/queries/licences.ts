@@ -1,3 +1,4 @@
+import type { Knex } from "knex";
 import { db } from "../client";
 
 export interface LicenceRow {
@@ -16,15 +17,15 @@ export async function listLicences(userId: string): Promise<LicenceRow[]> {
 }
 
 /** Adds a licence, or replaces the number and expiry of the one held in that state. */
-export async function saveLicence(userId: string, licence: LicenceRow): Promise<void> {
-  await db("engineer_licences")
+export async function saveLicence(userId: string, licence: LicenceRow, knex: Knex = db): Promise<void> {
+  await knex("engineer_licences")
     .insert({ user_id: userId, state: licence.state, licence_number: licence.licenceNumber, expires_on: licence.expiresOn })
     .onConflict(["user_id", "state"])
     .merge(["licence_number", "expires_on"]);
 }
 
-export async function removeLicence(userId: string, state: string): Promise<number> {
-  return db("engineer_licences").where({ user_id: userId, state }).delete();
+export async function removeLicence(userId: string, state: string, knex: Knex = db): Promise<number> {
+  return knex("engineer_licences").where({ user_id: userId, state }).delete();
 }
 
 export type Eligibility = { ok: true; licence: LicenceRow } | { ok: false; reason: string };

@@ -1,3 +1,4 @@
+import type { Knex } from "knex";
 import { db } from "../client";
 import type { Role } from "../roles";
 import { parseRoles, rolesLiteral } from "./users";
@@ -58,7 +59,12 @@ export type ChangeResult = { ok: true; before: MemberRow } | { ok: false; reason
  * organisation without an active admin. All memberships of the organisation are locked first (in
  * id order) so two admins demoting each other at once cannot both succeed.
  */
-export async function changeMembership(membershipId: string, change: MembershipChange): Promise<ChangeResult> {
+export async function changeMembership(
+  membershipId: string,
+  change: MembershipChange,
+  /** Runs inside the transaction after the change (the audit event), so both commit or neither does. */
+  alongside?: (trx: Knex.Transaction, before: MemberRow) => Promise<void>,
+): Promise<ChangeResult> {
   return db.transaction(async (trx) => {
     const target = await trx("memberships").where("id", membershipId).first("organisation_id");
     if (!target) return { ok: false, reason: "missing" } as const;
@@ -79,6 +85,7 @@ export async function changeMembership(membershipId: string, change: MembershipC
       const member = await trx("memberships").where("id", membershipId).first("user_id");
       await trx("user_sessions").where({ user_id: member.user_id, organisation_id: target.organisation_id }).whereNull("ended_at").update({ ended_at: trx.fn.now() });
     }
+    if (alongside) await alongside(trx, before);
     return { ok: true, before } as const;
   });
 }

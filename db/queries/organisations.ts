@@ -1,3 +1,4 @@
+import type { Knex } from "knex";
 import { db } from "../client";
 import type { Role } from "../roles";
 import { rolesLiteral } from "./users";
@@ -20,16 +21,17 @@ export async function createOrganisationWithAdmin(input: {
   email: string;
   passwordHash: string;
   roles: Role[];
-}): Promise<{ organisationId: string; userId: string }> {
+}, outer?: Knex.Transaction): Promise<{ organisationId: string; userId: string }> {
+  const run = async (trx: Knex.Transaction) => {
+    const [organisation] = await trx("organisations").insert({ name: input.organisationName }).returning("id");
+    const [user] = await trx("users")
+      .insert({ email: input.email, name: input.name, password_hash: input.passwordHash })
+      .returning("id");
+    await trx("memberships").insert({ organisation_id: organisation.id, user_id: user.id, roles: rolesLiteral(trx, input.roles) });
+    return { organisationId: organisation.id as string, userId: user.id as string };
+  };
   try {
-    return await db.transaction(async (trx) => {
-      const [organisation] = await trx("organisations").insert({ name: input.organisationName }).returning("id");
-      const [user] = await trx("users")
-        .insert({ email: input.email, name: input.name, password_hash: input.passwordHash })
-        .returning("id");
-      await trx("memberships").insert({ organisation_id: organisation.id, user_id: user.id, roles: rolesLiteral(trx, input.roles) });
-      return { organisationId: organisation.id as string, userId: user.id as string };
-    });
+    return await (outer ? run(outer) : db.transaction(run));
   } catch (error) {
     if (isUniqueViolation(error)) throw new EmailInUseError();
     throw error;

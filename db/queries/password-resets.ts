@@ -1,17 +1,20 @@
+import type { Knex } from "knex";
 import { db } from "../client";
 
 /**
  * Records a reset link unless the person already had `maxPerHour` in the last hour (someone may be
  * flooding their inbox). The person's row is locked so simultaneous requests count correctly.
  */
-export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date, maxPerHour: number): Promise<boolean> {
-  return db.transaction(async (trx) => {
+export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date, maxPerHour: number, outer?: Knex.Transaction): Promise<boolean> {
+  const run = async (trx: Knex.Transaction) => {
     await trx("users").where("id", userId).forUpdate().first("id");
     const [row] = await trx("password_resets").where("user_id", userId).where("created_at", ">", trx.raw("now() - interval '1 hour'")).count({ n: "*" });
     if (Number(row.n) >= maxPerHour) return false;
     await trx("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
     return true;
-  });
+  };
+  // The use case's transaction, when given, so the link, its audit event and its e-mail commit together.
+  return outer ? run(outer) : db.transaction(run);
 }
 
 export type ResetState = "valid" | "used" | "expired" | "unknown";
@@ -30,7 +33,12 @@ export type UseResetResult = { ok: true; userId: string; email: string; organisa
  * conditional update (single use), every other open link for the person is closed too, and the
  * person's failed sign-ins are forgiven.
  */
-export async function consumePasswordReset(tokenHash: string, passwordHash: string): Promise<UseResetResult> {
+export async function consumePasswordReset(
+  tokenHash: string,
+  passwordHash: string,
+  /** Runs inside the transaction once the password is set (the audit event), so both commit or neither does. */
+  alongside?: (trx: Knex.Transaction, done: { userId: string; email: string; organisationId: string | null }) => Promise<void>,
+): Promise<UseResetResult> {
   return db.transaction(async (trx) => {
     const [claimed] = await trx("password_resets")
       .where("token_hash", tokenHash)
@@ -50,6 +58,8 @@ export async function consumePasswordReset(tokenHash: string, passwordHash: stri
     // Every session of the old password ends with it (a reset may follow a stolen password).
     await trx("user_sessions").where("user_id", userId).whereNull("ended_at").update({ ended_at: trx.fn.now() });
     const membership = await trx("memberships").where("user_id", userId).orderBy("created_at").first("organisation_id");
-    return { ok: true, userId, email: user.email, organisationId: membership?.organisation_id ?? null } as const;
+    const done = { userId, email: user.email as string, organisationId: (membership?.organisation_id as string | undefined) ?? null };
+    if (alongside) await alongside(trx, done);
+    return { ok: true, ...done } as const;
   });
 }

@@ -35,25 +35,40 @@ function queue(organisationId: string, pick: (reviews: Knex.QueryBuilder) => Kne
     .select(
       "r.id as revisionId", "r.number", "r.status", "d.id as designId", "d.name as designName", "p.name as projectName", "p.state as projectState",
       "e.name as engineerName", "s.name as submittedByName", "v.submitted_at as submittedAt", "v.decided_at as decidedAt",
-      db.raw(`exists (select 1 from revisions n where n.design_id = r.design_id and n.status = 'approved' and n.number > r.number) as superseded`),
+      // Only a design whose newest approval is another revision can have superseded this one.
+      db.raw(`(d.approved_revision_id is not null and d.approved_revision_id <> r.id
+        and exists (select 1 from revisions n where n.design_id = r.design_id and n.status = 'approved' and n.number > r.number)) as superseded`),
       db.raw(`exists (select 1 from design_holds h where h.design_id = r.design_id and h.cleared_at is null) as "onHold"`),
     )
     .orderBy(`v.${order.column}`, order.order);
 }
 
+/**
+ * Rows each list of the reviews page shows. Each row joins its revision, design, project and two
+ * people, so the page's cost follows this number; the engineer's whole queue is paged on /queue,
+ * and the page says how many wait in all (countWaitingFor).
+ */
+export const REVIEW_LIST_LIMIT = 25;
+
 /** Revisions waiting for this engineer's decision, oldest submission first. */
-export async function waitingFor(organisationId: string, engineerId: string): Promise<QueueRow[]> {
-  return queue(organisationId, (v) => v.where("engineer_id", engineerId).whereNull("decision").orderBy("submitted_at", "asc").limit(100), { column: "submitted_at", order: "asc" });
+export async function waitingFor(organisationId: string, engineerId: string, limit = REVIEW_LIST_LIMIT): Promise<QueueRow[]> {
+  return queue(organisationId, (v) => v.where("engineer_id", engineerId).whereNull("decision").orderBy("submitted_at", "asc").limit(limit), { column: "submitted_at", order: "asc" });
+}
+
+/** How many reviews wait for this engineer in the organisation (an index-only count of the open-queue index). */
+export async function countWaitingFor(organisationId: string, engineerId: string): Promise<number> {
+  const [{ n }] = await db("reviews").where({ organisation_id: organisationId, engineer_id: engineerId }).whereNull("decision").count<{ n: string }[]>({ n: "*" });
+  return Number(n);
 }
 
 /** What this person submitted, newest first (each submission of each revision). */
-export async function submittedBy(organisationId: string, userId: string): Promise<QueueRow[]> {
-  return queue(organisationId, (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(100), { column: "submitted_at", order: "desc" });
+export async function submittedBy(organisationId: string, userId: string, limit = REVIEW_LIST_LIMIT): Promise<QueueRow[]> {
+  return queue(organisationId, (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(limit), { column: "submitted_at", order: "desc" });
 }
 
 /** Recent decisions in the organisation. */
-export async function recentlyDecided(organisationId: string): Promise<QueueRow[]> {
-  return queue(organisationId, (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(30), { column: "decided_at", order: "desc" });
+export async function recentlyDecided(organisationId: string, limit = 20): Promise<QueueRow[]> {
+  return queue(organisationId, (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(limit), { column: "decided_at", order: "desc" });
 }
 
 export interface FieldSpecRow {
@@ -63,6 +78,8 @@ export interface FieldSpecRow {
   projectName: string;
   projectAddress: string;
   approvedAt: Date | null;
+  /** The design, for the next page's cursor. */
+  designId: string;
   superseded: boolean;
   onHold: boolean;
   depthIn: number;
@@ -70,8 +87,23 @@ export interface FieldSpecRow {
   posts: number;
 }
 
-/** The most rows the field list shows. */
-export const FIELD_SPEC_LIMIT = 200;
+/** Rows per page of the field list; older current specs are one "Older specs" link away (keyset, `older`). */
+export const FIELD_SPEC_LIMIT = 50;
+
+/** Where a field-list page starts: after this current spec (its design's approval time and id). */
+export interface FieldCursor {
+  approvedAt: Date;
+  designId: string;
+}
+
+/** `<ISO time>_<design id>` in a URL; anything else is no cursor (the first page). */
+export function parseFieldCursor(text: string | undefined): FieldCursor | undefined {
+  const m = /^(\d{4}-\d{2}-\d{2}T[\d:.]+Z)_([0-9a-f-]{36})$/i.exec(text ?? "");
+  if (!m || Number.isNaN(Date.parse(m[1]))) return undefined;
+  return { approvedAt: new Date(m[1]), designId: m[2].toLowerCase() };
+}
+
+export const fieldCursorText = (c: FieldCursor) => `${c.approvedAt.toISOString()}_${c.designId}`;
 
 /**
  * Which designs a person's field list covers. Today: the organisation's own. Written as one
@@ -87,7 +119,7 @@ function fieldSpecColumns(qb: Knex.QueryBuilder, superseded: boolean) {
   return qb
     .join("projects as p", "p.id", "d.project_id")
     .select(
-      "r.id as revisionId", "r.number", "d.name as designName", "p.name as projectName", "p.address as projectAddress",
+      "r.id as revisionId", "r.number", "d.id as designId", "d.name as designName", "p.name as projectName", "p.address as projectAddress",
       // A current spec's approval time is on its design; a superseded one's is its approval record's.
       superseded ? "a.decided_at as approvedAt" : "d.approved_at as approvedAt",
       db.raw(`${superseded ? "true" : "false"} as superseded`),
@@ -97,20 +129,25 @@ function fieldSpecColumns(qb: Knex.QueryBuilder, superseded: boolean) {
 }
 
 /**
- * Approved revisions of the organisation: current specs first (newest approval first), then the
- * superseded ones. Current specs come straight from designs.approved_revision_id (kept by a
- * trigger) through an index on (organisation, approved_at); superseded ones are read only when
- * fewer than FIELD_SPEC_LIMIT current specs exist, newest approval first, so at most that many
- * current rows are stepped over.
+ * One page of the organisation's approved revisions: current specs first (newest approval first),
+ * then the superseded ones. Current specs come straight from designs.approved_revision_id (kept by
+ * a trigger) through an index on (organisation, approved_at), after `older` when given (keyset: a
+ * later page costs what the first does); superseded ones are read only on the page where the
+ * current ones run out, newest approval first. `more` says whether older current specs exist.
  */
-export async function approvedSpecs(organisationId: string): Promise<FieldSpecRow[]> {
+export async function approvedSpecs(organisationId: string, options: { older?: FieldCursor; limit?: number } = {}): Promise<FieldSpecRow[] & { more?: boolean }> {
+  const limit = options.limit ?? FIELD_SPEC_LIMIT;
   const scope = fieldScope(organisationId);
-  const current: FieldSpecRow[] = await fieldSpecColumns(db("designs as d").join("revisions as r", "r.id", "d.approved_revision_id"), false)
+  const currentQuery = fieldSpecColumns(db("designs as d").join("revisions as r", "r.id", "d.approved_revision_id"), false)
     .where(scope)
     .whereNotNull("d.approved_revision_id")
-    .orderBy("d.approved_at", "desc")
-    .limit(FIELD_SPEC_LIMIT);
-  if (current.length >= FIELD_SPEC_LIMIT) return current;
+    .orderBy([{ column: "d.approved_at", order: "desc" }, { column: "d.id", order: "desc" }])
+    // One row more than shown tells whether another page exists.
+    .limit(limit + 1);
+  if (options.older) currentQuery.whereRaw("(d.approved_at, d.id) < (?, ?)", [options.older.approvedAt, options.older.designId]);
+  const fetched: FieldSpecRow[] = await currentQuery;
+  if (fetched.length > limit) return Object.assign(fetched.slice(0, limit), { more: true });
+  const current = fetched;
   const superseded: FieldSpecRow[] = await fieldSpecColumns(
     db("reviews as a").join("revisions as r", "r.id", "a.revision_id").join("designs as d", "d.id", "r.design_id"), true)
     .where(scope)
@@ -118,8 +155,8 @@ export async function approvedSpecs(organisationId: string): Promise<FieldSpecRo
     .where("a.decision", "approve")
     .whereRaw("r.id <> d.approved_revision_id")
     .orderBy("a.decided_at", "desc")
-    .limit(FIELD_SPEC_LIMIT - current.length);
-  return [...current, ...superseded];
+    .limit(limit - current.length);
+  return Object.assign([...current, ...superseded], { more: false });
 }
 
 /** The latest revision of this design, before `number`, that this engineer decided (for "changes since your last review"). */

@@ -89,6 +89,15 @@ export async function setRevisionStatus(trx: Knex.Transaction, revisionId: strin
   return n === 1;
 }
 
+/**
+ * Locks the design row, as saving a revision does (createRevision), so a submit and a save of the
+ * same design run one after the other: a submission then commits only while its revision is still
+ * the newest, and a revision saved meanwhile waits for it (or makes it a 409).
+ */
+export async function lockDesign(trx: Knex.Transaction, designId: string): Promise<void> {
+  await trx("designs").where({ id: designId }).forUpdate().first("id");
+}
+
 /** The highest revision number of a design (any status). */
 export async function latestRevisionNumber(designId: string, trx: Knex = db): Promise<number> {
   const row = await trx("revisions").where({ design_id: designId }).max("number as n").first();

@@ -103,6 +103,9 @@ export async function createRevision(a: NewRevision, conn: Knex | Knex.Transacti
         design_id: a.designId, organisation_id: a.organisationId, number: (latest?.number ?? 0) + 1,
         input: JSON.stringify(a.input), result: JSON.stringify(a.result), engine_version: a.engineVersion,
         content_hash: hash, note: a.note, author_id: a.authorId,
+        // The time the row was written under the design lock, not when the transaction began (which
+        // may be before a submission of the previous revision that this save waited for).
+        created_at: trx.raw("clock_timestamp()"),
       })
       .returning(["id", "number", "created_at as createdAt"]);
     return { id: row.id, number: row.number, contentHash: hash, createdAt: row.createdAt };

@@ -8,16 +8,28 @@
  * @example concreteSpecification({ strengthPsi: 4000, maxAggregateIn: 0.75, slumpIn: 4, frostDepthIn: 36 }).coldSite // true
  */
 import { requireInput } from "../input-ranges";
+import { imperialText, qty, says, type QuantityText } from "../quantity-text";
 
 export const CODE_MINIMUM_STRENGTH_PSI = 2000;
 export const CODE_MINIMUM_SOURCE = "IBC §1807.3.3 backfill: concrete of at least 2,000 psi";
 
-/** What the crew does when pouring in cold weather [common practice]. */
-export const COLD_WEATHER_GUIDANCE = [
-  "Cold weather (air near or below 40 °F): ask for a non-chloride accelerator in the mix; chloride accelerators corrode the steel post.",
+/** What the crew does when pouring in cold weather [common practice], with its numbers as quantities. */
+export const COLD_WEATHER_TEXTS: readonly QuantityText[] = [
+  says`Cold weather (air near or below ${qty(40, "degF")}): ask for a non-chloride accelerator in the mix; chloride accelerators corrode the steel post.`,
   "Do not pour onto frozen ground, ice or snow in the hole; thaw and clean the bottom first.",
   "Protect the fresh concrete from freezing (insulating blankets over the holes) until it has gained strength, at least the first 2 days.",
-];
+].map((c) => (typeof c === "string" ? [c] : c));
+
+/** The same guidance in US customary words. */
+export const COLD_WEATHER_GUIDANCE: string[] = COLD_WEATHER_TEXTS.map(imperialText);
+
+/** The code minimum's source with its strength as a quantity. */
+export const CODE_MINIMUM_SOURCE_TEXT: QuantityText = says`IBC §1807.3.3 backfill: concrete of at least ${qty(2000, "psi")}`;
+
+/** The supplier's line with its numbers as quantities. */
+export function concreteSummaryText(a: { compressiveStrengthPsi: number; maxAggregateIn: number; slumpIn: number }): QuantityText {
+  return says`f'c ${qty(a.compressiveStrengthPsi, "psi")} at 28 days, aggregate ${qty(a.maxAggregateIn, "in", 2)} maximum, slump ${qty(a.slumpIn, "in", 2)}`;
+}
 
 export interface ConcreteSpecification {
   compressiveStrengthPsi: number;

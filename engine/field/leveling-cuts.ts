@@ -10,12 +10,20 @@
  *   // { cutsIn: [0, 1.5, 0], gravelIn: [0, 0, 0.75], … }
  */
 import { EngineInputError, requireRange } from "../errors";
+import { imperialText, qty, says, type QuantityText } from "../quantity-text";
 
 export interface LevelingCuts {
   referenceReadingIn: number;
   cutsIn: number[];
   gravelIn: number[];
-  posts: { index: number; readingIn: number; cutIn: number; gravelIn: number; instruction: string }[];
+  posts: { index: number; readingIn: number; cutIn: number; gravelIn: number; instruction: string; instructionText: QuantityText }[];
+}
+
+/** What the crew does to one post, its lengths as quantities (three decimals of an inch as read). */
+export function cutText(cutIn: number, gravelIn: number): QuantityText {
+  if (cutIn > 0) return says`Cut ${qty(cutIn, "in", 3)} off the bottom`;
+  if (gravelIn > 0) return says`Post is ${qty(gravelIn, "in", 3)} short: add ${qty(gravelIn, "in", 3)} of compacted gravel under it`;
+  return ["No cut"];
 }
 
 export function levelingCuts(a: { referenceReadingIn: number; readingsIn: number[] }): LevelingCuts {
@@ -29,8 +37,8 @@ export function levelingCuts(a: { referenceReadingIn: number; readingsIn: number
     const diff = round(readingIn - a.referenceReadingIn);
     const cutIn = Math.max(0, diff);
     const gravelIn = Math.max(0, -diff);
-    const instruction = cutIn > 0 ? `Cut ${cutIn} in off the bottom` : gravelIn > 0 ? `Post is ${gravelIn} in short: add ${gravelIn} in of compacted gravel under it` : "No cut";
-    return { index, readingIn, cutIn, gravelIn, instruction };
+    const instructionText = cutText(cutIn, gravelIn);
+    return { index, readingIn, cutIn, gravelIn, instruction: imperialText(instructionText), instructionText };
   });
   return { referenceReadingIn: a.referenceReadingIn, cutsIn: posts.map((p) => p.cutIn), gravelIn: posts.map((p) => p.gravelIn), posts };
 }

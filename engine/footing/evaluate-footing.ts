@@ -6,9 +6,10 @@
  * (IBC §1809.4 depth of footings, 12 in minimum; §1809.5 frost protection). Diameter checks: bearing (Table 1806.2), hole ≥ post + 4 in (§1807.3.3),
  * post bending (AISC 360 §F8, independent of the hole).
  */
+import { imperialText, qty, says } from "../quantity-text";
 import type { FactoredPostLoad } from "../loads/factored";
 import { bearingPressurePsf } from "./bearing";
-import { makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
+import { FROST_CHECK_SOURCE, makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
 import { lateralRatio, requiredLateralDepthFt } from "./embedment";
 import type { PipeMoment } from "./pipe";
 import { roundUpIn } from "./solve-depth";
@@ -57,7 +58,8 @@ function lateralCheck(row: FactoredPostLoad | null, ratio: number, source: strin
   const byMoment = P < 1e-9;
   const demand = byMoment ? M : P;
   const c = makeCheck("lateral", demand, ratio > 0 ? demand / ratio : Infinity, byMoment ? "lb-ft" : "lb", source, gov(row), needIn);
-  c.detail = byMoment ? "pure moment at grade" : `P = ${P.toFixed(0)} lb at h = M/P = ${(M / P).toFixed(2)} ft above grade`;
+  c.detailText = byMoment ? ["pure moment at grade"] : says`P = ${qty(Math.round(P), "lb")} at h = M/P = ${qty(M / P, "ft", 2)} above grade`;
+  c.detail = imperialText(c.detailText);
   return c;
 }
 
@@ -148,7 +150,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   const checks: FootingCheck[] = [
     lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
     makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
-    makeCheck("frost", frostIn, depthIn, "in", "IBC §1809.4 (depth of footings, 12 in minimum), §1809.5 (frost protection)", null, need.frost),
+    makeCheck("frost", frostIn, depthIn, "in", FROST_CHECK_SOURCE, null, need.frost),
     makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.netBearingSoilPcf ? `${ctx.soil.source}; net pressure, soil removed credited at ${ctx.netBearingSoilPcf} pcf (engineer's option)` : ctx.soil.source, brgRow && gov(brgRow)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 backfill (value as recalled; confirm against the printed code)", null),
     makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),

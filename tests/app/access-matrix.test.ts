@@ -17,7 +17,7 @@ import crypto from "node:crypto";
 import { putObject } from "@/app/_lib/storage";
 import { freshApproved, freshAsBuilt, freshInReview, makeDesign, userId as reviewUserId } from "../support/review-fixtures";
 import { CALLERS, SIGN_IN, WHO, callAs, discoverEndpoints, everyone, formArgs, only, type MatrixRow } from "../support/access-matrix";
-import { freshInvitation, freshMember, freshReset, uniqueEmail, userId } from "../support/accounts";
+import { freshInvitation, freshMember, freshReset, freshSignUp, uniqueEmail, userId } from "../support/accounts";
 import { DEMO_CARD_ID, DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 import { defaultDesignInput } from "@/engine";
 import { demoInput, freshDesign, freshFile, freshProject } from "../support/project-fixtures";
@@ -48,8 +48,13 @@ const MATRIX: MatrixRow[] = [
 
   // ── accounts (issue 4): public flows, the token or the form is the permission ────────────────
   {
-    file: "app/(auth)/signup/actions.ts", name: "signUpAction", expect: everyone("→/admin/members"),
+    // Step 1 answers the same for every address (hardening finding 11); the e-mailed link finishes it.
+    file: "app/(auth)/signup/actions.ts", name: "signUpAction", expect: everyone(200),
     setup: async () => ({ args: formArgs({ organisationName: "Matrix Test Co.", name: "Mat Rix", email: uniqueEmail("signup"), password: "matrix-password-1" }) }),
+  },
+  {
+    file: "app/(auth)/signup/actions.ts", name: "confirmSignUpAction", expect: everyone("→/admin/members"),
+    setup: async () => ({ args: formArgs({ token: (await freshSignUp()).token }) }),
   },
   {
     file: "app/(auth)/invite/[token]/actions.ts", name: "acceptInvitationAction", expect: everyone("→/projects"),
@@ -85,6 +90,19 @@ const MATRIX: MatrixRow[] = [
   {
     file: "app/(workspace)/admin/members/actions.ts", name: "revokeInvitationAction", expect: only({ admin: 200 }, { nobody: SIGN_IN }),
     setup: async () => ({ args: formArgs({ invitationId: (await freshInvitation()).id }) }),
+  },
+  // The members admin's API doors: the same services as the forms above.
+  {
+    file: "app/api/invitations/route.ts", name: "POST", expect: only({ admin: 201, other: 201 }),
+    setup: async () => ({ body: { email: uniqueEmail("invite-api"), roles: ["installer"] } }),
+  },
+  {
+    file: "app/api/invitations/[invitationId]/route.ts", name: "DELETE", expect: only({ admin: 200 }),
+    setup: async () => ({ params: { invitationId: (await freshInvitation()).id } }),
+  },
+  {
+    file: "app/api/members/[membershipId]/route.ts", name: "PATCH", expect: only({ admin: 200 }),
+    setup: async () => ({ params: { membershipId: (await freshMember()).membershipId }, body: { roles: ["designer", "installer"] } }),
   },
 
   // ── engineer licences (issue 4): each engineer's own; nobody else's to touch ─────────────────

@@ -14,6 +14,9 @@ import { GET as listProjects, POST as createProject } from "@/app/api/projects/r
 import { POST as review } from "@/app/api/revisions/[revisionId]/review/route";
 import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";
 import { POST as signIn } from "@/app/api/session/route";
+import { POST as invite } from "@/app/api/invitations/route";
+import { PATCH as patchMember } from "@/app/api/members/[membershipId]/route";
+import { freshMember } from "../support/accounts";
 import { actAs, jsonRequest, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, makeDesign } from "../support/review-fixtures";
 
@@ -52,8 +55,10 @@ async function expectNamedAnswer(response: Response, label: string): Promise<voi
 }
 
 let design: { projectId: string; designId: string; revisionId: string };
+let membershipId = "";
 beforeAll(async () => {
   design = await makeDesign();
+  membershipId = (await freshMember({ roles: ["installer"] })).membershipId;
 });
 
 const RUNS = 250;
@@ -68,6 +73,8 @@ describe("hostile JSON bodies: never a 5xx, every 4xx named", () => {
     ["POST /api/revisions/:id/submit", DESIGNER, submit as Route, () => ({ revisionId: design.revisionId }), ["engineerId"]],
     ["POST /api/revisions/:id/review", ENGINEER, review as Route, () => ({ revisionId: design.revisionId }), ["decision", "comments", "password", "overrides"]],
     ["POST /api/session", DESIGNER, signIn as Route, () => ({}), ["email", "password"]],
+    ["POST /api/invitations", "admin@demo.pierwise.test", invite as Route, () => ({}), ["email", "roles"]],
+    ["PATCH /api/members/:id", "admin@demo.pierwise.test", patchMember as Route, () => ({ membershipId }), ["roles", "active"]],
   ];
   for (const [label, who, route, routeParams, keys] of routes) {
     it(label, async () => {

@@ -10,7 +10,7 @@
  * sequential scan of a table over 10,000 rows.
  *
  *   npm run bench:db                      ×1, ×100, ×1000, 10 timed requests per route after 2 warm-ups
- *   npm run bench:db -- --scales=1,10     smaller, for trying the script
+ *   npm run bench:db -- --scales=1,100    a subset (also --sizes=, or PIERWISE_BENCH_SCALES=1,100)
  *   npm run bench:db -- --requests=30
  *   npm run bench:db -- --json=out.json   also write the numbers as JSON
  *
@@ -27,7 +27,8 @@ import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { buildApp, buildIsStale } from "../../db/lib/build";
 import { freePort } from "../../db/lib/ports";
-import { ensureAppDatabase, ensureCluster, findServerBinaries, psql, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureCluster, findServerBinaries, psql, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { waitForHttp } from "../support/runner";
 import { BIG_DESIGN_ID_SQL, DEMO_ORG_ID, DEMO_PROJECT_ID, grow, prepare, tableCounts } from "./grow";
@@ -36,7 +37,7 @@ import { explainRoute, percentile, setAutoExplain, signIn, tableSizes, timeRoute
 const root = fileURLToPath(new URL("../..", import.meta.url));
 const workDir = path.join(root, ".test-data", `bench-${process.pid}`);
 const arg = (name: string) => process.argv.find((a) => a.startsWith(`--${name}=`))?.split("=")[1];
-const scales = (arg("scales") ?? "1,100,1000").split(",").map(Number).filter((n) => n > 0).sort((a, b) => a - b);
+const scales = (arg("scales") ?? arg("sizes") ?? process.env.PIERWISE_BENCH_SCALES ?? "1,100,1000").split(",").map(Number).filter((n) => n > 0).sort((a, b) => a - b);
 const requests = Number(arg("requests") ?? 10);
 const jsonOut = arg("json");
 const APP_ROLE = "pierwise_bench";
@@ -51,6 +52,7 @@ const personas: Record<string, string> = {
   designer: "designer@demo.pierwise.test",
   engineer: "engineer@demo.pierwise.test",
   installer: "installer@demo.pierwise.test",
+  outside: "engineer@outside.pierwise.test",
 };
 
 /** Every list route and page, as the demo organisation's people use them. */
@@ -66,6 +68,9 @@ function routes(bigDesignId: string, auditLastPage: number, projectsMidPage: num
     { name: "page design ?r_sort=depthIn", persona: "designer", path: `${design}?r_sort=depthIn&r_dir=desc` },
     { name: "page /reviews (engineer)", persona: "engineer", path: "/reviews" },
     { name: "page /reviews (designer)", persona: "designer", path: "/reviews" },
+    { name: "page /queue (engineer)", persona: "engineer", path: "/queue" },
+    { name: "page /queue?state=waiting (engineer)", persona: "engineer", path: "/queue?state=waiting" },
+    { name: "page /queue (outside engineer)", persona: "outside", path: "/queue" },
     { name: "page /field", persona: "installer", path: "/field" },
     { name: "page /admin/audit", persona: "admin", path: "/admin/audit" },
     // Keyset paging asks for the oldest page by name; offset paging (before issue 19) by number.
@@ -141,17 +146,26 @@ async function main(): Promise<void> {
     "auto_explain.log_buffers = on", "auto_explain.log_format = 'json'", "auto_explain.log_nested_statements = on",
   ]) psql(cluster, `ALTER SYSTEM SET ${setting}`);
   psql(cluster, "SELECT pg_reload_conf()");
-  const databaseUrl = ensureAppDatabase(cluster, APP_ROLE, crypto.randomBytes(12).toString("hex"), "pierwise_bench");
+  const roles = ensureDatabaseRoles(cluster, {
+    appRole: APP_ROLE, appPassword: crypto.randomBytes(12).toString("hex"), ownerPassword: crypto.randomBytes(12).toString("hex"), database: "pierwise_bench",
+  });
+  const databaseUrl = roles.appUrl;
   psql(cluster, "CREATE EXTENSION pg_stat_statements", "pierwise_bench");
   const logFile = path.join(cluster.dataDir, "log", "bench.json");
 
-  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  const migrator = knex({ ...knexConfig, connection: roles.ownerUrl });
   await migrator.migrate.latest();
   await migrator.seed.run();
   await migrator.destroy();
 
-  const admin = new pg.Client({ host: cluster.dataDir, port: cluster.port, user: "postgres", database: "pierwise_bench" });
-  await admin.connect();
+  const superuser = async () => {
+    const client = new pg.Client({ host: cluster!.dataDir, port: cluster!.port, user: "postgres", database: "pierwise_bench" });
+    await client.connect();
+    return client;
+  };
+  const admin = await superuser();
+  // A second connection shares the generation (a bulk load: triggers off, indexes rebuilt after; grow.ts).
+  const loader = await superuser();
   await prepare(admin);
   const bigDesignId = (await admin.query(`SELECT ${BIG_DESIGN_ID_SQL} AS id`)).rows[0].id as string;
   console.log(`bench:db: cluster, migrations and seed ready (${elapsed()})`);
@@ -175,7 +189,7 @@ async function main(): Promise<void> {
   const results: ScaleResult[] = [];
   let units = 0;
   for (const scale of scales) {
-    await grow(admin, units, scale);
+    await grow(admin, units, scale, { bulk: { extra: [loader] } });
     units = scale;
     const counts = await tableCounts(admin);
     console.log(`bench:db: grown to ×${scale} (${elapsed()})`);
@@ -200,6 +214,7 @@ async function main(): Promise<void> {
   printGrowth(results);
   if (jsonOut) fs.writeFileSync(jsonOut, JSON.stringify(results, null, 2));
   await admin.end();
+  await loader.end();
   console.log(`\nbench:db: done in ${elapsed()}`);
 }
 

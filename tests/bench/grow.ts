@@ -11,7 +11,8 @@ import type pg from "pg";
  * depth varied per row so sorting by it means something), so stored sizes and the cost of reading
  * JSON are those of real rows. Ids are md5-derived from the unit and position, so a later step can
  * refer to an earlier step's rows without lookup tables, and growth is additive: ×100 is units
- * 0–99, ×1000 adds units 100–999 to the same database.
+ * 0–99, ×1000 adds units 100–999 to the same database. In each demo unit, the seeded outside
+ * engineer holds an accepted engagement on one project and reviews its three designs.
  */
 
 export const DEMO_ORG_ID = "0f5e1c2a-0000-4000-8000-000000000001";
@@ -44,9 +45,11 @@ export async function prepare(client: pg.Client): Promise<void> {
       SELECT 0 AS n, '${DEMO_ORG_ID}'::uuid AS id,
              (SELECT id FROM users WHERE email = 'admin@demo.pierwise.test') AS admin,
              (SELECT id FROM users WHERE email = 'designer@demo.pierwise.test') AS designer,
-             (SELECT id FROM users WHERE email = 'engineer@demo.pierwise.test') AS engineer
+             (SELECT id FROM users WHERE email = 'engineer@demo.pierwise.test') AS engineer,
+             -- The outside engineer (seeded when engagements exist) reviews one project of each demo unit.
+             (SELECT id FROM users WHERE email = 'engineer@outside.pierwise.test') AS outside
       UNION ALL
-      SELECT n, md5('bench-org-' || n)::uuid, md5('bench-admin-' || n)::uuid, md5('bench-designer-' || n)::uuid, md5('bench-engineer-' || n)::uuid
+      SELECT n, md5('bench-org-' || n)::uuid, md5('bench-admin-' || n)::uuid, md5('bench-designer-' || n)::uuid, md5('bench-engineer-' || n)::uuid, NULL::uuid
       FROM generate_series(2, ${BENCH_ORGS - 1}) n;
     ALTER TABLE bench.orgs ADD PRIMARY KEY (n);
 
@@ -68,19 +71,32 @@ export async function prepare(client: pg.Client): Promise<void> {
   `);
 }
 
-/** Adds units [from, to) of generated rows, then VACUUM ANALYZE so plans are those of a settled database. */
-export async function grow(client: pg.Client, from: number, to: number): Promise<void> {
-  if (to <= from) return;
+/** Tables the generator fills: the ones whose triggers and secondary indexes a bulk load sets aside. */
+const GROWN_TABLES = ["criteria_cards", "projects", "designs", "revisions", "engagements", "reviews", "review_comments", "project_files", "design_holds", "audit_events"];
+
+export interface GrowOptions {
+  /**
+   * For the benchmark's own throwaway cluster, as the superuser: triggers (foreign-key checks
+   * included) are off while the rows go in, and the secondary indexes of the grown tables are
+   * dropped first and rebuilt after (what a bulk load does); the columns the triggers keep
+   * (projects.design_count, designs.approved_revision_id / approved_at) are then set in one
+   * statement each. The rows are the same as without it. `extra` connections take a share of the
+   * units each, so the load uses every core.
+   */
+  bulk?: { extra: pg.Client[] };
+}
+
+/** The INSERT statements of units [from, to), in dependency order. */
+function statements(from: number, to: number, verifiable: boolean, engaging: boolean): string[] {
   const units = `generate_series(${from}, ${to - 1}) u`;
   // Approvals carry a verify code and a facts snapshot once the approval-signature migration ran.
-  const verifiable = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'verify_code'")).rowCount === 1;
   const verifyColumns = verifiable ? ", verify_code, facts_snapshot" : "";
   const verifyValues = verifiable
     ? `, CASE WHEN j = 0 THEN md5('code' || u || '-' || k) END,
        CASE WHEN j = 0 THEN jsonb_build_object('projectName', 'Generated site', 'projectAddress', '', 'projectState', 'CO', 'criteria', NULL) END`
     : "";
   const org = "JOIN bench.orgs o ON o.n = bench.org_of(u)";
-  const statements = [
+  return [
     `INSERT INTO criteria_cards (id, organisation_id, jurisdiction, state, values, sources, created_by, created_at, updated_at)
       SELECT md5('c' || u)::uuid, o.id, 'Generated County ' || u || ' (bench)', 'CO', t.card_values, t.card_sources, o.designer,
              now() - u * interval '1 hour', now() - u * interval '1 hour'
@@ -110,12 +126,15 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
       SELECT md5('rb' || u)::uuid, ${BIG_DESIGN_ID_SQL}, o.id, u + 1, t.input, x.result, t.engine_version,
              md5('hb' || u) || md5('gb' || u), 'draft', 'Generated revision ' || (u + 1), o.designer, now() - interval '1 day' + u * interval '1 second'
       FROM ${units} JOIN bench.orgs o ON o.n = 0 CROSS JOIN bench.template t JOIN bench.results x ON x.depth = u % 48`,
+    ...(engaging ? [`INSERT INTO engagements (organisation_id, project_id, email, status, engineer_user_id, token_hash, invited_by, responded_at)
+      SELECT o.id, md5('p' || u || '-0')::uuid, 'engineer@outside.pierwise.test', 'accepted', o.outside, md5('eh' || u) || md5('eg' || u), o.designer, now()
+      FROM ${units} ${org} WHERE o.outside IS NOT NULL`] : []),
     `INSERT INTO reviews (id, revision_id, organisation_id, engineer_id, submitted_by, submitted_at, decision, decided_by, decided_at,
                           engineer_name, licence_number, licence_state, licence_expires_on${verifyColumns})
       SELECT md5('v' || u || '-' || k || '-' || j)::uuid, md5('r' || u || '-' || k || '-' || j || '-' || (CASE WHEN j = 0 THEN 5 ELSE 10 END))::uuid,
-             o.id, o.engineer, o.designer, now() - (u * 22 + k) * interval '7 minutes' + interval '2 minutes',
+             o.id, coalesce(CASE WHEN k = 0 THEN o.outside END, o.engineer), o.designer, now() - (u * 22 + k) * interval '7 minutes' + interval '2 minutes',
              (CASE j WHEN 0 THEN 'approve' WHEN 1 THEN 'request_changes' END)::review_decision,
-             CASE WHEN j < 2 THEN o.engineer END, CASE WHEN j < 2 THEN now() - (u * 22 + k) * interval '7 minutes' + interval '4 minutes' END,
+             CASE WHEN j < 2 THEN coalesce(CASE WHEN k = 0 THEN o.outside END, o.engineer) END, CASE WHEN j < 2 THEN now() - (u * 22 + k) * interval '7 minutes' + interval '4 minutes' END,
              CASE WHEN j < 2 THEN 'Generated Engineer, P.E.' END, CASE WHEN j = 0 THEN 'PE-BENCH' END, CASE WHEN j = 0 THEN 'CO' END,
              CASE WHEN j = 0 THEN date '2030-12-31' END${verifyValues}
       FROM ${units} CROSS JOIN generate_series(0, 21) k CROSS JOIN generate_series(0, 2) j ${org}`,
@@ -136,16 +155,74 @@ export async function grow(client: pg.Client, from: number, to: number): Promise
              '192.0.2.' || (i % 250), now() - ((u * 1100 + i) * interval '37 seconds')
       FROM ${units} CROSS JOIN generate_series(0, 1099) i ${org}`,
   ];
-  const took: string[] = [];
-  for (const sql of statements) {
-    const started = Date.now();
-    await client.query(sql);
-    took.push(`${/INSERT INTO (\w+)/.exec(sql)?.[1]} ${((Date.now() - started) / 1000).toFixed(1)} s`);
+}
+
+/** Adds units [from, to) of generated rows, then VACUUM ANALYZE so plans are those of a settled database. */
+export async function grow(client: pg.Client, from: number, to: number, options: GrowOptions = {}): Promise<void> {
+  if (to <= from) return;
+  const verifiable = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'verify_code'")).rowCount === 1;
+  // Once engagements exist, the seeded outside engineer is engaged on one project of each demo unit.
+  const engaging = (await client.query("SELECT 1 FROM bench.orgs WHERE outside IS NOT NULL")).rowCount === 1;
+  const started = Date.now();
+  const seconds = (since: number) => `${((Date.now() - since) / 1000).toFixed(1)} s`;
+  const notes: string[] = [];
+  const clients = options.bulk ? [client, ...options.bulk.extra] : [client];
+  let indexes: { name: string; def: string }[] = [];
+  if (options.bulk) {
+    // Secondary indexes only: primary keys and unique constraints stay (foreign keys and ON CONFLICT need them).
+    indexes = (await client.query<{ name: string; def: string }>(
+      `SELECT i.indexrelid::regclass::text AS name, pg_get_indexdef(i.indexrelid) AS def
+       FROM pg_index i JOIN pg_class t ON t.oid = i.indrelid
+       WHERE t.relnamespace = 'public'::regnamespace AND t.relname = ANY($1)
+         AND NOT EXISTS (SELECT 1 FROM pg_constraint c WHERE c.conindid = i.indexrelid)`, [GROWN_TABLES])).rows;
+    for (const { name } of indexes) await client.query(`DROP INDEX ${name}`);
+    for (const c of clients) await c.query("SET session_replication_role = replica");
   }
+  // Each connection takes a contiguous share of the units; a unit's rows refer only to rows of the same unit.
+  const shares = clients.map((_, i) => [from + Math.floor(((to - from) * i) / clients.length), from + Math.floor(((to - from) * (i + 1)) / clients.length)]);
+  const took = new Map<string, number>();
+  await Promise.all(clients.map(async (c, i) => {
+    const [a, b] = shares[i];
+    if (b <= a) return;
+    // One transaction per share: an approved revision needs its approval record by commit
+    // (20261203100000), and the reviews are inserted after the revisions they refer to.
+    await c.query("BEGIN");
+    for (const sql of statements(a, b, verifiable, engaging)) {
+      const t = Date.now();
+      await c.query(sql);
+      const table = /INSERT INTO (\w+)/.exec(sql)![1];
+      took.set(table, Math.max(took.get(table) ?? 0, Date.now() - t));
+    }
+    await c.query("COMMIT");
+  }));
+  notes.push(...[...took].map(([table, ms]) => `${table} ${(ms / 1000).toFixed(1)} s`));
+  if (options.bulk) {
+    for (const c of clients) await c.query("RESET session_replication_role");
+    // What the triggers would have kept: design counts, and each design's newest approved revision
+    // (approved when its approval was decided).
+    const t = Date.now();
+    await client.query(`UPDATE projects p SET design_count = n.n FROM (SELECT project_id, count(*)::int AS n FROM designs GROUP BY project_id) n
+      WHERE n.project_id = p.id AND p.design_count <> n.n`);
+    await client.query(`UPDATE designs d SET approved_revision_id = a.id, approved_at = a.approved_at FROM (
+        SELECT DISTINCT ON (r.design_id) r.design_id, r.id, coalesce(v.decided_at, r.created_at) AS approved_at
+        FROM revisions r LEFT JOIN reviews v ON v.revision_id = r.id AND v.decision = 'approve'
+        WHERE r.status = 'approved' ORDER BY r.design_id, r.number DESC, v.decided_at DESC) a
+      WHERE a.design_id = d.id AND d.approved_revision_id IS DISTINCT FROM a.id`);
+    notes.push(`trigger-kept columns ${seconds(t)}`);
+    const ti = Date.now();
+    await Promise.all(clients.map(async (c, i) => {
+      await c.query("SET maintenance_work_mem = '512MB'");
+      for (const { def } of indexes.filter((_, k) => k % clients.length === i)) await c.query(def);
+    }));
+    notes.push(`${indexes.length} indexes rebuilt ${seconds(ti)}`);
+  }
+  await client.query("COMMIT");
   // What autovacuum does on its own for insert-only tables, here at once: statistics, and the
   // visibility map that lets counts use index-only scans (TOAST is skipped: nothing there to do).
+  const tv = Date.now();
   await client.query("VACUUM (ANALYZE, PROCESS_TOAST FALSE)");
-  console.log(`bench:db: generated units ${from}–${to - 1}: ${took.join(", ")}`);
+  notes.push(`vacuum ${seconds(tv)}`);
+  console.log(`bench:db: generated units ${from}–${to - 1} in ${seconds(started)}: ${notes.join(", ")}`);
 }
 
 /** Rows per table, for the report and for the migration check (nothing may be lost). */

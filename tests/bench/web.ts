@@ -28,7 +28,8 @@ import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { buildApp, buildIsStale } from "../../db/lib/build";
 import { freePort } from "../../db/lib/ports";
-import { ensureAppDatabase, ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { DEMO_PROJECT_ID } from "../../db/seeds/02_demo_projects";
 import { defaultDesignInput } from "../../engine";
@@ -83,8 +84,11 @@ async function main(): Promise<void> {
   cluster = { binDir, version, dataDir: path.join(workDir, "pg"), port: await freePort() };
   ensureCluster(cluster, { throwaway: true });
   startServer(cluster, { throwaway: true });
-  const databaseUrl = ensureAppDatabase(cluster, "pierwise_bench", crypto.randomBytes(12).toString("hex"), "pierwise_bench");
-  const migrator = knex({ ...knexConfig, connection: databaseUrl });
+  const roles = ensureDatabaseRoles(cluster, {
+    appRole: "pierwise_bench", appPassword: crypto.randomBytes(12).toString("hex"), ownerPassword: crypto.randomBytes(12).toString("hex"), database: "pierwise_bench",
+  });
+  const databaseUrl = roles.appUrl;
+  const migrator = knex({ ...knexConfig, connection: roles.ownerUrl });
   await migrator.migrate.latest();
   await migrator.seed.run();
   await migrator.destroy();

@@ -4,9 +4,10 @@
  * of scanning the referencing table. Read from the catalog, so a table added later by any
  * migration is checked too; the failure names each missing index and the statement that adds it.
  */
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import type { Knex } from "knex";
 import { db } from "@/db/client";
+import { ownerDb } from "../support/owner-db";
 
 interface ForeignKey {
   constraint: string;
@@ -46,7 +47,8 @@ describe("foreign keys (catalog)", () => {
   });
 
   it("tells a foreign key with an index from one without, and a partial or later-column index does not count", async () => {
-    const trx = await db.transaction();
+    // A probe table needs the schema owner: the app role cannot create tables.
+    const trx = await ownerDb.transaction();
     try {
       await trx.raw("CREATE TABLE fk_probe (id serial PRIMARY KEY, note text, user_id uuid REFERENCES users(id))");
       expect((await foreignKeys(trx, "fk_probe"))[0].covered).toBe(false);
@@ -60,3 +62,5 @@ describe("foreign keys (catalog)", () => {
     }
   });
 });
+
+afterAll(() => ownerDb.destroy());

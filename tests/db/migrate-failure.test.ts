@@ -2,13 +2,14 @@
  * A migration that fails at start-up is reported with its file name, PostgreSQL's own error line,
  * the database and the fix, and leaves the database as it was (knex runs one start's pending
  * migrations in one transaction). Runs against the suite's throwaway database with migrations of
- * its own, recorded in a table of its own so the real migration history is not touched.
+ * its own, recorded in a table of its own so the real migration history is not touched. Runs as
+ * the owner role, as `npm start` migrates.
  */
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { db } from "@/db/client";
+import { ownerDb as db, ownerUrl } from "../support/owner-db";
 import { migrateToLatest } from "@/db/lib/migrate";
 
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "pierwise-migrations-"));
@@ -27,7 +28,7 @@ describe("a failing migration at start-up", () => {
     fs.writeFileSync(path.join(dir, "20990101000000_make_table.cjs"), `exports.up = (k) => k.schema.createTable("${table}", (t) => t.integer("n"));\nexports.down = () => {};\n`);
     fs.writeFileSync(path.join(dir, "20990101000001_broken.cjs"), `exports.up = (k) => k.raw("ALTER TABLE no_such_table_here ADD COLUMN x integer");\nexports.down = () => {};\n`);
     const overrides = { directory: dir, loadExtensions: [".cjs"], tableName: history };
-    const failure = await migrateToLatest(process.env.DATABASE_URL!, "/the/cluster/folder", overrides).then(() => null, (e: Error) => e.message);
+    const failure = await migrateToLatest(ownerUrl, "/the/cluster/folder", overrides).then(() => null, (e: Error) => e.message);
     expect(failure).toMatch(/^migration 20990101000001_broken\.cjs failed: ERROR: {2}relation "no_such_table_here" does not exist\. /);
     expect(failure).toContain("Folder: /the/cluster/folder, database pierwise_test on 127.0.0.1:");
     expect(failure).toMatch(/Fix: every migration of this start was rolled back/);
@@ -46,7 +47,7 @@ describe("a failing migration at start-up", () => {
       await db.schema.createTable(lockHistory, (t) => { t.increments("id"); t.string("name"); t.integer("batch"); t.timestamp("migration_time"); });
       await db.schema.createTable(`${lockHistory}_lock`, (t) => { t.increments("index"); t.integer("is_locked"); });
       await db(`${lockHistory}_lock`).insert({ is_locked: 1 });
-      const failure = await migrateToLatest(process.env.DATABASE_URL!, "/the/cluster/folder", overrides).then(() => null, (e: Error) => e.message);
+      const failure = await migrateToLatest(ownerUrl, "/the/cluster/folder", overrides).then(() => null, (e: Error) => e.message);
       expect(failure).toMatch(/is being migrated by another process/);
       expect(failure).toMatch(/migrate:unlock/);
     } finally {
@@ -60,7 +61,7 @@ describe("a failing migration at start-up", () => {
     const empty = fs.mkdtempSync(path.join(os.tmpdir(), "pierwise-migrations-none-"));
     try {
       // The real history (the suite's migrations) against a folder holding none of them.
-      const failure = await migrateToLatest(process.env.DATABASE_URL!, "/the/cluster/folder", { directory: empty, loadExtensions: [".cjs"] }).then(() => null, (e: Error) => e.message);
+      const failure = await migrateToLatest(ownerUrl, "/the/cluster/folder", { directory: empty, loadExtensions: [".cjs"] }).then(() => null, (e: Error) => e.message);
       expect(failure).toMatch(/has migrations this checkout does not have \(\d{14}_/);
       expect(failure).toMatch(/Fix: update this checkout \(git pull\)/);
     } finally {

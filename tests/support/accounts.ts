@@ -57,3 +57,15 @@ export async function freshReset(forUserId: string, expiresAt = new Date(Date.no
   await db("password_resets").insert({ user_id: forUserId, token_hash: hashToken(token), expires_at: expiresAt });
   return token;
 }
+
+/** A sign-up waiting for its e-mailed link, as if the form had been sent; returns the plain token. */
+export async function freshSignUp(options: { email?: string; expiresAt?: Date } = {}) {
+  sharedHash ??= hashPassword(FRESH_PASSWORD);
+  const token = crypto.randomBytes(32).toString("base64url");
+  const email = options.email ?? uniqueEmail("founder");
+  await db("sign_up_requests").insert({
+    email, organisation_name: "Fresh Sign-up Co (invented)", name: "Fresh Founder", password_hash: await sharedHash,
+    roles: rolesLiteral(db, ["admin", "designer"]), token_hash: hashToken(token), expires_at: options.expiresAt ?? new Date(Date.now() + 86_400_000),
+  });
+  return { token, email };
+}

@@ -7,7 +7,7 @@
 import { sealData } from "iron-session";
 import { vi } from "vitest";
 
-type Cookie = { name: string; value: string };
+type Cookie = { name: string; value: string; options?: { secure?: boolean; httpOnly?: boolean; sameSite?: string } };
 const jar = new Map<string, Cookie>();
 const requestHeaders = new Map<string, string>();
 
@@ -15,8 +15,8 @@ const cookieStore = {
   get: (name: string) => jar.get(name),
   getAll: () => [...jar.values()],
   has: (name: string) => jar.has(name),
-  set: (name: string | Cookie, value?: string, options?: { maxAge?: number }) => {
-    const cookie = typeof name === "string" ? { name, value: value ?? "" } : name;
+  set: (name: string | Cookie, value?: string, options?: { maxAge?: number } & Cookie["options"]) => {
+    const cookie = typeof name === "string" ? { name, value: value ?? "", options } : name;
     if (options?.maxAge === 0 || cookie.value === "") jar.delete(cookie.name);
     else jar.set(cookie.name, cookie);
   },
@@ -37,18 +37,24 @@ vi.mock("next/cache", () => ({
   unstable_cache: <T>(fn: T) => fn,
 }));
 
-/** Forget the signed-in user and start a fresh "request" from the given address. */
-export function resetRequest(options: { ip?: string } = {}): void {
+/** Forget the signed-in user and start a fresh "request" from the given address (and with any extra request headers). */
+export function resetRequest(options: { ip?: string; headers?: Record<string, string> } = {}): void {
   jar.clear();
   requestHeaders.clear();
   requestHeaders.set("x-forwarded-for", options.ip ?? "203.0.113.10");
   // The socket address the server's preload would stamp (db/lib/peer-address.cjs): the address requestIp() trusts.
   requestHeaders.set("x-pierwise-peer-address", options.ip ?? "203.0.113.10");
+  for (const [name, value] of Object.entries(options.headers ?? {})) requestHeaders.set(name.toLowerCase(), value);
 }
 resetRequest();
 
 export function sessionCookie(): string | undefined {
   return jar.get("pierwise_session")?.value;
+}
+
+/** The attributes the app last set the session cookie with (Secure, HttpOnly, SameSite). */
+export function sessionCookieOptions(): Cookie["options"] {
+  return jar.get("pierwise_session")?.options;
 }
 
 /** Signs in as a user by e-mail without going through the password check (for access tests). */

@@ -37,6 +37,7 @@ const RULES: { layer: string; forbidden: RegExp; why: string }[] = [
   { layer: "engine", forbidden: /^(app|components|db)(\/|$)|^package:(react|react-dom|next|knex|pg)(\/|$)/, why: "the engine is pure TypeScript" },
   { layer: "db", forbidden: /^(app|components)(\/|$)/, why: "db sits below components and app (seeds too)" },
   { layer: "components", forbidden: /^app(\/|$)/, why: "components receive route actions as props" },
+  { layer: "app/_lib", forbidden: /^app\/(?!_lib(\/|$))/, why: "helpers and services sit below the routes that call them" },
 ];
 
 describe("layers import only downward", () => {

@@ -164,8 +164,8 @@ describe("labels", () => {
   });
   it("gives forces in pounds or kilonewtons", () => {
     expect(formatForceLb(10579, "imperial")).toBe("10,579 lb");
-    // 1 lbf = 4.448222 N (NIST SP 811, 2008 edition, Appendix B.8): 1,000 lbf = 4.45 kN.
-    expect(formatForceLb(1000, "metric")).toBe("4.45 kN");
+    // 1 lbf = 4.448222 N (NIST SP 811, 2008 edition, Appendix B.8): 1,000 lbf = 4.448 kN, shown to 0.1 kN.
+    expect(formatForceLb(1000, "metric")).toBe("4.4 kN");
   });
   it("shows the engine's own clearance and embedment values", () => {
     const f = previewFigures(demo, "imperial");

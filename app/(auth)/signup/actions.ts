@@ -1,40 +1,25 @@
 "use server";
 
 import { redirect } from "next/navigation";
-import { z } from "zod";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
-import { hashPassword } from "@/app/_lib/password";
-import { requestIp } from "@/app/_lib/request-ip";
-import { signUpInput, signUpSchema } from "@/app/_lib/schemas/account";
-import { startSession } from "@/app/_lib/start-session";
-import { recordAudit } from "@/db/queries/audit";
-import { EmailInUseError, createOrganisationWithAdmin } from "@/db/queries/organisations";
-import { findUserByEmail } from "@/db/queries/users";
+import { forAction } from "@/app/_lib/action-errors";
+import { signUpInput } from "@/app/_lib/schemas/account";
+import { completeSignUp, requestSignUp } from "@/app/_lib/services/sign-up";
 
-const EMAIL_IN_USE = "That e-mail is already in use. Sign in instead, or ask your company's admin to invite you.";
-
-/** Creates an organisation and its first admin in one transaction, signs them in and opens the members page. */
+/**
+ * Sign-up, step 1: the same answer for every valid form (app/_lib/services/sign-up.ts), so it never
+ * tells whether the address has an account. The e-mail carries the link that finishes it.
+ */
 export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const values = { ...typedValues(form), extraRoles: form.getAll("extraRoles").join(",") };
-  const parsed = signUpSchema.safeParse(signUpInput(form));
-  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
-  const input = parsed.data;
-  if (await findUserByEmail(input.email)) return { message: "Check the highlighted fields.", fieldErrors: { email: [EMAIL_IN_USE] }, values };
-  let created;
-  try {
-    created = await createOrganisationWithAdmin({
-      organisationName: input.organisationName,
-      name: input.name,
-      email: input.email,
-      passwordHash: await hashPassword(input.password),
-      roles: ["admin", ...input.extraRoles],
-    });
-  } catch (error) {
-    // Another sign-up took the e-mail between the check and the insert; nothing was created.
-    if (error instanceof EmailInUseError) return { message: "Check the highlighted fields.", fieldErrors: { email: [EMAIL_IN_USE] }, values };
-    throw error;
-  }
-  await recordAudit({ organisationId: created.organisationId, actorUserId: created.userId, action: "sign-up", subject: input.email, ip: await requestIp() });
-  await startSession(created.userId, created.organisationId);
+  const sent = await forAction(() => requestSignUp(() => signUpInput(form)), values);
+  if (!sent.ok) return sent.state;
+  return { ok: true, message: sent.value.message, values };
+}
+
+/** Sign-up, step 2, from the e-mailed link: creates the organisation and its admin, signs them in, opens the members page. */
+export async function confirmSignUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const done = await forAction(() => completeSignUp(String(form.get("token") ?? "")));
+  if (!done.ok) return done.state;
   redirect("/admin/members?welcome=1");
 }

@@ -1,46 +1,39 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
-import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { redirect } from "next/navigation";
-import { requireRole, requireUser } from "@/app/_lib/auth";
-import { getSession } from "@/app/_lib/session";
-import { endSessionsOf } from "@/db/queries/sessions";
+import { typedValues, type ActionState } from "@/components/ui/action-state";
+import { forAction } from "@/app/_lib/action-errors";
+import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { requestIp } from "@/app/_lib/request-ip";
-import { licenceInput, licenceSchema, LICENSING_STATES } from "@/app/_lib/schemas/licence";
-import { recordAudit } from "@/db/queries/audit";
-import { removeLicence, saveLicence } from "@/db/queries/licences";
+import { getSession } from "@/app/_lib/session";
+import { licenceInput } from "@/app/_lib/schemas/licence";
+import { removeLicence, saveLicence, signOutEverywhere } from "@/app/_lib/services/account";
+
+const PAGE = "/account";
+const signedIn = () => forPage(() => requireUser(), PAGE);
 
 /** Adds a licence for a state, or updates the number and expiry of the one already held there. */
 export async function saveLicenceAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const user = await forPage(() => requireRole("engineer"), "/account");
-  const values = typedValues(form);
-  const parsed = licenceSchema.safeParse(licenceInput(form));
-  if (!parsed.success) return { message: "Check the highlighted fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
-  await saveLicence(user.userId, parsed.data);
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "licence-saved", subject: user.email, detail: parsed.data, ip: await requestIp() });
-  revalidatePath("/account");
-  return { ok: true, message: `Licence for ${parsed.data.state} saved, valid through ${parsed.data.expiresOn}.` };
+  const user = await signedIn();
+  const saved = await forAction(() => saveLicence(user, () => licenceInput(form)), typedValues(form), PAGE);
+  if (!saved.ok) return saved.state;
+  revalidatePath(PAGE);
+  return { ok: true, message: `Licence for ${saved.value.state} saved, valid through ${saved.value.expiresOn}.` };
 }
 
 export async function removeLicenceAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const user = await forPage(() => requireRole("engineer"), "/account");
-  const state = String(form.get("state") ?? "").toUpperCase();
-  if (!(LICENSING_STATES as readonly string[]).includes(state)) return { message: "Licensing state must be a US state, DC or territory code such as CO." };
-  const removed = await removeLicence(user.userId, state);
-  if (!removed) return { message: `You hold no recorded licence in ${state}.` };
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "licence-removed", subject: user.email, detail: { state }, ip: await requestIp() });
-  revalidatePath("/account");
-  return { ok: true, message: `Licence for ${state} removed.` };
+  const user = await signedIn();
+  const removed = await forAction(() => removeLicence(user, () => ({ state: form.get("state") ?? undefined })), undefined, PAGE);
+  if (!removed.ok) return removed.state;
+  revalidatePath(PAGE);
+  return { ok: true, message: `Licence for ${removed.value.state} removed.` };
 }
 
 /** Ends every session of this person, on every device, this one included, and goes to sign-in. */
 export async function signOutEverywhereAction(): Promise<void> {
-  const user = await forPage(() => requireUser(), "/account");
-  const ended = await endSessionsOf(user.userId);
-  await recordAudit({ organisationId: user.organisationId, actorUserId: user.userId, action: "signed-out-everywhere", subject: user.email, detail: { sessions: ended }, ip: await requestIp() });
+  const user = await signedIn();
+  await signOutEverywhere(user);
   (await getSession()).destroy();
   redirect("/login");
 }

@@ -5,15 +5,17 @@ import { forPage } from "@/app/_lib/page-access";
 import { quarterIn } from "@/app/_lib/review/field-format";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
-import { approvedSpecs } from "@/db/queries/review-queue";
+import { approvedSpecs, fieldCursorText, parseFieldCursor } from "@/db/queries/review-queue";
 import { shortDate } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Field specs" };
 
 /** The crew's list: only approved revisions have a field spec; superseded ones say so. */
-export default async function FieldSpecsPage() {
+export default async function FieldSpecsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/field");
-  const specs = await approvedSpecs(user.organisationId);
+  const older = (await searchParams).older;
+  const specs = await approvedSpecs(user.organisationId, { older: parseFieldCursor(Array.isArray(older) ? older[0] : older) });
+  const last = specs.at(-1);
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-2xl font-semibold">Field specs</h1>
@@ -35,6 +37,11 @@ export default async function FieldSpecsPage() {
           ))}
         </ul>
       )}
+      {specs.more && last?.approvedAt ? (
+        <p className="text-base">
+          <Link href={`/field?older=${encodeURIComponent(fieldCursorText({ approvedAt: last.approvedAt, designId: last.designId }))}`} className="font-medium text-accent-800 underline">Older specs</Link>
+        </p>
+      ) : null}
       <Caution />
     </div>
   );

@@ -3,7 +3,7 @@
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { requireUser } from "@/app/_lib/auth";
-import { answerEngagement } from "@/app/_lib/engagements/service";
+import { answerEngagement } from "@/app/_lib/services/engagements";
 import { forPage } from "@/app/_lib/page-access";
 import { actionState } from "@/app/_lib/action-errors";
 import { typedValues, type ActionState } from "@/components/ui/action-state";

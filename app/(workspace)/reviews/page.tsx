@@ -6,16 +6,20 @@ import { displayStatus } from "@/app/_lib/review/standing";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { dateInWords, shortDate } from "@/components/ui/dates";
-import { openHoldsOfOrganisation } from "@/db/queries/holds";
-import { recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
+import { countOpenHolds, openHoldsOfOrganisation } from "@/db/queries/holds";
+import { countWaitingFor, recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
 
 export const metadata: Metadata = { title: "Reviews" };
 
 export default async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
-  const [holds, waiting, mine, decided] = await Promise.all([
-    hasRole(user, "engineer") ? openHoldsOfOrganisation(user.organisationId) : Promise.resolve([]),
-    hasRole(user, "engineer") ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
+  const engineer = hasRole(user, "engineer");
+  // Each list shows its first rows; the counts say how many there are in all.
+  const [holds, holdCount, waiting, waitingCount, mine, decided] = await Promise.all([
+    engineer ? openHoldsOfOrganisation(user.organisationId) : Promise.resolve([]),
+    engineer ? countOpenHolds(user.organisationId) : Promise.resolve(0),
+    engineer ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
+    engineer ? countWaitingFor(user.organisationId, user.userId) : Promise.resolve(0),
     hasRole(user, "designer") ? submittedBy(user.organisationId, user.userId) : Promise.resolve(null),
     recentlyDecided(user.organisationId),
   ]);
@@ -24,7 +28,7 @@ export default async function ReviewsPage() {
       <h1 className="text-2xl font-semibold">Reviews</h1>
       {holds.length ? (
         <section aria-labelledby="holds-h" className="rounded-lg border-2 border-red-600 bg-red-50 p-4 text-red-950">
-          <h2 id="holds-h" className="text-base font-semibold">On hold: the crew is waiting for an engineer ({holds.length})</h2>
+          <h2 id="holds-h" className="text-base font-semibold">On hold: the crew is waiting for an engineer ({holdCount > holds.length ? `oldest ${holds.length} of ${holdCount.toLocaleString("en-US")}` : holds.length})</h2>
           <ul className="mt-2 divide-y divide-red-200">
             {holds.map((h) => (
               <li key={h.id} className="py-2 text-sm">
@@ -37,7 +41,10 @@ export default async function ReviewsPage() {
           </ul>
         </section>
       ) : null}
-      {waiting ? <QueueTable timeZone={user.timeZone} title="Waiting for your review" rows={waiting} empty="Nothing is waiting for your review." show="submitted" /> : null}
+      {waiting ? (
+        <QueueTable timeZone={user.timeZone} title="Waiting for your review" rows={waiting} total={waitingCount} empty="Nothing is waiting for your review." show="submitted"
+          more={{ href: "/queue?state=waiting", label: `All ${waitingCount.toLocaleString("en-US")} waiting, in your review queue` }} />
+      ) : null}
       {mine ? <QueueTable timeZone={user.timeZone} title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
       <QueueTable timeZone={user.timeZone} title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />
       <Caution />
@@ -46,12 +53,14 @@ export default async function ReviewsPage() {
 }
 
 
-function QueueTable({ title, rows, empty, show, timeZone }: { title: string; rows: QueueRow[]; empty: string; show: "submitted" | "engineer" | "decided"; timeZone?: string }) {
+function QueueTable({ title, rows, total, more, empty, show, timeZone }: {
+  title: string; rows: QueueRow[]; total?: number; more?: { href: string; label: string }; empty: string; show: "submitted" | "engineer" | "decided"; timeZone?: string;
+}) {
   const when = (d: Date | null) => shortDate(d, timeZone);
   const id = title.toLowerCase().replace(/\W+/g, "-");
   return (
     <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4">
-      <h2 id={id} className="text-base font-semibold">{title} ({rows.length})</h2>
+      <h2 id={id} className="text-base font-semibold">{title} ({total !== undefined && total > rows.length ? `first ${rows.length} of ${total.toLocaleString("en-US")}` : rows.length})</h2>
       {rows.length === 0 ? <p className="mt-1 text-sm text-slate-600">{empty}</p> : (
         <ul className="mt-2 divide-y divide-slate-100">
           {rows.map((r, i) => (
@@ -68,6 +77,7 @@ function QueueTable({ title, rows, empty, show, timeZone }: { title: string; row
           ))}
         </ul>
       )}
+      {more && total !== undefined && total > rows.length ? <p className="mt-2 text-sm"><Link href={more.href} className="font-medium text-accent-800 underline">{more.label}</Link></p> : null}
     </section>
   );
 }

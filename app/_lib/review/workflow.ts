@@ -9,7 +9,7 @@ import { recordAudit } from "@/db/queries/audit";
 import { activeMember, userEmailAndName } from "@/db/queries/review-people";
 import { engagedEngineers } from "@/db/queries/engagements";
 import {
-  designAuthorIds, factsOf, getRevisionContext, insertReview, latestRevisionNumber, lockRevisionStatus, recordDecision,
+  designAuthorIds, factsOf, getRevisionContext, insertReview, latestRevisionNumber, lockDesign, lockRevisionStatus, recordDecision,
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
 } from "@/db/queries/reviews";
 import { confirmSignature, decideOverrides } from "./approval-signature";
@@ -61,7 +61,10 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
 
   // The state change, its audit event and its e-mail commit together; the mail goes out after commit.
   const { reviewId, mailId } = await db.transaction(async (trx) => {
+    // Revision first, then design: the order a decision takes (its status change updates the design
+    // through the trigger of 20261202500000), so the two can never wait on each other in a cycle.
     const status = await lockRevisionStatus(trx, revisionId);
+    await lockDesign(trx, revision.designId);
     if (status !== "draft" && status !== "changes_requested") {
       throw new ConflictError(`Only a draft or a revision with changes requested can be submitted; revision ${revision.number} is ${STATUS_PHRASES[status!]}.`, { status });
     }

@@ -17,3 +17,8 @@ export const changeRolesSchema = z.object({ membershipId: idField, roles: rolesF
 export function changeRolesInput(form: FormData) {
   return { membershipId: form.get("membershipId") ?? undefined, roles: form.getAll("roles") };
 }
+
+/** The API's PATCH of a membership: new roles, or active true/false; one of them per request. */
+export const memberPatchSchema = z
+  .strictObject({ roles: rolesField.optional(), active: z.boolean({ error: "active must be true or false." }).optional() })
+  .refine((p) => (p.roles === undefined) !== (p.active === undefined), { error: "Send either roles or active, one per request.", path: ["roles"] });

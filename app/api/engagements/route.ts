@@ -1,6 +1,6 @@
 import { apiRoute } from "@/app/_lib/api";
 import { requireUser } from "@/app/_lib/auth";
-import { myEngagements } from "@/app/_lib/engagements/service";
+import { myEngagements } from "@/app/_lib/services/engagements";
 
 export const dynamic = "force-dynamic";
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { currentUser } from "@/app/_lib/auth";
-import { canAccept } from "@/app/_lib/engagements/service";
+import { canAccept } from "@/app/_lib/services/engagements";
 import { hashToken } from "@/app/_lib/tokens";
 import { AnswerForm } from "@/components/engagements/answer-form";
 import { answerEngagementAction } from "@/app/(workspace)/queue/actions";

@@ -5,7 +5,7 @@ import { findInvitation } from "@/db/queries/invitations";
 import { findUserByEmail } from "@/db/queries/users";
 import { ROLE_LABELS } from "@/db/roles";
 import { AcceptForm } from "./_components/accept-form";
-import { invitationProblem } from "./messages";
+import { invitationProblem } from "@/app/_lib/account-messages";
 
 export const metadata: Metadata = { title: "Accept invitation", referrer: "no-referrer" };
 export const dynamic = "force-dynamic";

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { hashToken } from "@/app/_lib/tokens";
 import { passwordResetState } from "@/db/queries/password-resets";
 import { NewPasswordForm } from "./_components/new-password-form";
-import { resetProblem } from "./messages";
+import { resetProblem } from "@/app/_lib/account-messages";
 
 export const metadata: Metadata = { title: "Set a new password", referrer: "no-referrer" };
 export const dynamic = "force-dynamic";

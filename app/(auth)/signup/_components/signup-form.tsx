@@ -8,10 +8,19 @@ import { signUpInput, signUpSchema } from "@/app/_lib/schemas/account";
 import { signUpAction } from "../actions";
 
 export function SignUpForm() {
-    const { clientErrors, onSubmit } = useClientValidation(signUpSchema, signUpInput);
+  const { clientErrors, onSubmit } = useClientValidation(signUpSchema, signUpInput);
   const { state, formProps } = useKeptForm(signUpAction, { validate: onSubmit });
   const errors = clientErrors ?? state.fieldErrors;
   const v = state.values;
+  // Sent: the same words whether or not the address already had an account; the e-mail says which.
+  if (state.ok) {
+    return (
+      <div role="status" className="space-y-2">
+        <h2 className="text-lg font-semibold">Check your e-mail</h2>
+        <p className="text-slate-700">{state.message}</p>
+      </div>
+    );
+  }
   return (
     <form {...formProps} className="space-y-4" noValidate>
       <Field label="Company name" name="organisationName" autoComplete="organization" required defaultValue={v?.organisationName} error={errors?.organisationName} />

@@ -4,7 +4,12 @@ import QRCode from "qrcode";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { forPage } from "@/app/_lib/page-access";
-import { bearing, ftIn, quarterIn } from "@/app/_lib/review/field-format";
+import { bearing } from "@/app/_lib/review/field-format";
+import { readerUnits } from "@/app/_lib/unit-preference";
+import { formatBags, formatPipeSize, formatQuantity } from "@/components/format/quantity";
+import { sayIn, storedIn } from "@/components/format/quantity-text";
+import { tapeInches, tapeLength } from "@/components/format/tape";
+import { UnitsSwitch } from "@/components/format/units-switch";
 import { checkOutcome } from "@/components/review/check-outcome";
 import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { fmt } from "@/app/_lib/review/report-model";
@@ -17,7 +22,7 @@ import { HoldBanner } from "@/components/review/hold-banner";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
-import { SITE_CAUTIONS } from "@/engine/notices";
+import { SITE_CAUTION_TEXTS } from "@/engine/notices";
 import { asBuiltEntries } from "@/db/queries/as-built";
 import { pourFromAsBuilt } from "@/app/_lib/review/as-dug";
 import { AsBuiltForm } from "./_components/as-built-form";
@@ -38,6 +43,10 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
     return { user, ctx: await ownedRevision(user, revisionId) };
   }, `/field/${revisionId}`);
   const standing = await revisionStanding(ctx);
+  const units = await readerUnits();
+  const quarterIn = (inches: number) => tapeInches(inches, units);
+  const ftIn = (inches: number) => tapeLength(inches, units);
+  const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, units);
 
   if (ctx.status !== "approved") {
     return (
@@ -94,7 +103,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
       <Caution />
       <section aria-labelledby="safety-h" className="safety-box rounded-lg border-2 border-amber-400 bg-amber-50 p-4 text-amber-950">
         <h2 id="safety-h" className="text-lg font-semibold">Safety</h2>
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-base">{SITE_CAUTION_TEXTS.map((c, i) => <li key={i}>{sayIn(c, units)}</li>)}</ul>
       </section>
       <div className="flex items-start justify-between gap-4">
         <div>
@@ -109,7 +118,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         </figure>
       </div>
       {a?.verifyCode ? <p className="text-sm">Approval check: <a className="break-all font-mono underline" href={url}>{url}</a></p> : null}
-      <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} />
+      <CheckSummary outcome={checkOutcome(r)} overrides={a?.overrides ?? []} units={units} />
       {cleared.length ? (
         <section aria-labelledby="cleared-h" className="rounded-lg border-2 border-sky-600 bg-sky-50 p-4 text-sky-950">
           <h2 id="cleared-h" className="text-lg font-semibold">Engineer&apos;s instructions after a hold</h2>
@@ -123,7 +132,8 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           </ul>
         </section>
       ) : null}
-      <div className="no-print flex flex-wrap gap-2">
+      <div className="no-print flex flex-wrap items-center gap-2">
+        <UnitsSwitch units={units} />
         <PrintButton />
         <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md border border-slate-300 bg-white px-4 py-3 text-base">Calculation report (PDF)</a>
       </div>
@@ -132,8 +142,8 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         <h2 id="holes-h" className="text-lg font-semibold">Every hole</h2>
         <div className="mt-2 grid grid-cols-2 gap-3">
           <div><p className="text-sm text-slate-600">Diameter</p><p className={big}>{quarterIn(r.footing.diameterIn)}</p></div>
-          <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p><p className="text-sm">{ftIn(r.footing.depthIn)}</p></div>
-          <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{r.footing.post.size} in std. pipe, {r.field.posts.length} posts</p></div>
+          <div><p className="text-sm text-slate-600">Depth (at least)</p><p className={big}>{quarterIn(r.footing.depthIn)}</p>{units === "imperial" ? <p className="text-sm">{ftIn(r.footing.depthIn)}</p> : null}</div>
+          <div><p className="text-sm text-slate-600">Post</p><p className="text-lg font-semibold">{formatPipeSize(r.footing.post.size, units)}, {r.field.posts.length} posts</p></div>
           <div><p className="text-sm text-slate-600">Tilt setting</p><p className={big}>{fmt(r.geometry.tiltDeg)}°</p>{tilts && tilts.length > 1 && tiltSettings.length === 0 ? <p className="text-sm">Seasonal settings: {tilts.join("°, ")}°</p> : null}{azimuthDeg !== undefined ? <p className="text-base font-semibold">Modules face {bearing(azimuthDeg)}</p> : null}</div>
           <div className="col-span-2"><p className="text-sm text-slate-600">Lowest panel edge above grade (hold at least)</p><p className={big}>{quarterIn(r.geometry.minClearanceIn)}</p></div>
         </div>
@@ -175,14 +185,14 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
 
       <section aria-labelledby="concrete-h" className="rounded-lg border border-slate-200 bg-white p-4">
         <h2 id="concrete-h" className="text-lg font-semibold">Concrete to order</h2>
-        <p className="mt-1 text-base"><strong className="text-xl">{fmt(r.concrete.job.orderYd3, 2)} yd³</strong> ready-mix (the holes take {fmt(r.concrete.job.totalYd3, 2)} yd³; with {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste {fmt(r.concrete.job.withWasteYd3, 2)} yd³, ordered up to the next ¼ yd³)</p>
-        <p className="text-base">or <strong>{r.concrete.job.bags80Lb} bags of 80 lb</strong> premix ({r.concrete.job.bags60Lb} × 60 lb)</p>
-        <p className="text-sm text-slate-600">About {fmt(r.concrete.perHole.volumeFt3, 1)} ft³ and {r.concrete.perHole.bags80Lb} × 80 lb bags per hole.</p>
+        <p className="mt-1 text-base"><strong className="text-xl">{q(r.concrete.job.orderYd3, "yd3")}</strong> ready-mix (the holes take {q(r.concrete.job.totalYd3, "yd3")}; with {fmt(r.concrete.job.wasteAllowancePct, 0)}% waste {q(r.concrete.job.withWasteYd3, "yd3")}, ordered up to the next {units === "imperial" ? "¼ yd³" : q(0.25, "yd3")})</p>
+        <p className="text-base">or <strong>{formatBags(r.concrete.job.bags80Lb, 80, units)}</strong> premix ({formatBags(r.concrete.job.bags60Lb, 60, units)})</p>
+        <p className="text-sm text-slate-600">About {q(r.concrete.perHole.volumeFt3, "ft3")} and {formatBags(r.concrete.perHole.bags80Lb, 80, units)} per hole.</p>
         {asDug ? (
           <div className="mt-3 rounded-md border-2 border-accent-700 p-3">
             <h3 className="text-base font-semibold">For the holes as dug</h3>
-            <p className="text-base"><strong className="text-xl">{fmt(asDug.concrete.orderYd3, 2)} yd³</strong> ready-mix (designed: {fmt(r.concrete.job.orderYd3, 2)} yd³), or <strong>{asDug.concrete.bags80Lb} bags of 80 lb</strong> (designed: {r.concrete.job.bags80Lb})</p>
-            <p className="text-sm text-slate-600">The holes take {fmt(asDug.concrete.totalYd3, 2)} yd³ less the posts; with {fmt(asDug.concrete.wasteAllowancePct, 0)}% waste {fmt(asDug.concrete.withWasteYd3, 2)} yd³. {asDug.loggedPostIds.length} of {r.field.posts.length} holes from the as-built log; the rest at the designed size.</p>
+            <p className="text-base"><strong className="text-xl">{q(asDug.concrete.orderYd3, "yd3")}</strong> ready-mix (designed: {q(r.concrete.job.orderYd3, "yd3")}), or <strong>{formatBags(asDug.concrete.bags80Lb, 80, units)}</strong> (designed: {r.concrete.job.bags80Lb})</p>
+            <p className="text-sm text-slate-600">The holes take {q(asDug.concrete.totalYd3, "yd3")} less the posts; with {fmt(asDug.concrete.wasteAllowancePct, 0)}% waste {q(asDug.concrete.withWasteYd3, "yd3")}. {asDug.loggedPostIds.length} of {r.field.posts.length} holes from the as-built log; the rest at the designed size.</p>
             <table className="mt-1 w-full text-sm">
               <thead><tr className="text-left text-slate-600"><th className="py-1 pr-2 font-medium">Hole</th><th className="py-1 pr-2 font-medium">As dug</th><th className="py-1 pr-2 font-medium">Concrete</th><th className="py-1 font-medium">Weight</th></tr></thead>
               <tbody>
@@ -190,8 +200,8 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
                   <tr key={h.postId} className="border-t border-slate-200">
                     <td className="py-1 pr-2 font-semibold">{h.postId}</td>
                     <td className="py-1 pr-2 tabular-nums">{quarterIn(h.diameterIn)} × {quarterIn(h.depthIn)}{asDug.loggedPostIds.includes(h.postId) ? "" : " (designed)"}</td>
-                    <td className="py-1 pr-2 tabular-nums">{fmt(h.concreteFt3, 1)} ft³ ({h.bags80Lb} × 80 lb)</td>
-                    <td className="py-1 tabular-nums">{fmt(h.weightLb, 0)} lb</td>
+                    <td className="py-1 pr-2 tabular-nums">{q(h.concreteFt3, "ft3")} ({formatBags(h.bags80Lb, 80, units)})</td>
+                    <td className="py-1 tabular-nums">{formatQuantity(h.weightLb, "lbMass", units, { decimals: 0, metricDecimals: 0 })}</td>
                   </tr>
                 ))}
               </tbody>
@@ -201,12 +211,12 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
         {spec ? (
           <div className="mt-3">
             <h3 className="text-base font-semibold">Mix to order</h3>
-            <p className="text-base">Strength <strong>{spec.compressiveStrengthPsi.toLocaleString("en-US")} psi</strong> at 28 days · largest stone <strong>{spec.maxAggregateIn} in</strong> · slump <strong>{spec.slumpIn} in</strong></p>
-            <p className="text-sm text-slate-600">Never weaker than {spec.codeMinimumPsi.toLocaleString("en-US")} psi, the code minimum for concrete around posts.</p>
+            <p className="text-base">Strength <strong>{formatQuantity(spec.compressiveStrengthPsi, "psi", units)}</strong> at 28 days · largest stone <strong>{formatQuantity(spec.maxAggregateIn, "in", units, { decimals: 2 })}</strong> · slump <strong>{formatQuantity(spec.slumpIn, "in", units, { decimals: 2 })}</strong></p>
+            <p className="text-sm text-slate-600">Never weaker than {formatQuantity(spec.codeMinimumPsi, "psi", units)}, the code minimum for concrete around posts.</p>
             {spec.coldWeather.length ? (
               <div className="mt-2 rounded-md border border-sky-300 bg-sky-50 p-2 text-sky-950">
                 <p className="font-semibold">Cold site: the ground here freezes</p>
-                <ul className="list-disc pl-5 text-sm">{spec.coldWeather.map((c) => <li key={c}>{c}</li>)}</ul>
+                <ul className="list-disc pl-5 text-sm">{spec.coldWeather.map((c) => <li key={c}>{storedIn(c, units)}</li>)}</ul>
               </div>
             ) : null}
           </div>
@@ -219,14 +229,14 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
       </section>
 
 
-      <LaserCuts postIds={r.field.posts.map((p) => p.id)} />
+      <LaserCuts postIds={r.field.posts.map((p) => p.id)} units={units} />
 
       <section aria-labelledby="asbuilt-h" className="no-print rounded-lg border border-slate-200 bg-white p-4">
         <h2 id="asbuilt-h" className="text-lg font-semibold">As-built log</h2>
         {hasRole(user, "installer", "engineer") ? (
-          <div className="mt-2"><AsBuiltForm revisionId={ctx.id} postIds={r.field.posts.map((p) => p.id)} diameterIn={r.footing.diameterIn} depthIn={r.footing.depthIn} /></div>
+          <div className="mt-2"><AsBuiltForm revisionId={ctx.id} postIds={r.field.posts.map((p) => p.id)} diameterIn={r.footing.diameterIn} depthIn={r.footing.depthIn} units={units} /></div>
         ) : <p className="mt-1 text-sm text-slate-600">The crew (installer role) records each hole here.</p>}
-        <AsBuiltLog entries={entries} holds={holds} timeZone={ctx.timeZone} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} />
+        <AsBuiltLog entries={entries} holds={holds} timeZone={ctx.timeZone} depthIn={r.footing.depthIn} diameterIn={r.footing.diameterIn} units={units} />
       </section>
     </div>
   );

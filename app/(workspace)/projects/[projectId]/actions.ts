@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { forAction } from "@/app/_lib/action-errors";
 import { requireUser } from "@/app/_lib/auth";
-import { engageEngineer, revokeEngagement } from "@/app/_lib/engagements/service";
+import { engageEngineer, revokeEngagement } from "@/app/_lib/services/engagements";
 import { forPage } from "@/app/_lib/page-access";
 import { createDesign } from "@/app/_lib/services/designs";
 import { typedValues, type ActionState } from "@/components/ui/action-state";

@@ -15,7 +15,10 @@ import { flatten as flatInputs, inputChanges } from "@/components/design/revisio
 import { CheckSummary } from "@/components/review/check-summary";
 import { HoldBanner } from "@/components/review/hold-banner";
 import { clearHoldAction } from "./actions";
-import { PlainTable } from "@/components/review/plain-table";
+import { PlainTable, rowCount } from "@/components/review/plain-table";
+import { ChecksList } from "@/components/review/checks-list";
+import { FootingPerPost } from "@/components/review/footing-per-post";
+import { groupNotice, reviewInputGroups } from "@/components/review/review-inputs";
 import { ReviewPreview } from "@/components/review/review-preview";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
@@ -65,12 +68,18 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   );
   const previousComments = previous ? (await reviewsOfRevision(previous.id)).flatMap((rv) => rv.comments) : [];
   const changes = previous ? inputChanges(previous.input as DesignInput, ctx.input as DesignInput) : [];
-  const pinned = new Map<string, { body: string; when: Date }[]>();
-  for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), { body: c.body, when: c.createdAt }]);
+  const pinned = new Map<string, string[]>();
+  for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), c.body]);
   const inputs = Object.entries(flatInputs(ctx.input));
   const offCard = criteriaDifferences(ctx.input, ctx.criteria?.values);
+  const groups = reviewInputGroups(ctx.input, { changed: changes.map((c) => c.path), offCard, pinned });
+  const offCardRows = groups.flatMap((g) => g.rows.filter((row) => row.cardValue !== null));
   const outcome = checkOutcome(r);
+  const criteria = criteriaTable(ctx);
 
+  // Reading order, top to bottom on a phone: summary, what differs from the card, what changed,
+  // the checks, the inputs; the long tables after, folded with their row counts; the decision last
+  // on a phone (beside everything on a wide screen), reachable from the link at the top.
   return (
     <div className="space-y-6">
       <div className="space-y-2">
@@ -84,6 +93,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           {ctx.factsPinned ? <span className="text-slate-600">· project facts as approved</span> : null}
         </div>
         <div className="no-print flex flex-wrap gap-2 text-sm">
+          {canDecide ? <a href="#decide-h" className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800 lg:hidden">Go to your decision</a> : null}
+          {canSubmit ? <a href="#submit-h" className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800 lg:hidden">Go to submit</a> : null}
           <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800">Download calculation report (PDF)</a>
           <Link href={`/projects/${ctx.projectId}/designs/${ctx.designId}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Open the design</Link>
           {ctx.status === "approved" ? <Link href={`/field/${ctx.id}`} className="rounded-md border border-slate-300 px-3 py-2 hover:bg-slate-50">Field spec for the crew</Link> : null}
@@ -98,7 +109,23 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <div className="order-2 min-w-0 space-y-6 lg:order-1">
+        <div className="min-w-0 space-y-6">
+          <FootingPerPost posts={r.field.posts} diameterIn={r.footing.diameterIn} />
+
+          <section aria-labelledby="card-diff-h" className={`rounded-lg border p-4 ${offCardRows.length ? "border-orange-300 bg-orange-50" : "border-slate-200 bg-white"}`}>
+            <h2 id="card-diff-h" className="text-base font-semibold">
+              {!ctx.criteria ? "No criteria card" : offCardRows.length ? `Differs from the criteria card (${offCardRows.length})` : "Matches the criteria card"}
+            </h2>
+            {!ctx.criteria ? <p className="mt-1 text-sm text-slate-700">No criteria card is applied to this project: every site value below was entered by the designer.</p>
+              : offCardRows.length === 0 ? <p className="mt-1 text-sm text-slate-700">Every site value is the {ctx.criteria.jurisdiction} card&apos;s.</p> : (
+              <ul className="mt-2 space-y-1 text-sm">
+                {offCardRows.map((row) => (
+                  <li key={row.path} className="flex flex-wrap gap-x-2"><a href={`#input-${row.path}`} className="font-medium underline">{row.label}</a> <strong>{row.value}</strong> <span className="rounded bg-orange-100 px-1 text-orange-950">card says {row.cardValue}</span></li>
+                ))}
+              </ul>
+            )}
+          </section>
+
           <section aria-labelledby="diff-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
             {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
@@ -114,46 +141,59 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             ) : null}
           </section>
 
-          <PlainTable id="criteria-h" table={criteriaTable(ctx)} numericFrom={99} />
-
-          <section aria-labelledby="inputs-h" className="rounded-lg border border-slate-200 bg-white p-4">
-            <h2 id="inputs-h" className="text-base font-semibold">Every input</h2>
-            <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
-              {inputs.map(([path, value]) => (
-                <div key={path} id={`input-${path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${changes.some((c) => c.path === path) ? "bg-amber-50" : ""}`}>
-                  <dt className="text-slate-700">{fieldLabel(path)}</dt>
-                  <dd className="font-medium tabular-nums">{inputValueText(path, value)}{changes.some((c) => c.path === path) ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
-                  {path in offCard ? <dd className="w-full rounded bg-orange-100 px-2 py-1 text-xs font-medium text-orange-950">Differs from the criteria card: card says {inputValueText(path, offCard[path])}</dd> : null}
-                  {pinned.get(path)?.map((c, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {c.body}</dd>)}
-                </div>
-              ))}
-            </dl>
-          </section>
-
-          <section aria-labelledby="method-h" className="rounded-lg border border-slate-200 bg-white p-4">
-            <h2 id="method-h" className="text-base font-semibold">Method, editions and sections</h2>
-            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r).map((m) => <li key={m}>{m}</li>)}</ul>
-          </section>
-          <PlainTable id="wind-h" table={windTable(r)} />
+          <ChecksList id="checks-h" table={checksTable(r)} />
           <section aria-labelledby="gov-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="gov-h" className="text-base font-semibold">Governing loads</h2>
             <ul className="mt-2 space-y-1 text-sm">{governingLines(r).map((g) => <li key={g}>{g}</li>)}</ul>
           </section>
-          <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} />
-          <PlainTable id="checks-h" table={checksTable(r)} />
-          <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
-            <h2 id="conc-h" className="text-base font-semibold">Concrete and field dimensions</h2>
-            <ul className="mt-2 space-y-1 text-sm">
-              {concreteLines(r).map((c) => <li key={c}>{c}</li>)}
-              {r.field.posts.map((p) => <li key={p.id}>Post {p.id}: {fmt(p.heightAboveGradeIn)} in above grade + {fmt(p.embedmentIn)} in embedded = {fmt(p.postLengthIn)} in</li>)}
-              <li>Lowest-edge clearance {fmt(r.geometry.minClearanceIn)} in at {fmt(r.geometry.tiltDeg)}° tilt</li>
-            </ul>
+
+          <section aria-labelledby="inputs-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="inputs-h" className="text-base font-semibold">Every input</h2>
+            <p className="mt-1 text-xs text-slate-600">Grouped as in the editor. A group with an input off the card, changed or commented on is open.</p>
+            {groups.map((g) => {
+              const notice = groupNotice(g);
+              return (
+                <details key={g.title} open={Boolean(notice)} data-rows={g.rows.length} className="mt-3 border-t border-slate-100 pt-2">
+                  <summary className="cursor-pointer text-sm font-semibold">
+                    <h3 className="inline">{g.title}</h3> <span className="font-normal text-slate-600">({rowCount(g.rows.length, "input")}{notice ? `; ${notice}` : ""})</span>
+                  </summary>
+                  <dl className="mt-2 grid gap-x-6 text-sm sm:grid-cols-2">
+                    {g.rows.map((row) => (
+                      <div key={row.path} id={`input-${row.path}`} className={`flex flex-wrap justify-between gap-x-3 border-b border-slate-100 py-1 ${row.changed ? "bg-amber-50" : ""}`}>
+                        <dt className="text-slate-700">{row.label}</dt>
+                        <dd className="font-medium tabular-nums">{row.value}{row.changed ? <span className="ml-1 text-xs font-normal text-amber-800">(changed)</span> : null}</dd>
+                        {row.cardValue !== null ? <dd className="w-full rounded bg-orange-100 px-2 py-1 text-xs font-medium text-orange-950">Differs from the criteria card: card says {row.cardValue}</dd> : null}
+                        {row.comments.map((body, i) => <dd key={i} className="w-full rounded bg-sky-50 px-2 py-1 text-xs text-sky-950">Comment: {body}</dd>)}
+                      </div>
+                    ))}
+                  </dl>
+                </details>
+              );
+            })}
           </section>
+
           <section aria-labelledby="warn-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="warn-h" className="text-base font-semibold">Warnings ({r.warnings.length})</h2>
             {r.warnings.length === 0 ? <p className="mt-1 text-sm text-slate-600">None: no method limit is crossed.</p> : (
               <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {w.message}</li>)}</ul>
             )}
+          </section>
+          <PlainTable id="criteria-h" table={criteria} numericFrom={99} collapsed noun="criterion" plural="criteria" />
+          <PlainTable id="wind-h" table={windTable(r)} collapsed noun="wind case" />
+          <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} collapsed />
+          <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="conc-h" className="text-base font-semibold">Concrete and field dimensions</h2>
+            <ul className="mt-2 space-y-1 text-sm">
+              {concreteLines(r).map((c) => <li key={c}>{c}</li>)}
+              <li>Lowest-edge clearance {fmt(r.geometry.minClearanceIn)} in at {fmt(r.geometry.tiltDeg)}° tilt; post lengths under “Footing at each post”</li>
+            </ul>
+          </section>
+          <section aria-labelledby="method-h" className="rounded-lg border border-slate-200 bg-white p-4">
+            <h2 id="method-h" className="text-base font-semibold">Method, editions and sections</h2>
+            <details className="mt-1">
+              <summary className="cursor-pointer text-sm font-medium text-accent-800 hover:underline">Show the method ({rowCount(methodLines(r).length, "line")})</summary>
+              <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r).map((m) => <li key={m}>{m}</li>)}</ul>
+            </details>
           </section>
           <section aria-labelledby="files-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="files-h" className="text-base font-semibold">Uploads: soil report, photos ({files.total})</h2>
@@ -174,7 +214,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           <ReviewPreview input={ctx.input as DesignInput} result={r} />
         </div>
 
-        <aside className="order-1 min-w-0 space-y-4 lg:order-2">
+        <aside className="min-w-0 space-y-4">
           {isEngineer ? (
             <DecisionPanel open={canDecide} revisionId={ctx.id} failing={outcome.failing} inputs={inputs.map(([path]) => ({ path, label: fieldLabel(path) }))}
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}

@@ -2,6 +2,7 @@
 
 import { useKeptForm } from "@/components/ui/use-kept-form";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
+import { formatQuantity, unitLabel, type UnitSystem } from "@/components/format/quantity";
 import { recordAsBuiltAction } from "../actions";
 
 const GROUND = [
@@ -13,7 +14,7 @@ const GROUND = [
 ] as const;
 
 /** One hole as dug: measured diameter and depth, ground found, photos. */
-export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revisionId: string; postIds: string[]; diameterIn: number; depthIn: number }) {
+export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn, units = "imperial" }: { revisionId: string; postIds: string[]; diameterIn: number; depthIn: number; units?: UnitSystem }) {
   const { state, formProps } = useKeptForm(recordAsBuiltAction, { resetOnSuccess: true });
   const v = state.values ?? {};
   const err = (name: string) => state.fieldErrors?.[name];
@@ -22,6 +23,8 @@ export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revi
   return (
     <form {...formProps} className="space-y-3">
       <input type="hidden" name="revisionId" value={revisionId} />
+      {/* Measurements are typed in the reader's units; the action converts millimetres to inches. */}
+      <input type="hidden" name="units" value={units} />
       <div>
         <label htmlFor="postId" className="block text-sm font-medium">Hole at post</label>
         <select id="postId" name="postId" defaultValue={v.postId ?? postIds[0]} className={input} aria-invalid={err("postId") ? true : undefined}>
@@ -31,14 +34,14 @@ export function AsBuiltForm({ revisionId, postIds, diameterIn, depthIn }: { revi
       </div>
       <div className="grid grid-cols-2 gap-3">
         <div>
-          <label htmlFor="measuredDiameterIn" className="block text-sm font-medium">Measured diameter (in)</label>
-          <input id="measuredDiameterIn" name="measuredDiameterIn" inputMode="decimal" defaultValue={v.measuredDiameterIn ?? ""} placeholder={`spec ${diameterIn}`}
+          <label htmlFor="measuredDiameterIn" className="block text-sm font-medium">Measured diameter ({unitLabel("in", units)})</label>
+          <input id="measuredDiameterIn" name="measuredDiameterIn" inputMode="decimal" defaultValue={v.measuredDiameterIn ?? ""} placeholder={`spec ${formatQuantity(diameterIn, "in", units).replace(/ \S+$/, "")}`}
             aria-invalid={err("measuredDiameterIn") ? true : undefined} aria-describedby={err("measuredDiameterIn") ? "measuredDiameterIn-error" : undefined} className={input} />
           {errorLine("measuredDiameterIn")}
         </div>
         <div>
-          <label htmlFor="measuredDepthIn" className="block text-sm font-medium">Measured depth (in)</label>
-          <input id="measuredDepthIn" name="measuredDepthIn" inputMode="decimal" defaultValue={v.measuredDepthIn ?? ""} placeholder={`spec ${depthIn}`}
+          <label htmlFor="measuredDepthIn" className="block text-sm font-medium">Measured depth ({unitLabel("in", units)})</label>
+          <input id="measuredDepthIn" name="measuredDepthIn" inputMode="decimal" defaultValue={v.measuredDepthIn ?? ""} placeholder={`spec ${formatQuantity(depthIn, "in", units).replace(/ \S+$/, "")}`}
             aria-invalid={err("measuredDepthIn") ? true : undefined} aria-describedby={err("measuredDepthIn") ? "measuredDepthIn-error" : undefined} className={input} />
           {errorLine("measuredDepthIn")}
         </div>

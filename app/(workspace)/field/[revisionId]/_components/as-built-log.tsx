@@ -1,22 +1,24 @@
 import { GROUND_FOUND_LABELS } from "@/app/_lib/review/ground-labels";
 import { dateTimeInWords } from "@/components/ui/dates";
+import { formatQuantity, type UnitSystem } from "@/components/format/quantity";
 import type { AsBuiltEntry } from "@/db/queries/as-built";
 import type { HoldRecord } from "@/db/queries/holds";
 
 /** What the crew recorded, hole by hole, with what differs from the spec said in words. */
-export function AsBuiltLog({ entries, holds = [], timeZone, depthIn, diameterIn }: { entries: AsBuiltEntry[]; holds?: HoldRecord[]; timeZone?: string; depthIn: number; diameterIn: number }) {
+export function AsBuiltLog({ entries, holds = [], timeZone, depthIn, diameterIn, units = "imperial" }: { entries: AsBuiltEntry[]; holds?: HoldRecord[]; timeZone?: string; depthIn: number; diameterIn: number; units?: UnitSystem }) {
+  const len = (inches: number) => formatQuantity(inches, "in", units, { decimals: 2 });
   if (entries.length === 0) return <p className="mt-3 text-sm text-slate-600">No hole recorded yet.</p>;
   return (
     <ul className="mt-4 space-y-3">
       {entries.map((e) => {
         const problems = [
-          e.measuredDepthIn < depthIn ? `shallower than ${depthIn} in` : null,
-          e.measuredDiameterIn < diameterIn ? `narrower than ${diameterIn} in` : null,
+          e.measuredDepthIn < depthIn ? `shallower than ${len(depthIn)}` : null,
+          e.measuredDiameterIn < diameterIn ? `narrower than ${len(diameterIn)}` : null,
           e.groundFound !== "as_expected" ? GROUND_FOUND_LABELS[e.groundFound].toLowerCase() : null,
         ].filter(Boolean);
         return (
           <li key={e.id} className={`rounded-md border p-3 text-sm ${problems.length ? "border-red-400 bg-red-50" : "border-slate-200"}`}>
-            <p className="font-semibold">Post {e.postId}: {e.measuredDiameterIn} in × {e.measuredDepthIn} in deep, ground {GROUND_FOUND_LABELS[e.groundFound].toLowerCase()}</p>
+            <p className="font-semibold">Post {e.postId}: {len(e.measuredDiameterIn)} × {len(e.measuredDepthIn)} deep, ground {GROUND_FOUND_LABELS[e.groundFound].toLowerCase()}</p>
             <p>{problems.length ? <strong className="text-red-800">Does not match the spec: {problems.join(", ")}</strong> : "Matches the spec"}</p>
             {e.notes ? <p className="text-slate-700">{e.notes}</p> : null}
             <p className="text-xs text-slate-700">{e.recordedByName}, {dateTimeInWords(e.recordedAt, timeZone)}</p>

@@ -1,3 +1,4 @@
+import { fieldLabel } from "@/components/design/fields";
 import { ratioText } from "@/components/review/check-outcome";
 import { calendarDateInWords, dateTimeInWords } from "@/components/ui/dates";
 import type { Standing } from "@/app/_lib/review/standing";
@@ -36,7 +37,7 @@ export function ReviewHistory({ standing, revisionId, timeZone }: { standing: St
                 <ul className="mt-1 space-y-1">
                   {rv.comments.map((c) => (
                     <li key={c.id} className="rounded bg-slate-50 p-2">
-                      {c.fieldPath ? <a href={`#input-${c.fieldPath}`} className="mr-1 rounded bg-sky-100 px-1 text-xs text-sky-900 underline">{c.fieldPath}</a> : <span className="mr-1 text-xs text-slate-500">general</span>}
+                      {c.fieldPath ? <a href={`#input-${c.fieldPath}`} className="mr-1 rounded bg-sky-100 px-1 text-xs text-sky-900 underline">{fieldLabel(c.fieldPath)}</a> : <span className="mr-1 text-xs text-slate-500">general</span>}
                       {c.body}
                     </li>
                   ))}

@@ -1,6 +1,6 @@
 import { apiRoute } from "@/app/_lib/api";
 import { requireUser } from "@/app/_lib/auth";
-import { answerEngagement } from "@/app/_lib/engagements/service";
+import { answerEngagement } from "@/app/_lib/services/engagements";
 
 export const dynamic = "force-dynamic";
 type Context = { params: Promise<{ engagementId: string }> };

@@ -1,6 +1,6 @@
 import { apiRoute, readJson } from "@/app/_lib/api";
 import { requireUser } from "@/app/_lib/auth";
-import { engageEngineer, listEngagements } from "@/app/_lib/engagements/service";
+import { engageEngineer, listEngagements } from "@/app/_lib/services/engagements";
 
 export const dynamic = "force-dynamic";
 type Context = { params: Promise<{ projectId: string }> };

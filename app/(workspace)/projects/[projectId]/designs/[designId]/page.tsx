@@ -9,8 +9,10 @@ import { DesignReviewBar } from "@/components/review/design-review-bar";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
+import { chosenUnits } from "@/app/_lib/unit-preference";
 import { RevisionsTable } from "./_components/revisions-table";
 import { shortDateTime } from "@/components/ui/dates";
+import { editorPinnedComments } from "@/app/_lib/services/review-comments";
 
 export const metadata: Metadata = { title: "Design" };
 type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -45,7 +47,11 @@ export default async function DesignPage({ params, searchParams }: Props) {
   const shown = viewing ?? latest;
   const isOld = shown.id !== latest.id;
   const start = !isOld && from && canWrite ? from : shown;
-  const revisions = await listRevisions(design.id, listQueryLenient(search, "r_"));
+  const [revisions, pinnedComments] = await Promise.all([
+    listRevisions(design.id, listQueryLenient(search, "r_")),
+    // Beside the fields: the comments of the latest decision, resolved where the revision shown changed the field.
+    editorPinnedComments(user, design.id, shown),
+  ]);
 
   return (
     <>
@@ -85,6 +91,8 @@ export default async function DesignPage({ params, searchParams }: Props) {
           baseNumber={latest.number}
           readOnly={!canWrite || isOld}
           card={card ? { label: `${card.jurisdiction}, ${card.state}`, values: card.values } : null}
+          pinnedComments={pinnedComments}
+          units={await chosenUnits()}
         />
       </div>
 

@@ -6,7 +6,9 @@ import { useRouter } from "next/navigation";
 import { memo, useDeferredValue, useEffect, useMemo, useState } from "react";
 import { FormProvider, useForm, useWatch, type FieldValues } from "react-hook-form";
 import { applyCriteriaCard } from "@/app/_lib/design-defaults";
-import { formatQuantity, type UnitSystem } from "@/components/design/units";
+import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
+import { parseUnitSystem, UNITS_STORAGE_KEY } from "@/components/format/unit-preference";
+import { UnitsSwitch } from "@/components/format/units-switch";
 import { DesignPreviewLazy } from "@/components/preview";
 import { Caution } from "@/components/ui/caution";
 import type { CriteriaCardValues } from "@/db/queries/criteria-cards";
@@ -18,6 +20,8 @@ import { FootingHeadline, ResultsPanel } from "./results-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useLiveResult, type LiveStatus } from "./use-live-result";
 import { enterMovesToNextField, useEditorDraft } from "./use-editor-draft";
+import { PinnedCommentsPanel, PinnedCommentsProvider, pinnedByPath } from "./pinned-comments";
+import type { PinnedCommentView } from "@/components/design/pinned-comments";
 
 /**
  * The designer's editor: inputs on the left, live results on the right (stacked on a phone), the
@@ -32,6 +36,10 @@ export interface EditorProps {
   baseNumber: number;
   readOnly: boolean;
   card: { label: string; values: CriteriaCardValues } | null;
+  /** The engineer's comments pinned to inputs (latest decision), shown beside their fields. */
+  pinnedComments?: PinnedCommentView[];
+  /** The reader's unit system from the preference cookie (absent: from this browser's storage). */
+  units?: UnitSystem;
 }
 
 // Each field follows its own value (useController), so the groups need not re-render at every keystroke.
@@ -40,7 +48,6 @@ const ArrayInputs = memo(ArrayGroup);
 const PostsInputs = memo(PostsGroup);
 
 type Conflict = { message: string; latestRevisionId: string | null; latestNumber: number | null };
-const UNITS_KEY = "pierwise-units";
 
 const STATUS_TEXT: Record<LiveStatus, string> = {
   saved: "Showing the saved revision.",
@@ -50,15 +57,14 @@ const STATUS_TEXT: Record<LiveStatus, string> = {
 
 export function DesignEditor(props: EditorProps) {
   const router = useRouter();
-  const [units, setUnits] = useState<UnitSystem>("imperial");
+  // The server renders in the cookie's units (no flash); a browser that only has the older
+  // localStorage choice still gets it after the first paint.
+  const [units, setUnits] = useState<UnitSystem>(props.units ?? "imperial");
   useEffect(() => {
-    const stored = window.localStorage.getItem(UNITS_KEY);
-    if (stored === "metric" || stored === "imperial") setUnits(stored);
-  }, []);
-  const chooseUnits = (u: UnitSystem) => {
-    setUnits(u);
-    window.localStorage.setItem(UNITS_KEY, u);
-  };
+    if (props.units) return;
+    const stored = window.localStorage.getItem(UNITS_STORAGE_KEY);
+    if (stored) setUnits(parseUnitSystem(stored));
+  }, [props.units]);
 
   const form = useForm<DesignInputDraft, unknown, DesignInput>({ resolver: zodResolver(designInputSchema), defaultValues: props.initialInput, mode: "onChange" });
   const values = useWatch({ control: form.control });
@@ -124,6 +130,8 @@ export function DesignEditor(props: EditorProps) {
     },
   } : null, [props.card, form]);
 
+  const pinned = useMemo(() => pinnedByPath(props.pinnedComments ?? []), [props.pinnedComments]);
+
   // A read-only revision shows what was saved (the record) even where today's engine differs.
   const result = props.readOnly && live.savedDiffers ? saved.result : live.result;
   // The 3D preview follows once the numbers are painted, so a keystroke never waits for a redraw.
@@ -138,22 +146,7 @@ export function DesignEditor(props: EditorProps) {
       <form onSubmit={onSubmit} onKeyDown={enterMovesToNextField} noValidate className="grid grid-cols-1 gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
         <div className="min-w-0 space-y-4">
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">
-              {(["imperial", "metric"] as const).map((u) => (
-                <button key={u} type="button" role="radio" aria-checked={units === u} tabIndex={units === u ? 0 : -1} onClick={() => chooseUnits(u)}
-                  // Radio group (WAI-ARIA APG): one tab stop; the arrow keys move to and choose the other unit system.
-                  onKeyDown={(e) => {
-                    if (!["ArrowLeft", "ArrowRight", "ArrowUp", "ArrowDown"].includes(e.key)) return;
-                    e.preventDefault();
-                    const next = u === "imperial" ? "metric" : "imperial";
-                    chooseUnits(next);
-                    (e.currentTarget.parentElement?.querySelector(`[data-units="${next}"]`) as HTMLElement | null)?.focus();
-                  }}
-                  data-units={u} className={`rounded px-3 py-1 ${units === u ? "bg-accent-700 text-white" : "text-slate-700 hover:bg-slate-100"}`}>
-                  {u === "imperial" ? "US units (ft, in, lb)" : "Metric (m, mm, kN)"}
-                </button>
-              ))}
-            </div>
+            <UnitsSwitch units={units} onChange={setUnits} />
             {props.readOnly ? <p className="text-sm text-slate-600">Read only.</p> : null}
           </div>
 
@@ -164,11 +157,14 @@ export function DesignEditor(props: EditorProps) {
               <button type="button" onClick={draft.dismiss} className="rounded-md px-2 py-1 underline">Keep editing</button>
             </div>
           ) : null}
-          <fieldset disabled={props.readOnly} className="space-y-4">
-            <SiteInputs units={units} card={cardOffer} />
-            <ArrayInputs units={units} />
-            <PostsInputs units={units} />
-          </fieldset>
+          <PinnedCommentsPanel comments={props.pinnedComments ?? []} />
+          <PinnedCommentsProvider comments={pinned}>
+            <fieldset disabled={props.readOnly} className="space-y-4">
+              <SiteInputs units={units} card={cardOffer} />
+              <ArrayInputs units={units} />
+              <PostsInputs units={units} />
+            </fieldset>
+          </PinnedCommentsProvider>
 
           {!props.readOnly ? (
             <div className="rounded-lg border border-slate-200 bg-white p-4">
@@ -177,7 +173,7 @@ export function DesignEditor(props: EditorProps) {
               <div className="mt-3 flex flex-wrap items-end gap-3">
                 <div className="min-w-56 flex-1 space-y-1">
                   <label htmlFor="revision-note" className="block text-sm font-medium text-slate-800">What changed</label>
-                  <input id="revision-note" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder="e.g. county confirmed 125 mph" className="block w-full rounded-md border border-slate-300 px-3 py-2 text-sm" />
+                  <input id="revision-note" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder={units === "metric" ? "e.g. county confirmed 56 m/s" : "e.g. county confirmed 125 mph"} className="block w-full rounded-md border border-slate-300 px-3 py-2 text-sm" />
                 </div>
                 <button type="submit" disabled={saving} className="rounded-md bg-accent-700 px-4 py-2 text-sm font-medium text-white hover:bg-accent-800 disabled:opacity-60">{saving ? "Saving…" : "Save revision"}</button>
               </div>
@@ -227,7 +223,7 @@ export function DesignEditor(props: EditorProps) {
         {/* Phone: the caution and the footing stay in view at the bottom of the screen. */}
         <div className="fixed inset-x-0 bottom-0 z-20 border-t border-amber-300 bg-amber-50/95 px-3 py-2 text-xs text-amber-950 shadow-lg backdrop-blur lg:hidden">
           <p className="font-semibold text-slate-900">
-            {formatQuantity(result.footing.diameterIn, "in", units, { decimals: 0 })} dia × {formatQuantity(result.footing.depthFt, "ft", units)} · {result.footing.pass ? "passes" : "FAILS a check"}
+            {formatFootingSize(result.footing.diameterIn, result.footing.depthIn, units)} · {result.footing.pass ? "passes" : "FAILS a check"}
             {stale ? " · results paused" : ""}
           </p>
           <p><strong>Caution:</strong> preliminary sizing only. The code, the authority having jurisdiction and a licensed engineer govern.{" "}<Link href="#res-checks" className="underline">Details</Link></p>

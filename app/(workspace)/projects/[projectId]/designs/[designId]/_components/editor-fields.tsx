@@ -3,7 +3,9 @@
 import { useState } from "react";
 import { useController } from "react-hook-form";
 import { FIELD_META } from "@/components/design/fields";
-import { fromDisplay, roundFor, toDisplay, unitLabel, type UnitKind, type UnitSystem } from "@/components/design/units";
+import { rangeMessageIn, sayIn } from "@/components/format/quantity-text";
+import { fromDisplay, roundFor, toDisplay, unitLabel, type UnitKind, type UnitSystem } from "@/components/format/quantity";
+import { PinnedNotes } from "./pinned-comments";
 
 /**
  * Editor inputs bound to react-hook-form by the schema's dotted path. Each shows its label, its
@@ -17,10 +19,10 @@ function idFor(name: string) {
   return `in-${name.replace(/\./g, "-")}`;
 }
 
-function Shell({ name, label, unit, error, children, help }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string }) {
+function Shell({ name, label, unit, error, children, help, units, value }: { name: string; label?: string; unit?: string; error?: string; children: React.ReactNode; help?: string; units: UnitSystem; value: unknown }) {
   const meta = FIELD_META[name];
   const id = idFor(name);
-  const helpText = help ?? meta?.help;
+  const helpText = help ?? helpIn(name, units);
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-medium text-slate-800">{label ?? meta?.label ?? name}</label>
@@ -30,8 +32,15 @@ function Shell({ name, label, unit, error, children, help }: { name: string; lab
       </div>
       {error ? <p id={`${id}-error`} className="text-sm font-medium text-red-700">{error}</p> : null}
       {helpText ? <p id={`${id}-help`} className="text-xs text-slate-500">{helpText}</p> : null}
+      <PinnedNotes name={name} value={value} />
     </div>
   );
+}
+
+/** A field's help in the reader's units (help with quantities is structured in the label table). */
+function helpIn(name: string, units: UnitSystem): string | undefined {
+  const meta = FIELD_META[name];
+  return meta?.helpText ? sayIn(meta.helpText, units) : meta?.help;
 }
 
 function described(name: string, error?: string) {
@@ -44,11 +53,13 @@ export function NumberField({ name, units, optional = false, label, help }: { na
   const kind: UnitKind = FIELD_META[name]?.unit ?? "none";
   const [text, setText] = useState<string | null>(null);
   const value = field.value as unknown;
-  const shown = typeof value === "number" && Number.isFinite(value) ? String(units === "imperial" ? roundFor(value, kind, units, 4) : roundFor(toDisplay(value, kind, units), kind, units, 1)) : "";
-  const error = fieldState.error?.message;
+  // Metric shows the unit's own rounding (1,067 mm, 62.6 m/s), never conversion noise; the
+  // stored value changes only when the person types.
+  const shown = typeof value === "number" && Number.isFinite(value) ? String(units === "imperial" ? roundFor(value, kind, units, 4) : roundFor(toDisplay(value, kind, units), kind, units)) : "";
+  const error = rangeMessageIn(fieldState.error?.message, kind, units);
   const unit = unitLabel(kind, units);
   return (
-    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error}>
+    <Shell name={name} label={label} help={help} unit={unit || undefined} error={error} value={value} units={units}>
       <input
         id={idFor(name)}
         name={name}
@@ -85,10 +96,10 @@ export function ListField({ name, units, optional = false }: { name: string; uni
   const kind: UnitKind = FIELD_META[name]?.unit ?? "none";
   const [text, setText] = useState<string | null>(null);
   const list = Array.isArray(field.value) ? (field.value as number[]) : [];
-  const shown = list.map((v) => String(roundFor(toDisplay(v, kind, units), kind, units, 1))).join(", ");
-  const error = fieldState.error?.message ?? firstNestedError(fieldState.error);
+  const shown = list.map((v) => String(units === "imperial" ? roundFor(v, kind, units, 4) : roundFor(toDisplay(v, kind, units), kind, units))).join(", ");
+  const error = rangeMessageIn(fieldState.error?.message ?? firstNestedError(fieldState.error), kind, units);
   return (
-    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error}>
+    <Shell name={name} unit={unitLabel(kind, units) || undefined} error={error} value={field.value} units={units}>
       <input
         id={idFor(name)}
         name={name}
@@ -126,7 +137,7 @@ export function SelectField({ name, options, numeric = false, onPick }: { name: 
   const { field, fieldState } = useController({ name });
   const error = fieldState.error?.message;
   return (
-    <Shell name={name} error={error}>
+    <Shell name={name} error={error} value={field.value} units="imperial">
       <select
         id={idFor(name)}
         name={name}
@@ -144,7 +155,7 @@ export function SelectField({ name, options, numeric = false, onPick }: { name: 
   );
 }
 
-export function CheckField({ name }: { name: string }) {
+export function CheckField({ name, units = "imperial" }: { name: string; units?: UnitSystem }) {
   const { field, fieldState } = useController({ name });
   const meta = FIELD_META[name];
   const id = idFor(name);
@@ -153,8 +164,9 @@ export function CheckField({ name }: { name: string }) {
       <input id={id} type="checkbox" ref={field.ref} checked={Boolean(field.value)} onChange={(e) => field.onChange(e.target.checked)} onBlur={field.onBlur} aria-describedby={meta?.help ? `${id}-help` : undefined} className="mt-1 h-4 w-4 rounded border-slate-300 accent-accent-700" />
       <div>
         <label htmlFor={id} className="text-sm font-medium text-slate-800">{meta?.label ?? name}</label>
-        {meta?.help ? <p id={`${id}-help`} className="text-xs text-slate-500">{meta.help}</p> : null}
+        {meta?.help ? <p id={`${id}-help`} className="text-xs text-slate-500">{helpIn(name, units)}</p> : null}
         {fieldState.error ? <p className="text-sm font-medium text-red-700">{fieldState.error.message}</p> : null}
+        <PinnedNotes name={name} value={field.value} />
       </div>
     </div>
   );

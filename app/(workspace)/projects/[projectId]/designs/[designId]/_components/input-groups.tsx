@@ -1,7 +1,7 @@
 "use client";
 
 import { useFormContext, useWatch } from "react-hook-form";
-import type { UnitSystem } from "@/components/design/units";
+import { formatPipeSize, type UnitSystem } from "@/components/format/quantity";
 import { PIPE_SIZES } from "@/engine/footing/pipe";
 import { CheckField, ListField, NumberField, SelectField } from "./editor-fields";
 
@@ -117,7 +117,7 @@ export function PostsGroup({ units }: { units: UnitSystem }) {
           <NumberField name="posts.sideFrictionPsf" units={units} optional />
           <ListField name="posts.sweepDiametersIn" units={units} />
           {auto ? <NumberField name="posts.maxAutoDepthIn" units={units} /> : null}
-          <CheckField name="posts.isolatedPoleIncrease" />
+          <CheckField name="posts.isolatedPoleIncrease" units={units} />
           <CheckField name="posts.subtractPostDisplacement" />
           <SelectField name="posts.bearingPressure" options={[["gross", "Gross pressure (default)"], ["net", "Net pressure: soil removed credited (engineer's option)"]]} />
           <NumberField name="posts.soilUnitWeightPcf" units={units} />
@@ -129,7 +129,7 @@ export function PostsGroup({ units }: { units: UnitSystem }) {
     >
       <NumberField name="posts.count" units={units} />
       <NumberField name="posts.spacingFt" units={units} optional />
-      <SelectField name="posts.pipeSize" options={PIPE_SIZES.map((s) => [s, `${s.replace("-", " ")} in standard pipe`] as const)} />
+      <SelectField name="posts.pipeSize" options={PIPE_SIZES.map((s) => [s, formatPipeSize(s, units)] as const)} />
       <div className="space-y-2">
         {auto ? <ListField name="posts.autoDiametersIn" units={units} /> : <NumberField name="posts.holeDiameterIn" units={units} />}
         <label className="flex items-center gap-2 text-sm">

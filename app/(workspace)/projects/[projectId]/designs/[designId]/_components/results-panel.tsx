@@ -1,13 +1,14 @@
 "use client";
 
 import { memo } from "react";
-import { formatQuantity, type UnitKind, type UnitSystem } from "@/components/design/units";
+import { bagSize, formatBags, formatFootingSize, formatPipeSize, formatQuantity, type UnitKind, type UnitSystem } from "@/components/format/quantity";
+import { checkTitleIn, storedIn, warningIn } from "@/components/format/quantity-text";
 import type { DesignResult } from "@/engine";
 import { UtilisationBar } from "./utilisation-bar";
 import { ScrollRegion } from "@/components/ui/scroll-region";
 
 /** Everything the engine answers, in the order a designer reads it: the footing, its checks, concrete, loads, options, warnings. */
-const CHECK_UNITS: Record<string, UnitKind> = { lb: "lb", "kip-ft": "kipFt", in: "in", psf: "psf", ft: "ft" };
+const CHECK_UNITS: Record<string, UnitKind> = { lb: "lb", "lb-ft": "lbFt", "kip-ft": "kipFt", in: "in", psf: "psf", ft: "ft" };
 const CHECK_NAMES: Record<string, string> = { lateral: "lateral embedment", uplift: "uplift", frost: "frost and minimum depth" };
 
 function Section({ title, children, id }: { title: string; children: React.ReactNode; id: string }) {
@@ -31,10 +32,10 @@ export function FootingHeadline({ result, units }: { result: DesignResult; units
     <div className={`rounded-lg border p-3 ${f.pass ? "border-accent-600 bg-accent-50" : "border-red-300 bg-red-50"}`}>
       <p className="text-xs font-medium tracking-wide text-slate-600 uppercase">Footing, each of {result.geometry.posts.length} holes</p>
       <p className="text-xl font-semibold text-slate-900" data-testid="footing-spec">
-        {formatQuantity(f.diameterIn, "in", units, { decimals: units === "metric" ? 0 : 0 })} dia × {formatQuantity(f.depthFt, "ft", units)} deep
+        {formatFootingSize(f.diameterIn, f.depthIn, units)}
       </p>
       <p className={`text-sm ${f.pass ? "text-accent-900" : "font-semibold text-red-800"}`}>
-        {f.pass ? "Passes every check." : `Fails: ${failing.map((c) => c.title.toLowerCase()).join("; ")}.`}{" "}
+        {f.pass ? "Passes every check." : `Fails: ${failing.map((c) => checkTitleIn(c, units).toLowerCase()).join("; ")}.`}{" "}
         <span className="font-normal text-slate-700">Depth set by {CHECK_NAMES[f.controllingCheck] ?? f.controllingCheck}{f.diameterMode === "auto" ? "; hole size chosen for you" : ""}.</span>
       </p>
     </div>
@@ -67,7 +68,7 @@ function FootingChecks({ result, units }: { result: DesignResult; units: UnitSys
           return (
             <li key={c.id} className="py-1.5">
               <div className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
-                <span className="text-sm text-slate-800">{c.title}</span>
+                <span className="text-sm text-slate-800">{checkTitleIn(c, units)}</span>
                 <UtilisationBar ratio={c.ratio} />
               </div>
               <p className="text-xs text-slate-500">{q(c.demand, k)} needed of {q(c.capacity, k)} available{c.governing ? ` · post ${c.governing.postId}, ${c.governing.combination}` : ""}</p>
@@ -75,7 +76,7 @@ function FootingChecks({ result, units }: { result: DesignResult; units: UnitSys
           );
         })}
       </ul>
-      {f.suggestedPipeSize && f.suggestedPipeSize !== result.input.posts.pipeSize ? <p className="mt-2 text-xs text-slate-700">Smallest standard pipe that carries the bending: {f.suggestedPipeSize} in.</p> : null}
+      {f.suggestedPipeSize && f.suggestedPipeSize !== result.input.posts.pipeSize ? <p className="mt-2 text-xs text-slate-700">Smallest standard pipe that carries the bending: {formatPipeSize(f.suggestedPipeSize, units)}.</p> : null}
     </Section>
   );
 }
@@ -87,13 +88,12 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
   const q = (v: number | null | undefined, k: UnitKind, d?: number) => formatQuantity(v, k, units, d === undefined ? {} : { decimals: d });
   return (
     <>
-
       <Section title="Concrete order" id="res-concrete">
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm">
-          <dt className="text-slate-600">Per hole</dt><dd className="tabular-nums">{q(result.concrete.perHole.volumeFt3, "ft3")} · {result.concrete.perHole.bags80Lb} × 80-lb bags</dd>
+          <dt className="text-slate-600">Per hole</dt><dd className="tabular-nums">{q(result.concrete.perHole.volumeFt3, "ft3")} · {formatBags(result.concrete.perHole.bags80Lb, 80, units)}</dd>
           <dt className="text-slate-600">{result.concrete.job.holes} holes + {result.concrete.job.wasteAllowancePct}% waste</dt><dd className="tabular-nums">{q(result.concrete.job.withWasteYd3, "yd3")}</dd>
           <dt className="font-medium text-slate-800">Order ready-mix</dt><dd className="font-semibold tabular-nums">{q(result.concrete.job.orderYd3, "yd3")}</dd>
-          <dt className="text-slate-600">or bagged premix</dt><dd className="tabular-nums">{result.concrete.job.bags80Lb} × 80-lb · {result.concrete.job.bags60Lb} × 60-lb</dd>
+          <dt className="text-slate-600">or bagged premix</dt><dd className="tabular-nums">{formatBags(result.concrete.job.bags80Lb, 80, units)} · {formatBags(result.concrete.job.bags60Lb, 60, units)}</dd>
         </dl>
       </Section>
 
@@ -123,7 +123,7 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
       <Section title="Loads on each post (ASD, worst combination)" id="res-posts">
         <ScrollRegion label="Loads on each post table">
           <table className="min-w-full text-sm">
-            <thead><tr><th className={th}>Post</th><th className={th}>Tilt</th><th className={th}>Beam reaction factor</th><th className={th}>Shear</th><th className={th}>Moment at grade</th><th className={th}>Uplift</th><th className={th}>Down</th></tr></thead>
+            <thead><tr><th className={th}>Post</th><th className={th}>Tilt</th><th className={th}>Beam reaction factor</th><th className={th}>Shear</th><th className={th}>Moment at grade</th><th className={th}>Wind uplift (0.6W, before dead load)</th><th className={th}>Down</th></tr></thead>
             <tbody>
               {result.postLoads.map((p) => {
                 const max = (get: (r: (typeof p.combinations)[number]) => number) => Math.max(...p.combinations.map((r) => Math.abs(get(r))));
@@ -152,9 +152,9 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
               {result.options.diameterSweep.map((r) => (
                 <tr key={r.diameterIn} className={r.diameterIn === f.diameterIn ? "bg-accent-50" : ""}>
                   <td className={td}>{q(r.diameterIn, "in", 0)}{r.diameterIn === f.diameterIn ? " (chosen)" : ""}</td>
-                  <td className={td}>{q(r.depthIn / 12, "ft")}</td>
-                  <td className={td}>{r.controllingCheck}</td>
-                  <td className={td}>{q(r.volumeFt3PerHole, "ft3")} · {r.bags80LbPerHole} bags</td>
+                  <td className={td}>{q(r.depthIn, "in")}</td>
+                  <td className={td}>{CHECK_NAMES[r.controllingCheck] ?? r.controllingCheck}</td>
+                  <td className={td}>{q(r.volumeFt3PerHole, "ft3")} · {r.bags80LbPerHole} × {bagSize(80, units)}</td>
                   <td className={td}>{q(r.jobOrderYd3, "yd3")}</td>
                   <td className={`${td} ${r.allChecksPass ? "" : "font-semibold text-red-700"}`}>{r.allChecksPass ? "pass" : !r.fitsPost ? "hole too small" : !r.bearingPass ? "bearing fails" : "fails"}</td>
                 </tr>
@@ -172,8 +172,8 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
               {result.options.tiltEnvelope.rows.map((r) => (
                 <tr key={r.tiltDeg} className={r.tiltDeg === result.options.tiltEnvelope!.governingTiltDeg ? "bg-amber-50" : ""}>
                   <td className={td}>{r.tiltDeg}°{r.tiltDeg === result.options.tiltEnvelope!.governingTiltDeg ? " (governs)" : ""}</td>
-                  <td className={td}>{q(r.requiredDepthIn / 12, "ft")}</td>
-                  <td className={td}>{r.controllingCheck}</td>
+                  <td className={td}>{q(r.requiredDepthIn, "in")}</td>
+                  <td className={td}>{CHECK_NAMES[r.controllingCheck] ?? r.controllingCheck}</td>
                   <td className={td}>{q(r.maxMomentAtGradeLbFt, "lbFt")}</td>
                 </tr>
               ))}
@@ -187,7 +187,7 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
           <ul className="space-y-1 text-sm">
             {result.warnings.map((w) => (
               <li key={w.code + w.message} className={w.severity === "warning" ? "text-amber-900" : "text-slate-700"}>
-                <span className="font-semibold">{w.severity === "warning" ? "Warning" : "Note"}:</span> {w.message}
+                <span className="font-semibold">{w.severity === "warning" ? "Warning" : "Note"}:</span> {warningIn(w, units)}
               </li>
             ))}
           </ul>
@@ -197,7 +197,7 @@ const ResultDetails = memo(function ResultDetails({ result, units }: { result: D
       <details className="rounded-lg border border-slate-200 bg-white p-3 text-xs text-slate-600">
         <summary className="cursor-pointer font-medium text-slate-800">Method and references</summary>
         <p className="mt-2">{result.methodNote}</p>
-        <ul className="mt-1 list-disc pl-4">{result.references.sections.map((s) => <li key={s}>{s}</li>)}</ul>
+        <ul className="mt-1 list-disc pl-4">{result.references.sections.map((s) => <li key={s}>{storedIn(s, units)}</li>)}</ul>
         <p className="mt-1">Engine {result.engineVersion}</p>
       </details>
     </>

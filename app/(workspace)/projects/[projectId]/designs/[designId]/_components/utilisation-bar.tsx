@@ -1,6 +1,8 @@
-/** Utilisation as a number and a bar; over 1.0 says "fails" in words (colour only supports it). */
+import { formatRatio, ratioFails, RATIO_OVER_WORDS } from "@/components/format/ratio";
+
+/** Utilisation as a number and a bar; over 1.00 says "fails" in words (colour only supports it). */
 export function UtilisationBar({ ratio }: { ratio: number }) {
-  const fails = !(ratio <= 1 + 1e-9);
+  const fails = ratioFails(ratio);
   const near = !fails && ratio > 0.9;
   const widthPct = Math.min(100, (Math.min(ratio, 1.5) / 1.5) * 100);
   const tone = fails ? "bg-red-600" : near ? "bg-amber-500" : "bg-accent-600";
@@ -12,7 +14,7 @@ export function UtilisationBar({ ratio }: { ratio: number }) {
         <div className="absolute inset-y-0 left-2/3 w-px bg-slate-700" />
       </div>
       <span className={`tabular-nums text-sm ${fails ? "font-semibold text-red-700" : "text-slate-800"}`}>
-        {Number.isFinite(ratio) ? ratio.toFixed(2) : "∞"} {fails ? "fails" : near ? "close" : "OK"}
+        {formatRatio(ratio)} {fails ? RATIO_OVER_WORDS : near ? "close" : "OK"}
       </span>
     </div>
   );

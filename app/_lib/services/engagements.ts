@@ -1,22 +1,31 @@
-import { assertRole, hasRole, type CurrentUser } from "@/app/_lib/auth";
-import { AccessError, ConflictError, ValidationError } from "@/app/_lib/errors";
-import { projectFor } from "@/app/_lib/designs";
-import { env } from "@/app/_lib/env";
-import { sendMail } from "@/app/_lib/mail";
-import { engagementSchema, type EngagementInput } from "@/app/_lib/schemas/engagement";
-import { newToken } from "@/app/_lib/tokens";
+import "server-only";
+import { assertRole, hasRole, type CurrentUser } from "../auth";
+import { AccessError, ConflictError, ValidationError } from "../errors";
+import { projectFor } from "../designs";
+import { env } from "../env";
+import { deliverSoon, enqueueMail } from "../outbox";
+import { hashPassword } from "../password";
+import { requestIp } from "../request-ip";
+import { engagementSchema, engineerSignUpSchema, type EngagementInput } from "../schemas/engagement";
+import { startSession } from "../start-session";
+import { hashToken, newToken } from "../tokens";
+import type { Body } from "./input";
+import type { Knex } from "knex";
 import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import {
-  createEngagement, EngagementExistsError, engagementsOfPerson, getEngagement, projectEngagements, setEngagementStatus, type Engagement,
+  createEngagement, EngagementExistsError, engagementsOfPerson, findEngagementByToken, getEngagement, projectEngagements, setEngagementStatus, type Engagement,
 } from "@/db/queries/engagements";
-import { listLicences } from "@/db/queries/licences";
+import { listLicences, saveLicence } from "@/db/queries/licences";
+import { EmailInUseError, createOrganisationWithAdmin } from "@/db/queries/organisations";
+import { findUserByEmail } from "@/db/queries/users";
 import { userEmailAndName } from "@/db/queries/review-people";
 
 /**
  * Engagements of outside reviewing engineers, one function per use case; the route handlers and the
  * server actions are thin doors to these. Contractor side: engage, list, revoke (members of the
  * project's organisation). Engineer side: list own, accept, decline (only the invited person).
+ * Each change, its audit event and its e-mail commit together; the outbox sends the mail after commit.
  */
 
 export const ENGAGEMENT_STATUS_LABELS = { invited: "Invited", accepted: "Accepted", declined: "Declined", revoked: "Revoked" } as const;
@@ -48,25 +57,33 @@ export async function engageEngineer(user: CurrentUser, projectId: string, body:
   if (members) throw invalid("email", "That person is already a member of your organisation: submit to them directly");
   const { token, tokenHash } = newToken();
   let id: string;
+  let mailId: string;
   try {
-    id = await createEngagement({ organisationId: project.organisationId, projectId: project.id, email: input.email, message: input.message, tokenHash, invitedBy: user.userId });
+    ({ id, mailId } = await db.transaction(async (trx) => {
+      const id = await createEngagement({ organisationId: project.organisationId, projectId: project.id, email: input.email, message: input.message, tokenHash, invitedBy: user.userId }, trx);
+      await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-invited", subject: project.id, detail: { engagementId: id, email: input.email } }, trx);
+      const mailId = await enqueueMail(trx, {
+        organisationId: project.organisationId,
+        to: input.email,
+        kind: "engagement",
+        secretLink: true,
+        subject: `Review engagement: ${project.name} for ${user.organisationName}`,
+        text: [
+          `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
+          ...(input.message ? ["", input.message] : []),
+          "",
+          `Accept or decline here: ${engagementUrl(token)}`,
+          "",
+          "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
+        ].join("\n"),
+      });
+      return { id, mailId };
+    }));
   } catch (error) {
     if (error instanceof EngagementExistsError) throw new ConflictError(`${input.email} is already invited to or engaged on this project.`);
     throw error;
   }
-  await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-invited", subject: project.id, detail: { engagementId: id, email: input.email } });
-  await sendMail({
-    to: input.email,
-    subject: `Review engagement: ${project.name} for ${user.organisationName}`,
-    text: [
-      `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
-      ...(input.message ? ["", input.message] : []),
-      "",
-      `Accept or decline here: ${engagementUrl(token)}`,
-      "",
-      "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
-    ].join("\n"),
-  });
+  await deliverSoon([mailId]);
   return engagementView((await getEngagement(id))!);
 }
 
@@ -86,26 +103,34 @@ export async function revokeEngagement(user: CurrentUser, projectId: string, eng
   assertRole(user, "designer", "admin");
   const engagement = await getEngagement(engagementId);
   if (!engagement || engagement.projectId !== project.id) throw new AccessError(404, "That engagement was not found.");
-  const withdrawn = await db.transaction(async (trx) => {
+  const { withdrawn, mailId } = await db.transaction(async (trx) => {
     const n = await trx("engagements").where({ id: engagement.id }).whereIn("status", ["invited", "accepted"])
       .update({ status: "revoked", revoked_by: user.userId, revoked_at: trx.fn.now() });
     if (n !== 1) throw new ConflictError(`This engagement is already ${engagement.status}.`, { status: engagement.status });
-    if (!engagement.engineerUserId) return [];
+    const withdrawn = await withdrawOpenReviews(trx);
+    await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-revoked", subject: project.id, detail: { engagementId, withdrawnRevisionIds: withdrawn } }, trx);
+    const mailId = await enqueueMail(trx, {
+      organisationId: project.organisationId,
+      to: engagement.email,
+      kind: "engagement-ended",
+      subject: `Engagement ended: ${project.name}`,
+      text: `${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`,
+    });
+    return { withdrawn, mailId };
+  });
+  await deliverSoon([mailId]);
+  return engagementView((await getEngagement(engagement.id))!);
+
+  async function withdrawOpenReviews(trx: Knex.Transaction): Promise<string[]> {
+    if (!engagement!.engineerUserId) return [];
     const open = await trx("reviews as v").join("revisions as r", "r.id", "v.revision_id").join("designs as d", "d.id", "r.design_id")
-      .where({ "d.project_id": project.id, "v.engineer_id": engagement.engineerUserId }).whereNull("v.decision").select("v.id", "v.revision_id as revisionId");
+      .where({ "d.project_id": project.id, "v.engineer_id": engagement!.engineerUserId }).whereNull("v.decision").select("v.id", "v.revision_id as revisionId");
     for (const o of open) {
       await trx("reviews").where({ id: o.id }).whereNull("decision").delete();
       await trx("revisions").where({ id: o.revisionId, status: "in_review" }).update({ status: "draft" });
     }
     return open.map((o) => o.revisionId as string);
-  });
-  await recordAudit({ organisationId: project.organisationId, actorUserId: user.userId, action: "engagement-revoked", subject: project.id, detail: { engagementId, withdrawnRevisionIds: withdrawn } });
-  await sendMail({
-    to: engagement.email,
-    subject: `Engagement ended: ${project.name}`,
-    text: `${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`,
-  });
-  return engagementView((await getEngagement(engagement.id))!);
+  }
 }
 
 /** The engineer's engagements across every contractor. */
@@ -137,15 +162,18 @@ export async function answerEngagement(user: CurrentUser, engagementId: string, 
   }
   const from: Engagement["status"][] = answer === "accept" ? ["invited"] : ["invited", "accepted"];
   const to = answer === "accept" ? "accepted" : "declined";
-  if (!(await setEngagementStatus(e.id, from, to, { engineerUserId: user.userId }))) {
-    throw new ConflictError(`This engagement is ${e.status} and can no longer be ${answer === "accept" ? "accepted" : "declined"}.`, { status: e.status });
-  }
-  await recordAudit({ organisationId: e.organisationId, actorUserId: user.userId, action: `engagement-${to}`, subject: e.projectId, detail: { engagementId: e.id } });
   const inviter = await db("engagements").where({ id: e.id }).first("invited_by");
   const to_ = inviter ? await userEmailAndName(inviter.invited_by) : undefined;
-  if (to_) {
-    await sendMail({
+  const mailIds = await db.transaction(async (trx) => {
+    if (!(await setEngagementStatus(e.id, from, to, { engineerUserId: user.userId }, trx))) {
+      throw new ConflictError(`This engagement is ${e.status} and can no longer be ${answer === "accept" ? "accepted" : "declined"}.`, { status: e.status });
+    }
+    await recordAudit({ organisationId: e.organisationId, actorUserId: user.userId, action: `engagement-${to}`, subject: e.projectId, detail: { engagementId: e.id } }, trx);
+    if (!to_) return [];
+    return [await enqueueMail(trx, {
+      organisationId: e.organisationId,
       to: to_.email,
+      kind: `engagement-${to}`,
       subject: `${user.name} ${to} the engagement on ${e.projectName}`,
       text: [
         `${user.name} (${user.organisationName}) ${to} your engagement on "${e.projectName}".`,
@@ -153,8 +181,9 @@ export async function answerEngagement(user: CurrentUser, engagementId: string, 
         "",
         `Project: ${env.appUrl}/projects/${e.projectId}`,
       ].join("\n"),
-    });
-  }
+    })];
+  });
+  await deliverSoon(mailIds);
   return { id: e.id, status: to };
 }
 
@@ -166,3 +195,40 @@ export async function canAccept(user: CurrentUser): Promise<{ ok: true } | { ok:
 }
 
 const invalid = ValidationError.field;
+
+/**
+ * An engineer with no account signs up from the engagement link: their organisation (their firm, or
+ * just themselves), the account with the admin and engineer roles, and their licence, with the
+ * audit event, in one transaction; then they are signed in. The link's token is the permission,
+ * and the e-mail is the one it was sent to (its owner got the link, so saying the address has an
+ * account tells them nothing new).
+ */
+export async function signUpFromEngagement(token: string, body: Body): Promise<{ userId: string; organisationId: string }> {
+  const engagement = token ? await findEngagementByToken(hashToken(token)) : undefined;
+  if (!engagement || engagement.status !== "invited") throw new ConflictError("This engagement link is no longer open; ask the contractor to engage you again.");
+  const emailInUse = () => new ConflictError("An account with this e-mail exists already: sign in to answer.");
+  if (await findUserByEmail(engagement.email)) throw emailInUse();
+  const input = engineerSignUpSchema.parse(await body());
+  const passwordHash = await hashPassword(input.password);
+  const ip = await requestIp();
+  let created: { organisationId: string; userId: string };
+  try {
+    created = await db.transaction(async (trx) => {
+      const made = await createOrganisationWithAdmin({
+        organisationName: input.kind === "firm" ? input.firmName : `${input.name} (independent engineer)`,
+        name: input.name,
+        email: engagement.email,
+        passwordHash,
+        roles: ["admin", "engineer"],
+      }, trx);
+      await saveLicence(made.userId, { state: input.state, licenceNumber: input.licenceNumber, expiresOn: input.expiresOn }, trx);
+      await recordAudit({ organisationId: made.organisationId, actorUserId: made.userId, action: "sign-up", subject: engagement.email, detail: { fromEngagement: engagement.id }, ip }, trx);
+      return made;
+    });
+  } catch (error) {
+    if (error instanceof EmailInUseError) throw emailInUse();
+    throw error;
+  }
+  await startSession(created.userId, created.organisationId);
+  return created;
+}

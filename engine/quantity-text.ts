@@ -1,0 +1,63 @@
+/**
+ * Text that carries its numbers as quantities (value + unit kind), not as pre-formatted imperial
+ * words, so each screen, the report and the field spec word them in the reader's unit system
+ * (components/format). The engine stays in US customary units; `imperialText` gives the plain
+ * customary sentence for the CLI, the API's `message` fields and results saved before this.
+ *
+ * @example says`Hole at least ${qty(4, "in")} larger than the post` // ["Hole at least ", { value: 4, unit: "in" }, " larger than the post"]
+ */
+
+/** Every unit kind an engine sentence may carry (customary; the formatter converts). */
+export type QuantityUnit = "in" | "ft" | "lb" | "lbFt" | "kipFt" | "psf" | "psfPerFt" | "pcf" | "psi" | "ksi" | "mph" | "lbMass" | "ft3" | "yd3" | "degF";
+
+export interface Quantity {
+  value: number;
+  unit: QuantityUnit;
+  /** Decimals to show in customary units when the value is not a whole number (default 1). */
+  decimals?: number;
+}
+
+export type TextPart = string | Quantity;
+/** A sentence as parts: words and quantities in reading order. */
+export type QuantityText = TextPart[];
+
+export function qty(value: number, unit: QuantityUnit, decimals?: number): Quantity {
+  return decimals === undefined ? { value, unit } : { value, unit, decimals };
+}
+
+export function isQuantity(part: unknown): part is Quantity {
+  return typeof part === "object" && part !== null && typeof (part as Quantity).value === "number" && typeof (part as Quantity).unit === "string";
+}
+
+/** Tagged template: strings and plain numbers stay words, quantities stay quantities, nested texts are spliced in. */
+export function says(strings: TemplateStringsArray, ...values: (TextPart | number | QuantityText)[]): QuantityText {
+  const out: QuantityText = [];
+  strings.forEach((s, i) => {
+    if (s) out.push(s);
+    if (i < values.length) {
+      const v = values[i];
+      if (Array.isArray(v)) out.push(...v);
+      else out.push(typeof v === "number" ? String(v) : v);
+    }
+  });
+  return out;
+}
+
+/** The customary words of each unit kind, as the engine has always written them. */
+export const IMPERIAL_WORDS: Record<QuantityUnit, string> = {
+  in: "in", ft: "ft", lb: "lb", lbFt: "lb-ft", kipFt: "kip-ft", psf: "psf", psfPerFt: "psf per ft", pcf: "pcf",
+  psi: "psi", ksi: "ksi", mph: "mph", lbMass: "lb", ft3: "ft³", yd3: "yd³", degF: "°F",
+};
+
+/** 2000 → "2,000"; 0.75 → "0.75"; 1.25 with 1 decimal → "1.3" (no toLocaleString: runs per design). */
+function customaryNumber(q: Quantity): string {
+  const rounded = Number.isInteger(q.value) ? q.value : Number(q.value.toFixed(q.decimals ?? 1));
+  const [whole, frac] = String(Math.abs(rounded)).split(".");
+  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  return `${rounded < 0 ? "−" : ""}${grouped}${frac ? `.${frac}` : ""}`;
+}
+
+/** The sentence in US customary words: "Hole at least 4 in larger than the post". */
+export function imperialText(text: QuantityText): string {
+  return text.map((p) => (typeof p === "string" ? p : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`)).join("");
+}
