@@ -4,6 +4,7 @@
  * changed since the revision the comment was made on ("resolved in this revision"). Pure: the page
  * builds these on the server from the stored comments; no engine run.
  */
+import type { UnitSystem } from "@/components/format/quantity";
 import { shortDateTime } from "@/components/ui/dates";
 import { fieldLabel } from "./fields";
 import { inputValueText } from "./input-values";
@@ -38,7 +39,7 @@ export interface PinnedCommentView {
   resolved: boolean;
 }
 
-export function pinnedCommentViews(rows: PinnedCommentSource[], shownInput: unknown, timeZone?: string): PinnedCommentView[] {
+export function pinnedCommentViews(rows: PinnedCommentSource[], shownInput: unknown, timeZone?: string, units: UnitSystem = "imperial"): PinnedCommentView[] {
   const now = flatten(shownInput);
   return rows.map((c) => {
     const then = flatten(c.revisionInput)[c.fieldPath] ?? null;
@@ -52,8 +53,8 @@ export function pinnedCommentViews(rows: PinnedCommentSource[], shownInput: unkn
       whenText: shortDateTime(c.createdAt, timeZone),
       revisionNumber: c.revisionNumber,
       valueThen: then,
-      valueThenText: inputValueText(c.fieldPath, then),
-      valueNowText: inputValueText(c.fieldPath, current),
+      valueThenText: inputValueText(c.fieldPath, then, units),
+      valueNowText: inputValueText(c.fieldPath, current, units),
       resolved: !sameValue(then, current),
     };
   });

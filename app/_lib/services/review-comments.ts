@@ -3,6 +3,7 @@ import { pinnedCommentViews, type PinnedCommentView } from "@/components/design/
 import { pinnedCommentsOfLatestDecision } from "@/db/queries/review-comments";
 import type { CurrentUser } from "../auth";
 import { designFor } from "../designs";
+import { readerUnits } from "../unit-preference";
 
 /**
  * The engineer's pinned comments the design editor shows beside their fields: those of the design's
@@ -13,5 +14,6 @@ import { designFor } from "../designs";
 export async function editorPinnedComments(user: CurrentUser, designId: string, shown: { number: number; input: unknown }): Promise<PinnedCommentView[]> {
   const design = await designFor(user, designId, { engaged: true });
   const rows = await pinnedCommentsOfLatestDecision(design.id, shown.number);
-  return pinnedCommentViews(rows, shown.input, user.timeZone);
+  // Values in the reader's chosen units (the same cookie the review page reads).
+  return pinnedCommentViews(rows, shown.input, user.timeZone, await readerUnits());
 }
