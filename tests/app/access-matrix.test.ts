@@ -92,6 +92,7 @@ const MATRIX: MatrixRow[] = [
     setup: async () => ({ args: formArgs({ invitationId: (await freshInvitation()).id }) }),
   },
   // The members admin's API doors: the same services as the forms above.
+  { file: "app/api/members/route.ts", name: "GET", expect: only({ admin: 200, other: 200 }) },
   {
     file: "app/api/invitations/route.ts", name: "POST", expect: only({ admin: 201, other: 201 }),
     setup: async () => ({ body: { email: uniqueEmail("invite-api"), roles: ["installer"] } }),

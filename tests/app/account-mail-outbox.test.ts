@@ -91,6 +91,9 @@ describe("invitation and reset e-mails through the outbox", () => {
     expect(row.text).not.toContain(token);
     expect(row.text).not.toMatch(/\/invite\//);
     expect(row.text).toContain(LINK_REMOVED);
+    // The HTML part too: its button and its written-out link.
+    expect(row.html).toBeTruthy();
+    expect(row.html).not.toContain(token);
     expect(JSON.stringify(await db("email_outbox").where({ to: email }))).not.toContain(token);
   });
 

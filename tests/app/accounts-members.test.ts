@@ -121,3 +121,30 @@ describe("audit log", () => {
     expect(second.rows.map((r) => r.subject)).toEqual(["n4", "n3", "n2", "n1", "n0"]);
   });
 });
+
+describe("members admin through the API (the same services as the forms)", () => {
+  it("lists members and pending invitations, deactivates by PATCH, and keeps the last admin", async () => {
+    const { GET: listRoute } = await import("@/app/api/members/route");
+    const { PATCH: patchRoute } = await import("@/app/api/members/[membershipId]/route");
+    const { POST: inviteRoute } = await import("@/app/api/invitations/route");
+    const member = await freshMember({ roles: ["installer"] });
+    await actAs("admin@demo.pierwise.test");
+    const invitee = uniqueEmail("api-invitee");
+    expect((await inviteRoute(jsonRequest("POST", "/api/invitations", { email: invitee, roles: ["designer"] }), {})).status).toBe(201);
+    const off = await patchRoute(jsonRequest("PATCH", "/x", { active: false }), { params: Promise.resolve({ membershipId: member.membershipId }) });
+    expect(off.status).toBe(200);
+    expect((await off.json()).member).toMatchObject({ email: member.email, active: false });
+    const listed = await (await listRoute(jsonRequest("GET", "/api/members"), {})).json();
+    expect(listed.members.find((m: { email: string }) => m.email === member.email)).toMatchObject({ active: false, roles: ["installer"] });
+    expect(listed.invitations.find((i: { email: string }) => i.email === invitee)).toMatchObject({ roles: ["designer"] });
+    expect(await db("audit_events").where({ action: "member-deactivated", subject: member.email }).first()).toBeTruthy();
+
+    const { admin } = await soloOrganisation();
+    await actAs(admin.email);
+    const both = await patchRoute(jsonRequest("PATCH", "/x", { roles: ["designer"], active: true }), { params: Promise.resolve({ membershipId: admin.membershipId }) });
+    expect(both.status).toBe(422);
+    const last = await patchRoute(jsonRequest("PATCH", "/x", { roles: ["designer"] }), { params: Promise.resolve({ membershipId: admin.membershipId }) });
+    expect(last.status).toBe(409);
+    expect((await last.json()).errors[0].message).toMatch(/last active admin of Solo Test Co/);
+  });
+});

@@ -135,5 +135,6 @@ describe("sign-up without revealing accounts", () => {
     expect(row.sent_at).not.toBeNull();
     expect(row.text).not.toContain(token);
     expect(row.text).toContain("[single-use link removed after delivery]");
+    expect(row.html ?? "").not.toContain(token);
   });
 });

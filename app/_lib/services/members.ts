@@ -1,7 +1,7 @@
 import "server-only";
 import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
-import { createInvitation, findInvitationById, revokeInvitation as expireInvitation } from "@/db/queries/invitations";
+import { createInvitation, findInvitationById, listPendingInvitations, revokeInvitation as expireInvitation, type InvitationView } from "@/db/queries/invitations";
 import { changeMembership, findMembership, listMembers, type MemberRow, type MembershipChange } from "@/db/queries/members";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { assertOwned, assertRole, type CurrentUser } from "../auth";
@@ -19,6 +19,13 @@ import type { Body } from "./input";
  * roles, deactivate and reactivate. Who → whose → which role: a member of another organisation is
  * 404, a non-admin 403. No change may leave the organisation without an active admin.
  */
+
+/** The organisation's members (deactivated ones too, so past work stays attributed) and pending invitations (admins). */
+export async function membersOverview(user: CurrentUser): Promise<{ members: MemberRow[]; invitations: InvitationView[] }> {
+  assertRole(user, "admin");
+  const [members, invitations] = await Promise.all([listMembers(user.organisationId), listPendingInvitations(user.organisationId)]);
+  return { members, invitations };
+}
 
 /** Who → whose → which role for one membership. */
 async function adminAndMember(user: CurrentUser, membershipId: string): Promise<MemberRow> {

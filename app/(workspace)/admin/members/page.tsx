@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { requireRole } from "@/app/_lib/auth";
+import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { listPendingInvitations } from "@/db/queries/invitations";
-import { listMembers } from "@/db/queries/members";
+import { membersOverview } from "@/app/_lib/services/members";
 import { InviteForm } from "./_components/invite-form";
 import { MembersTable } from "./_components/members-table";
 import { PendingInvitations } from "./_components/pending-invitations";
@@ -11,8 +10,11 @@ import { PendingInvitations } from "./_components/pending-invitations";
 export const metadata: Metadata = { title: "Members" };
 
 export default async function MembersPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
-  const user = await forPage(() => requireRole("admin"), "/admin/members");
-  const [members, invitations, { welcome }] = await Promise.all([listMembers(user.organisationId), listPendingInvitations(user.organisationId), searchParams]);
+  const { user, members, invitations } = await forPage(async () => {
+    const user = await requireUser();
+    return { user, ...(await membersOverview(user)) };
+  }, "/admin/members");
+  const { welcome } = await searchParams;
   return (
     <>
       <div className="flex flex-wrap items-baseline justify-between gap-2">
