@@ -33,8 +33,14 @@ async function metricPage(email: string, viewport = DESKTOP): Promise<Page> {
   return page;
 }
 
-/** The visible text (closed <details> and hidden elements are not in innerText). */
-const visibleText = (page: Page) => page.evaluate(() => document.body.innerText);
+/**
+ * The visible text (closed <details> and hidden elements are not in innerText), less the units
+ * switch itself, whose other choice names the US units on purpose.
+ */
+const visibleText = (page: Page) => page.evaluate(() => {
+  const switchText = Array.from(document.querySelectorAll('[role="radiogroup"][aria-label="Units"] [role="radio"]')).map((n) => (n as HTMLElement).innerText);
+  return document.body.innerText.split("\n").filter((line) => !switchText.includes(line.trim())).join("\n");
+});
 
 function imperialWords(text: string): string[] {
   return text.split("\n").filter((line) => IMPERIAL.test(line));
