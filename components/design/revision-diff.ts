@@ -65,7 +65,7 @@ export function resultFigures(r: DesignResult, units: UnitSystem = "imperial"): 
     row("footing.diameterIn", "Hole diameter", r.footing.diameterIn, "in"),
     row("footing.controllingCheck", "Check that sets the depth", ((c) => (c ? checkTitleIn(c, units) : r.footing.controllingCheck))(r.footing.checks.find((c) => c.id === r.footing.controllingCheck))),
     row("footing.pass", "All footing checks pass", r.footing.pass),
-    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${checkTitleIn(c, units)}`, round(c.ratio, 2)), ratio: true })),
+    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${checkTitleIn(c, units)}`, round(c.ratio, 4)), ratio: true })),
     row("governingLoads.shear", "Governing shear at grade", r.governingLoads.shear.valueLb ?? null, "lb"),
     row("governingLoads.moment", "Governing moment at grade", r.governingLoads.moment.valueLbFt ?? null, "lbFt"),
     row("loads.windUplift", "Largest wind uplift on a post (0.6W, before dead load)", r.postLoads.length ? largestWindUpliftLb(r) : null, "lb"),
