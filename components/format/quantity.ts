@@ -1,4 +1,5 @@
 import { toMetric, fromMetric, type CustomaryUnit } from "@/engine/units";
+import { groupedNumber } from "@/components/ui/grouped-number";
 
 /**
  * The one formatter for every number a person reads: each kind of quantity (length, force,
@@ -97,7 +98,7 @@ export function formatQuantity(value: number | null | undefined, kind: UnitKind,
   const decimals = system === "imperial" ? (opts.decimals ?? DISPLAY_UNITS[kind].decimals.imperial) : (opts.metricDecimals ?? DISPLAY_UNITS[kind].decimals.metric);
   // Rounded first, so −0.04 reads "0", never "−0".
   const rounded = Math.round(shown * 10 ** decimals) / 10 ** decimals || 0;
-  const raw = rounded.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+  const raw = groupedNumber(rounded, decimals);
   const text = opts.keepZeros ? raw : trimZeros(raw);
   const label = unitLabel(kind, system);
   return label ? (label === "°" || label === "%" ? `${text}${label}` : `${text} ${label}`) : text;
@@ -106,7 +107,7 @@ export function formatQuantity(value: number | null | undefined, kind: UnitKind,
 /** A plain count: "1,234" (bags, posts, holes): never converted. */
 export function formatCount(n: number | null | undefined): string {
   if (n === null || n === undefined || !Number.isFinite(n)) return "—";
-  return Math.round(n).toLocaleString("en-US");
+  return groupedNumber(Math.round(n), 0);
 }
 
 /** Premix bags: a count, with the bag named by its mass in the reader's units: "12 bags of 80 lb" / "12 bags of 36.3 kg". */

@@ -5,13 +5,21 @@ import type { DesignPreviewProps } from "./design-preview";
 import { webglAvailable } from "./webgl-support";
 
 /**
- * Keeps three.js and the scene out of the host page's first load. Where WebGL is there, the scene
- * chunk is requested together with the preview shell rather than after it arrives (one round
- * trip instead of two before the first draw); without WebGL it is never fetched.
+ * Keeps three.js and the scene out of the host page's first load. Where WebGL is there, the
+ * preview shell and the scene chunk are both requested as soon as the host page's scripts run,
+ * while the page is still hydrating, rather than after hydration mounts the preview (and the
+ * scene only after the shell arrives); without WebGL the scene is never fetched.
  */
+const loadScene = () => import("./scene");
+const loadShell = () => import("./design-preview");
+if (typeof window !== "undefined" && webglAvailable()) {
+  void loadShell();
+  void loadScene();
+}
+
 const DesignPreviewChunk = dynamic<DesignPreviewProps>(() => {
-  if (webglAvailable()) void import("./scene");
-  return import("./design-preview");
+  if (webglAvailable()) void loadScene();
+  return loadShell();
 }, {
   ssr: false,
   // As tall as the preview will be (toolbar, canvas, caption), so the page does not jump.

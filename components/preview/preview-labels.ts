@@ -3,12 +3,12 @@
  * table (engine/units.ts); nothing here is engineering arithmetic, only display rounding.
  */
 import { formatQuantity } from "@/components/format/quantity";
+import { groupedNumber } from "@/components/ui/grouped-number";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 
 export type UnitSystem = "imperial" | "metric";
 
-const grouped = (value: number, digits = 0) =>
-  value.toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+const grouped = (value: number, digits = 0) => groupedNumber(value, digits);
 
 /** A length the engine gives in inches: "24 in" (or "72 in (6 ft 0 in)") / "610 mm". */
 export function formatLengthIn(valueIn: number, units: UnitSystem): string {
@@ -53,15 +53,6 @@ export function previewFigures(g: PreviewGeometry, units: UnitSystem): PreviewFi
 /** A short wind label for the scene: "Wind onto the face, case A". */
 export function windSceneLabel(wind: NonNullable<PreviewGeometry["wind"]>): string {
   return `Wind ${wind.windDirectionDeg === 180 ? "onto the face" : "from behind"}, case ${wind.loadCase}`;
-}
-
-/**
- * Scene text uses the shipped Latin font only. A character outside it would make the text library
- * fetch a fallback font from the internet, which Pierwise never does, so such characters are
- * spelled out (γ) or dropped.
- */
-export function latinOnly(text: string): string {
-  return text.replace(/γ/g, "gamma ").replace(/[^\u0000-\u00ff]/g, "");
 }
 
 /** Where the north marker comes from; revisions saved before the azimuth input were drawn facing south. */

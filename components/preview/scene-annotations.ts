@@ -82,3 +82,41 @@ export function arrowParts(tail: Vec3, head: Vec3, headFraction = 0.25): { shaft
   ];
   return { shaft: segment(tail, neck), cone: segment(neck, head) };
 }
+
+/** Arrow and marker sizes follow the scene's size, so they read on a 3-module or a 300-module array. */
+export const markerSizeFor = (radiusFt: number) => Math.max(0.4, radiusFt * 0.045);
+
+/** The north arrow's tip: the marker's length along north, level. */
+export function northTip(g: PreviewGeometry, radiusFt: number): Vec3 {
+  const n = northMarker(g);
+  const size = markerSizeFor(radiusFt);
+  return [n.at[0] + n.north[0] * size * 3, n.at[1], n.at[2] + n.north[2] * size * 3];
+}
+
+export interface SceneLabel {
+  id: "embedment" | "clearance" | "wind" | "north";
+  text: string;
+  /** The scene point the label describes. */
+  at: Vec3;
+  /** Lower is more important: kept when labels compete for the same spot on screen. */
+  priority: number;
+  fit: "side" | "center";
+}
+
+/**
+ * The scene's labels, most important first: the embedment (what the crew digs), the clearance,
+ * the governing wind, then north. Where they would overlap on screen the less important ones are
+ * hidden (label-placement.ts); the caption under the preview always carries every figure.
+ */
+export function sceneLabels(g: PreviewGeometry, figures: { clearance: string; embedment: string }, radiusFt: number, windText: string | null): SceneLabel[] {
+  const size = markerSizeFor(radiusFt);
+  const labels: SceneLabel[] = [
+    { id: "embedment", text: `Embedment ${figures.embedment}`, at: embedmentDimension(g).labelAt, priority: 1, fit: "side" },
+    { id: "clearance", text: `Clearance ${figures.clearance}`, at: clearanceDimension(g).labelAt, priority: 2, fit: "side" },
+  ];
+  const wind = windArrow(g, radiusFt * 0.45);
+  if (wind && windText) labels.push({ id: "wind", text: windText, at: [wind.tail[0], wind.tail[1] + size * 3, wind.tail[2]], priority: 3, fit: "side" });
+  const tip = northTip(g, radiusFt);
+  labels.push({ id: "north", text: "N", at: [tip[0], tip[1] + size, tip[2]], priority: 4, fit: "center" });
+  return labels;
+}

@@ -28,5 +28,3 @@ export const COLOURS = {
   wind: "#0f766e",
   north: "#1f2937",
 } as const;
-
-export const FONT_URL = "/fonts/inter-latin-400-normal.woff";

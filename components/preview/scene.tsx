@@ -1,18 +1,17 @@
 "use client";
-import { OrbitControls } from "@react-three/drei";
 import { Canvas, useThree } from "@react-three/fiber";
-import { memo, Suspense, useLayoutEffect, useMemo, useState } from "react";
+import { memo, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { sceneBounds, type ViewName } from "./camera-framing";
 import { CameraRig } from "./camera-rig";
-import type { PreviewFigures } from "./preview-labels";
+import { windSceneLabel, type PreviewFigures } from "./preview-labels";
 import { Annotations } from "./scene-annotation-parts";
-import { COLOURS, FONT_URL } from "./scene-style";
+import { sceneLabels } from "./scene-annotations";
+import { SceneControls } from "./scene-controls";
+import { LabelLayer, LabelTracker } from "./scene-labels";
+import { COLOURS } from "./scene-style";
+import { softwareRendering } from "./webgl-support";
 import { Footings, Ground, Modules, Posts, Racking } from "./scene-structure";
-
-// The labels' font starts downloading with this chunk, while React is still mounting the canvas
-// (the text library's own request then finds it in the browser's cache).
-if (typeof window !== "undefined") void fetch(FONT_URL).catch(() => undefined);
 
 export interface SceneProps {
   geometry: PreviewGeometry;
@@ -25,11 +24,15 @@ export interface SceneProps {
 
 const DPR: [number, number] = [1, 2];
 const GL = { antialias: true };
+// Without a GPU every pixel and every sample is the CPU's work: one pixel per CSS pixel, no multisampling.
+const SOFTWARE_DPR = 1;
+const SOFTWARE_GL = { antialias: false };
 
 /**
  * Compiles every shader program the scene needs without blocking the page (the renderer polls the
- * driver's parallel compile), then lets the canvas draw its first frame. Mounted inside the same
- * Suspense boundary as the parts and labels, so it runs once all of them (and the font) are there.
+ * driver's parallel compile), then lets the canvas draw its first frame. Mounted after the parts,
+ * so its layout effect runs once they are all in the scene. (The labels are page text over the
+ * canvas: nothing waits for a font.)
  */
 function CompileThenDraw({ onReady }: { onReady: () => void }) {
   const gl = useThree((s) => s.gl);
@@ -63,41 +66,49 @@ function FirstFrame() {
  * The 3D canvas. Renders on demand only (a changed geometry, a camera move), never on a re-render
  * of the page with the same geometry: the parts keep their meshes and shared materials, so a new
  * design rewrites transforms and buffers but compiles no shader program. Nothing is drawn until
- * the labels' font is loaded and every program is compiled, so the first frame is complete.
+ * every program is compiled, so the first frame is complete and nothing compiles after it.
  */
 export const Scene = memo(function Scene({ geometry, figures, view, readOnly, label, onContextLost }: SceneProps) {
   const bounds = useMemo(() => sceneBounds(geometry), [geometry]);
   const [ready, setReady] = useState(false);
+  const [software] = useState(softwareRendering);
   const onReady = useMemo(() => () => setReady(true), []);
   const r = bounds.radiusFt;
   const c = bounds.centre;
+  const labels = useMemo(() => sceneLabels(geometry, figures, bounds.radiusFt, geometry.wind ? windSceneLabel(geometry.wind) : null), [geometry, figures, bounds.radiusFt]);
+  const labelElements = useRef(new Map<string, HTMLElement>());
   const [camera] = useState(() => ({ fov: 35, position: [c[0] + r, c[1] + r, c[2] + 2 * r] as [number, number, number] }));
   return (
     <div className="relative h-full">
       <Canvas
         frameloop={ready ? "demand" : "never"}
-        dpr={DPR}
+        dpr={software ? SOFTWARE_DPR : DPR}
         camera={camera}
-        gl={GL}
+        gl={software ? SOFTWARE_GL : GL}
         aria-label={label}
         role="img"
-        onCreated={({ gl }) => gl.domElement.addEventListener("webglcontextlost", onContextLost, { once: true })}
+        onCreated={({ gl }) => {
+          gl.domElement.addEventListener("webglcontextlost", onContextLost, { once: true });
+          // Each check is a round trip to the GPU process that waits for the compile; three.js
+          // advises turning it off in production (a failed program still draws nothing).
+          gl.debug.checkShaderErrors = process.env.NODE_ENV !== "production";
+        }}
       >
         <color attach="background" args={[COLOURS.background]} />
         <hemisphereLight args={["#ffffff", "#6b705c", 1.4]} />
         <directionalLight position={[c[0] + r, c[1] + 2 * r, c[2] + 1.5 * r]} intensity={1.8} />
-        <Suspense fallback={null}>
-          <Footings g={geometry} />
-          <Posts g={geometry} />
-          <Racking g={geometry} />
-          <Modules g={geometry} />
-          <Ground g={geometry} />
-          <Annotations g={geometry} figures={figures} bounds={bounds} />
-          <OrbitControls makeDefault enableDamping={false} enableZoom={!readOnly} />
-          <CameraRig bounds={bounds} view={view} />
-          {ready ? <FirstFrame /> : <CompileThenDraw onReady={onReady} />}
-        </Suspense>
+        <Footings g={geometry} />
+        <Posts g={geometry} />
+        <Racking g={geometry} />
+        <Modules g={geometry} />
+        <Ground g={geometry} />
+        <Annotations g={geometry} bounds={bounds} />
+        <SceneControls enableZoom={!readOnly} />
+        <CameraRig bounds={bounds} view={view} />
+        <LabelTracker labels={labels} elements={labelElements} />
+        {ready ? <FirstFrame /> : <CompileThenDraw onReady={onReady} />}
       </Canvas>
+      <LabelLayer labels={labels} elements={labelElements} />
       {ready ? null : (
         <div role="status" className="pointer-events-none absolute inset-0 flex items-center justify-center bg-slate-50 text-sm text-slate-500">
           Loading the 3D scene…

@@ -3,7 +3,7 @@
  * per part, so changing a design never allocates new GPU buffers. Parts pass them as props and
  * never dispose them.
  */
-import { BoxGeometry, ConeGeometry, CylinderGeometry, DoubleSide, MeshBasicMaterial, MeshStandardMaterial } from "three";
+import { BoxGeometry, ConeGeometry, CylinderGeometry, DoubleSide, MeshBasicMaterial, MeshLambertMaterial } from "three";
 import { LineMaterial } from "three/examples/jsm/lines/LineMaterial.js";
 import { COLOURS } from "./scene-style";
 
@@ -11,18 +11,21 @@ export const UNIT_BOX = new BoxGeometry(1, 1, 1);
 export const UNIT_CYLINDER = new CylinderGeometry(0.5, 0.5, 1, 28);
 export const UNIT_CONE = new ConeGeometry(0.5, 1, 20);
 
+/**
+ * Matte (Lambert) shading: a drawing of parts, not a rendering of materials. Its shader is a
+ * fraction of the physically based one, which matters where there is no GPU: a software renderer
+ * compiles each program on the CPU before the first frame and shades every pixel on the CPU.
+ */
 export const MATERIALS = {
-  ground: new MeshStandardMaterial({ color: COLOURS.ground, transparent: true, opacity: 0.45, side: DoubleSide, depthWrite: false, roughness: 1 }),
-  footing: new MeshStandardMaterial({ color: COLOURS.footing, roughness: 0.95 }),
-  post: new MeshStandardMaterial({ color: COLOURS.post, metalness: 0.5, roughness: 0.45 }),
-  beam: new MeshStandardMaterial({ color: COLOURS.beam, metalness: 0.4, roughness: 0.5 }),
-  rail: new MeshStandardMaterial({ color: COLOURS.rail, metalness: 0.4, roughness: 0.5 }),
-  moduleFrame: new MeshStandardMaterial({ color: COLOURS.moduleEdge, metalness: 0.3, roughness: 0.5 }),
-  moduleCell: new MeshStandardMaterial({ color: COLOURS.module, metalness: 0.2, roughness: 0.35 }),
+  ground: new MeshLambertMaterial({ color: COLOURS.ground, transparent: true, opacity: 0.45, side: DoubleSide, depthWrite: false }),
+  footing: new MeshLambertMaterial({ color: COLOURS.footing }),
+  post: new MeshLambertMaterial({ color: COLOURS.post }),
+  beam: new MeshLambertMaterial({ color: COLOURS.beam }),
+  rail: new MeshLambertMaterial({ color: COLOURS.rail }),
+  moduleFrame: new MeshLambertMaterial({ color: COLOURS.moduleEdge }),
+  moduleCell: new MeshLambertMaterial({ color: COLOURS.module }),
   wind: new MeshBasicMaterial({ color: COLOURS.wind }),
   north: new MeshBasicMaterial({ color: COLOURS.north }),
-  /** Labels draw over everything (text colour is set per label by the text library). */
-  label: new MeshBasicMaterial({ depthTest: false, depthWrite: false, transparent: true, toneMapped: false }),
 };
 
 /** Screen-width lines (px): the ground's edge, and the dimension lines drawn over everything. */

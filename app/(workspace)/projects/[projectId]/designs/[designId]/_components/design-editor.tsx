@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { memo, useEffect, useMemo, useState } from "react";
+import { memo, useDeferredValue, useEffect, useMemo, useState } from "react";
 import { FormProvider, useForm, useWatch, type FieldValues } from "react-hook-form";
 import { applyCriteriaCard } from "@/app/_lib/design-defaults";
 import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
@@ -136,6 +136,8 @@ export function DesignEditor(props: EditorProps) {
   const result = props.readOnly && live.savedDiffers ? saved.result : live.result;
   // The 3D preview follows once the numbers are painted, so a keystroke never waits for a redraw.
   const previewResult = useAfterPaint(result);
+  // The long result tables follow a keystroke in an interruptible render after its frame.
+  const detailResult = useDeferredValue(result);
   const stale = live.status === "invalid";
   const statusLine = stale ? live.message : STATUS_TEXT[live.status];
 
@@ -215,7 +217,7 @@ export function DesignEditor(props: EditorProps) {
             <FootingHeadline result={result} units={units} />
             {/* 3D preview slot (components/preview, built by the preview engineer). */}
             <DesignPreviewLazy input={previewResult.input} result={previewResult} unitSystem={units} readOnly={props.readOnly} height={300} showCaution={false} />
-            <ResultsPanel result={result} units={units} />
+            <ResultsPanel result={result} detailResult={detailResult} units={units} />
           </div>
         </aside>
 

@@ -1,5 +1,6 @@
 "use client";
 
+import { memo } from "react";
 import { bagSize, formatBags, formatFootingSize, formatPipeSize, formatQuantity, type UnitKind, type UnitSystem } from "@/components/format/quantity";
 import { checkTitleIn, storedIn, warningIn } from "@/components/format/quantity-text";
 import type { DesignResult } from "@/engine";
@@ -41,31 +42,52 @@ export function FootingHeadline({ result, units }: { result: DesignResult; units
   );
 }
 
-export function ResultsPanel({ result, units }: { result: DesignResult; units: UnitSystem }) {
+/**
+ * The checks follow `result` at once (they say whether the footing passes); the tables below them
+ * follow `detailResult`, which the editor hands over as a deferred value: React renders them after
+ * the keystroke's frame, in slices that yield to the next keystroke, and skips them while a
+ * re-render brings the same deferred result (ResultDetails is memoised).
+ */
+export function ResultsPanel({ result, detailResult = result, units }: { result: DesignResult; detailResult?: DesignResult; units: UnitSystem }) {
+  return (
+    <div className="space-y-3">
+      <FootingChecks result={result} units={units} />
+      <ResultDetails result={detailResult} units={units} />
+    </div>
+  );
+}
+
+function FootingChecks({ result, units }: { result: DesignResult; units: UnitSystem }) {
+  const f = result.footing;
+  const q = (v: number | null | undefined, k: UnitKind, d?: number) => formatQuantity(v, k, units, d === undefined ? {} : { decimals: d });
+  return (
+    <Section title="Footing checks" id="res-checks">
+      <ul className="divide-y divide-slate-100">
+        {f.checks.map((c) => {
+          const k = CHECK_UNITS[c.unit] ?? "none";
+          return (
+            <li key={c.id} className="py-1.5">
+              <div className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
+                <span className="text-sm text-slate-800">{checkTitleIn(c, units)}</span>
+                <UtilisationBar ratio={c.ratio} />
+              </div>
+              <p className="text-xs text-slate-500">{q(c.demand, k)} needed of {q(c.capacity, k)} available{c.governing ? ` · post ${c.governing.postId}, ${c.governing.combination}` : ""}</p>
+            </li>
+          );
+        })}
+      </ul>
+      {f.suggestedPipeSize && f.suggestedPipeSize !== result.input.posts.pipeSize ? <p className="mt-2 text-xs text-slate-700">Smallest standard pipe that carries the bending: {formatPipeSize(f.suggestedPipeSize, units)}.</p> : null}
+    </Section>
+  );
+}
+
+const ResultDetails = memo(function ResultDetails({ result, units }: { result: DesignResult; units: UnitSystem }) {
   const f = result.footing;
   const govIdx = result.governingLoads.moment.windCase;
   const gov = govIdx >= 0 ? result.wind.cases[govIdx] : null;
   const q = (v: number | null | undefined, k: UnitKind, d?: number) => formatQuantity(v, k, units, d === undefined ? {} : { decimals: d });
   return (
-    <div className="space-y-3">
-      <Section title="Footing checks" id="res-checks">
-        <ul className="divide-y divide-slate-100">
-          {f.checks.map((c) => {
-            const k = CHECK_UNITS[c.unit] ?? "none";
-            return (
-              <li key={c.id} className="py-1.5">
-                <div className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
-                  <span className="text-sm text-slate-800">{checkTitleIn(c, units)}</span>
-                  <UtilisationBar ratio={c.ratio} />
-                </div>
-                <p className="text-xs text-slate-500">{q(c.demand, k)} needed of {q(c.capacity, k)} available{c.governing ? ` · post ${c.governing.postId}, ${c.governing.combination}` : ""}</p>
-              </li>
-            );
-          })}
-        </ul>
-        {f.suggestedPipeSize && f.suggestedPipeSize !== result.input.posts.pipeSize ? <p className="mt-2 text-xs text-slate-700">Smallest standard pipe that carries the bending: {formatPipeSize(f.suggestedPipeSize, units)}.</p> : null}
-      </Section>
-
+    <>
       <Section title="Concrete order" id="res-concrete">
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm">
           <dt className="text-slate-600">Per hole</dt><dd className="tabular-nums">{q(result.concrete.perHole.volumeFt3, "ft3")} · {formatBags(result.concrete.perHole.bags80Lb, 80, units)}</dd>
@@ -178,6 +200,6 @@ export function ResultsPanel({ result, units }: { result: DesignResult; units: U
         <ul className="mt-1 list-disc pl-4">{result.references.sections.map((s) => <li key={s}>{storedIn(s, units)}</li>)}</ul>
         <p className="mt-1">Engine {result.engineVersion}</p>
       </details>
-    </div>
+    </>
   );
-}
+});
