@@ -14,7 +14,7 @@ import { formatFootingSize, formatQuantity } from "@/components/format/quantity"
 import type { DesignResult } from "@/engine";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
-import { DESIGNER, INSTALLER, freshApproved } from "../support/review-fixtures";
+import { DESIGNER, INSTALLER, addRevision, freshApproved } from "../support/review-fixtures";
 
 const suite = browserSuite();
 
@@ -56,10 +56,15 @@ async function approvedDesign() {
 describe("metric mode", () => {
   it("leaves no US unit word on the editor, review, compare and field spec pages, at both widths", async () => {
     const d = await approvedDesign();
+    // A second revision with more wind and a higher edge, so the compare page has inputs and results that changed.
+    const input = structuredClone(d.result.input) as unknown as { site: { windSpeedMph: number }; array: { lowestEdgeClearanceIn: number } };
+    input.site.windSpeedMph = 140;
+    input.array.lowestEdgeClearanceIn = 30;
+    const second = await addRevision(d.designId, input as never);
     const pages: [string, string, string][] = [
       [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}`, "editor"],
       [DESIGNER, `/reviews/${d.revisionId}`, "review"],
-      [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}/diff?from=${d.revisionId}&to=${d.revisionId}`, "compare"],
+      [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}/diff?from=${d.revisionId}&to=${second}`, "compare"],
       [INSTALLER, `/field/${d.revisionId}`, "field-spec"],
     ];
     for (const [who, path, name] of pages) {
@@ -69,6 +74,8 @@ describe("metric mode", () => {
         if (name === "editor") await page.getByTestId("footing-spec").filter({ hasText: "mm diameter" }).waitFor({ timeout: 20_000 });
         else await page.getByRole("heading", { level: 1 }).first().waitFor();
         expect(imperialWords(await visibleText(page)), `${name} at ${width}`).toEqual([]);
+        // The compare page folds its unchanged results: those rows count too.
+        if (name === "compare") expect(imperialWords(await page.evaluate(() => document.body.textContent ?? "")), "compare, folded rows").toEqual([]);
         await shot(page, `metric-${name}-${width}`);
       }
     }
