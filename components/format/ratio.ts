@@ -11,12 +11,13 @@ export function ratioFails(ratio: number): boolean {
 }
 
 /**
- * "0.70"; "over 99" for a ratio with no capacity. A failing ratio rounds up (1.004 reads 1.01), so
- * a check that fails never reads "1.00".
+ * "0.70"; "over 99" for a ratio with no capacity. Two decimals, rounded as usual, except that a
+ * failing ratio just over 1 (1.004) reads 1.01, so a check that fails never reads "1.00".
  */
 export function formatRatio(ratio: number): string {
   if (!Number.isFinite(ratio)) return "over 99";
-  return ratioFails(ratio) ? (Math.ceil(ratio * 100 - 1e-9) / 100).toFixed(2) : ratio.toFixed(2);
+  const text = ratio.toFixed(2);
+  return text === "1.00" && ratioFails(ratio) ? "1.01" : text;
 }
 
 /** The words beside a failing ratio. */
