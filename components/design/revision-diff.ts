@@ -2,6 +2,7 @@ import type { DesignInput, DesignResult } from "@/engine";
 import { fieldLabel, FIELD_META } from "./fields";
 import { formatPipeSize, type UnitKind, type UnitSystem } from "@/components/format/quantity";
 import { checkTitleIn, warningIn } from "@/components/format/quantity-text";
+import { formatRatio } from "@/components/format/ratio";
 
 /**
  * What changed between two revisions, in inputs and in results, as rows a person reads:
@@ -65,7 +66,7 @@ export function resultFigures(r: DesignResult, units: UnitSystem = "imperial"): 
     row("footing.diameterIn", "Hole diameter", r.footing.diameterIn, "in"),
     row("footing.controllingCheck", "Check that sets the depth", ((c) => (c ? checkTitleIn(c, units) : r.footing.controllingCheck))(r.footing.checks.find((c) => c.id === r.footing.controllingCheck))),
     row("footing.pass", "All footing checks pass", r.footing.pass),
-    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${checkTitleIn(c, units)}`, round(c.ratio, 2)), ratio: true })),
+    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${checkTitleIn(c, units)}`, shownRatio(c.ratio)), ratio: true })),
     row("governingLoads.shear", "Governing shear at grade", r.governingLoads.shear.valueLb ?? null, "lb"),
     row("governingLoads.moment", "Governing moment at grade", r.governingLoads.moment.valueLbFt ?? null, "lbFt"),
     row("loads.windUplift", "Largest wind uplift on a post (0.6W, before dead load)", r.postLoads.length ? largestWindUpliftLb(r) : null, "lb"),
@@ -84,9 +85,11 @@ export function resultFigures(r: DesignResult, units: UnitSystem = "imperial"): 
   return rows;
 }
 
-function round(x: number, d: number): number {
-  return Number.isFinite(x) ? Math.round(x * 10 ** d) / 10 ** d : x;
+/** The ratio as shown (two decimals, a failing one rounded up): rows that read the same are not "changed". */
+function shownRatio(ratio: number): number {
+  return Number.isFinite(ratio) ? Number(formatRatio(ratio)) : ratio;
 }
+
 
 export function resultChanges(from: DesignResult, to: DesignResult, units: UnitSystem = "imperial"): { changed: DiffRow[]; unchanged: DiffRow[] } {
   const a = resultFigures(from, units);

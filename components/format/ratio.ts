@@ -5,14 +5,19 @@
  */
 export const RATIO_LIMIT = 1;
 
-/** "0.70"; "over 99" for a ratio with no capacity. */
-export function formatRatio(ratio: number): string {
-  return Number.isFinite(ratio) ? ratio.toFixed(2) : "over 99";
+/** True when the ratio fails: the engine's own rule (engine/footing/checks.ts, pass when ≤ 1 + 1e-9). */
+export function ratioFails(ratio: number): boolean {
+  return !(ratio <= RATIO_LIMIT + 1e-9);
 }
 
-/** True when the ratio fails (over 1.00 as shown: 1.004 reads 1.00 and passes). */
-export function ratioFails(ratio: number): boolean {
-  return !Number.isFinite(ratio) || Math.round(ratio * 100) / 100 > RATIO_LIMIT;
+/**
+ * "0.70"; "over 99" for a ratio with no capacity. Two decimals, rounded as usual, except that a
+ * failing ratio just over 1 (1.004) reads 1.01, so a check that fails never reads "1.00".
+ */
+export function formatRatio(ratio: number): string {
+  if (!Number.isFinite(ratio)) return "over 99";
+  const text = ratio.toFixed(2);
+  return text === "1.00" && ratioFails(ratio) ? "1.01" : text;
 }
 
 /** The words beside a failing ratio. */

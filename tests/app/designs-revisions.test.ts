@@ -180,8 +180,9 @@ describe("the demo history and the diff", () => {
     const results = resultChanges(revs[1].result, revs[2].result);
     const diameter = results.changed.find((r) => r.path === "footing.diameterIn");
     expect(diameter).toMatchObject({ from: 30, to: 36 });
-    const depth = [...results.changed, ...results.unchanged].find((r) => r.path === "footing.depthFt")!;
-    expect(depth).toMatchObject({ from: revs[1].result.footing.depthFt, to: revs[2].result.footing.depthFt });
+    // The depth in inches, as every screen shows it (components/format: formatFootingSize).
+    const depth = [...results.changed, ...results.unchanged].find((r) => r.path === "footing.depthIn")!;
+    expect(depth).toMatchObject({ from: revs[1].result.footing.depthIn, to: revs[2].result.footing.depthIn });
   });
 
   it("the diff of a revision with itself is empty", async () => {

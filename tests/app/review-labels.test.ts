@@ -87,8 +87,9 @@ describe("compare page", () => {
     expect(words).not.toMatch(DOTTED_PATH);
     expect(words).not.toMatch(/CHECK_[A-Z_]+/);
     expect(words).toMatch(/Given footing depth\s+not set\s+24 in/);
-    for (const f of failing) expect(words).toContain(`${f.ratio.toFixed(2)} — fails`);
-    expect(page).toMatch(/text-red-700[^>]*>\d+\.\d\d — fails/);
+    // The same words on every screen (components/format/ratio-text.tsx), not colour alone.
+    for (const f of failing) expect(words).toContain(`${f.ratio.toFixed(2)} over 1.00, fails`);
+    expect(page).toMatch(/text-red-700[^>]*>\d+\.\d\d(<!-- -->)? ?<span[^>]*>over 1\.00, fails/);
     // Every utilisation reads with two decimals (0.70, never 0.7).
     for (const x of ok.footing.checks) expect(words).toMatch(new RegExp(`Utilisation: ${x.title.replace(/[()]/g, ".")}\\s+${x.ratio.toFixed(2)}`));
     const controlling = ok.footing.checks.find((x) => x.id === ok.footing.controllingCheck);

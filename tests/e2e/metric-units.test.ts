@@ -14,7 +14,7 @@ import { formatFootingSize, formatQuantity } from "@/components/format/quantity"
 import type { DesignResult } from "@/engine";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
-import { DESIGNER, INSTALLER, freshApproved } from "../support/review-fixtures";
+import { DESIGNER, INSTALLER, addRevision, freshApproved } from "../support/review-fixtures";
 
 const suite = browserSuite();
 
@@ -33,8 +33,14 @@ async function metricPage(email: string, viewport = DESKTOP): Promise<Page> {
   return page;
 }
 
-/** The visible text (closed <details> and hidden elements are not in innerText). */
-const visibleText = (page: Page) => page.evaluate(() => document.body.innerText);
+/**
+ * The visible text (closed <details> and hidden elements are not in innerText), less the units
+ * switch itself, whose other choice names the US units on purpose.
+ */
+const visibleText = (page: Page) => page.evaluate(() => {
+  const switchText = Array.from(document.querySelectorAll('[role="radiogroup"][aria-label="Units"] [role="radio"]')).map((n) => (n as HTMLElement).innerText);
+  return document.body.innerText.split("\n").filter((line) => !switchText.includes(line.trim())).join("\n");
+});
 
 function imperialWords(text: string): string[] {
   return text.split("\n").filter((line) => IMPERIAL.test(line));
@@ -50,10 +56,15 @@ async function approvedDesign() {
 describe("metric mode", () => {
   it("leaves no US unit word on the editor, review, compare and field spec pages, at both widths", async () => {
     const d = await approvedDesign();
+    // A second revision with more wind and a higher edge, so the compare page has inputs and results that changed.
+    const input = structuredClone(d.result.input) as unknown as { site: { windSpeedMph: number }; array: { lowestEdgeClearanceIn: number } };
+    input.site.windSpeedMph = 140;
+    input.array.lowestEdgeClearanceIn = 30;
+    const second = await addRevision(d.designId, input as never);
     const pages: [string, string, string][] = [
       [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}`, "editor"],
       [DESIGNER, `/reviews/${d.revisionId}`, "review"],
-      [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}/diff?from=${d.revisionId}&to=${d.revisionId}`, "compare"],
+      [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}/diff?from=${d.revisionId}&to=${second}`, "compare"],
       [INSTALLER, `/field/${d.revisionId}`, "field-spec"],
     ];
     for (const [who, path, name] of pages) {
@@ -63,6 +74,12 @@ describe("metric mode", () => {
         if (name === "editor") await page.getByTestId("footing-spec").filter({ hasText: "mm diameter" }).waitFor({ timeout: 20_000 });
         else await page.getByRole("heading", { level: 1 }).first().waitFor();
         expect(imperialWords(await visibleText(page)), `${name} at ${width}`).toEqual([]);
+        // The compare page folds its unchanged results: those rows count too.
+        if (name === "compare") expect(imperialWords(await page.evaluate(() => {
+          const copy = document.body.cloneNode(true) as HTMLElement;
+          copy.querySelectorAll("script, style").forEach((n) => n.remove());
+          return (copy.textContent ?? "").replace(/([a-z0-9)])([A-Z])/g, "$1\n$2");
+        })), "compare, folded rows").toEqual([]);
         await shot(page, `metric-${name}-${width}`);
       }
     }

@@ -9,7 +9,7 @@ import { DesignReviewBar } from "@/components/review/design-review-bar";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
-import { chosenUnits } from "@/app/_lib/unit-preference";
+import { chosenUnits, readerUnits } from "@/app/_lib/unit-preference";
 import { RevisionsTable } from "./_components/revisions-table";
 import { shortDateTime } from "@/components/ui/dates";
 import { editorPinnedComments } from "@/app/_lib/services/review-comments";
@@ -101,7 +101,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
           <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
           {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
         </div>
-        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} />
+        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} units={await readerUnits()} />
       </section>
     </>
   );

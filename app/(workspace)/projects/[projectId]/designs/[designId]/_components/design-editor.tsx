@@ -146,7 +146,8 @@ export function DesignEditor(props: EditorProps) {
       <form onSubmit={onSubmit} onKeyDown={enterMovesToNextField} noValidate className="grid grid-cols-1 gap-6 pb-40 lg:grid-cols-[minmax(0,1fr)_minmax(0,30rem)] lg:pb-0">
         <div className="min-w-0 space-y-4">
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <UnitsSwitch units={units} onChange={setUnits} />
+            {/* The editor re-renders itself at once; the refresh brings the server-rendered parts of the page (revisions table) along, keeping what was typed. */}
+            <UnitsSwitch units={units} onChange={(u) => { setUnits(u); router.refresh(); }} />
             {props.readOnly ? <p className="text-sm text-slate-600">Read only.</p> : null}
           </div>
 

@@ -6,10 +6,11 @@ import { DataTable, type ServerPage } from "@/components/design/data-table";
 import { StatusBadge } from "@/components/review/status-badge";
 import type { RevisionRow } from "@/db/queries/revisions";
 import { shortDateTime } from "@/components/ui/dates";
+import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
 
 const col = createColumnHelper<RevisionRow>();
 
-export function RevisionsTable({ page, basePath, latestId, viewingId, timeZone }: { page: ServerPage<RevisionRow>; basePath: string; latestId: string; viewingId: string; timeZone?: string }) {
+export function RevisionsTable({ page, basePath, latestId, viewingId, timeZone, units = "imperial" }: { page: ServerPage<RevisionRow>; basePath: string; latestId: string; viewingId: string; timeZone?: string; units?: UnitSystem }) {
   const columns = [
     col.accessor("number", {
       header: "Revision",
@@ -21,7 +22,7 @@ export function RevisionsTable({ page, basePath, latestId, viewingId, timeZone }
     }),
     col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
     col.accessor("note", { header: "Note", enableSorting: false, cell: (c) => <span className="block max-w-xs text-slate-700">{c.getValue() || "—"}</span> }),
-    col.accessor("depthIn", { header: "Footing", cell: (c) => { const r = c.row.original; return r.depthIn === null ? "—" : <span className="whitespace-nowrap tabular-nums">{r.diameterIn} in × {(r.depthIn / 12).toFixed(1)} ft{r.pass ? "" : <span className="font-medium text-red-700"> fails</span>}</span>; } }),
+    col.accessor("depthIn", { header: "Footing", cell: (c) => { const r = c.row.original; return r.depthIn === null ? "—" : <span className="whitespace-nowrap tabular-nums">{formatFootingSize(r.diameterIn ?? 0, r.depthIn, units)}{r.pass ? "" : <span className="font-medium text-red-700"> fails</span>}</span>; } }),
     col.accessor("authorName", { header: "By", cell: (c) => c.getValue() ?? "—" }),
     col.accessor("createdAt", { header: "Saved", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{shortDateTime(c.getValue(), timeZone)}</time> }),
     col.display({
