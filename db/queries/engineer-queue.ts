@@ -30,7 +30,7 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
-/** A review's state from the review row alone; `held` is the CTE of the revisions of designs with an open hold. */
+/** A review's state from the review row alone; `held` is the CTE of the approved revisions of designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
   when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
   else 'decided' end`;
@@ -55,8 +55,11 @@ export interface QueueFilter {
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
  *   their designs (a few rows);
- * - `held`: the revisions of designs with an open hold, in the organisations they review for
- *   (open holds are few; each design's revisions are one range of its (design, number) index);
+ * - `held`: the approved revisions of designs with an open hold, in the organisations they review
+ *   for, through the approved-revisions index (open holds are few). Only an approval can be on
+ *   hold, and an approval is recorded with its revision's status in one transaction
+ *   (app/_lib/review/workflow.ts; 20261203100000 refuses the status without the record), after
+ *   which the pin keeps it;
  * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
  *   with the state and sort key; a review in another organisation is checked against
  *   `engaged_designs` through its revision (one primary-key probe). Names of contractor, project
@@ -96,7 +99,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     ), engaged_designs AS MATERIALIZED (
       SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
-      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id
+      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
         ${waitingOnly ? "AND false" : ""}
     ), visible AS (

@@ -283,6 +283,8 @@ describe("the engineer's queue across contractors", () => {
       submitted_by: designer, decision: "approve", decided_by: engineer.userId, decided_at: db.fn.now(), engineer_name: "Test", licence_number: "PE-T", licence_state: "CO",
       verify_code: crypto.randomUUID(), facts_snapshot: JSON.stringify({ projectName: "Queue test site", projectAddress: "1 Test Lane (invented)", projectState: "CO", criteria: null }),
     }).returning("organisation_id");
+    // As the decision does: the approval record and the revision's status together.
+    await db("revisions").where({ id: onHold.revisionId }).update({ status: "approved" });
     await db("design_holds").insert({ design_id: onHold.designId, organisation_id: approval.organisation_id, revision_id: onHold.revisionId, reason: "Hole P1 shallower than specified.", raised_by: designer });
 
     const all = await engineerQueue(me, {});

@@ -33,7 +33,9 @@ describe("field list", () => {
     await approve(second);
     expect((await db("designs").where({ id: designId }).first("approved_revision_id")).approved_revision_id).toBe(second);
 
-    const specs = await approvedSpecs(DEMO_ORG_ID);
+    // All of them on one page: other suites' approvals share the database, and a superseded spec
+    // comes only after every current one (the list pages 50 at a time).
+    const specs = await approvedSpecs(DEMO_ORG_ID, { limit: 100_000 });
     const mine = specs.filter((s) => s.revisionId === first || s.revisionId === second);
     expect(mine.map((s) => [s.revisionId, s.superseded])).toEqual([[second, false], [first, true]]);
     // Every current spec comes before every superseded one.
