@@ -43,7 +43,7 @@ export const FIELD_LABELS: Record<string, FieldLabel> = {
   "site.soil.method": { label: "Soil values from", message: "Soil method", help: "Presumed class from IBC Table 1806.2, or the values in a geotechnical report." },
   "site.soil.soilClass": { label: "Presumed soil class", message: "Soil class", help: "1 crystalline rock … 4 sand, gravel · 5 clay, silt. Fill, organic soil and mud need a soil report." },
   "site.soil.allowableBearingPsf": { label: "Allowable bearing", message: "Allowable bearing pressure", unit: "psf", help: "Vertical bearing pressure the soil report allows under the footing." },
-  "site.soil.lateralBearingPsfPerFt": { label: "Lateral bearing", message: "Lateral bearing pressure", unit: "psfPerFt", help: "Sideways soil resistance per foot of depth from the soil report." },
+  "site.soil.lateralBearingPsfPerFt": { label: "Lateral bearing", message: "Lateral bearing pressure", unit: "psfPerFt", help: "Sideways soil resistance, growing with depth, from the soil report." },
   "site.soil.description": { label: "Soil description", help: "What the report calls the soil, e.g. 'stiff sandy clay'." },
   "site.frostDepthIn": { label: "Frost depth", unit: "in", help: "How deep the ground freezes. Footings go below it so frost heave cannot jack them up." },
   "site.slopeAlongPct": { label: "Ground slope along the array", unit: "pct", help: "Rise of the ground going right along the rows, as a percentage of the run (negative falls)." },

@@ -10,7 +10,7 @@ export const DEFER_TO_CODE =
 
 /** The site cautions with their numbers as quantities (screens word them in the reader's units). */
 export const SITE_CAUTION_TEXTS: readonly QuantityText[] = [
-  "Call before you dig: call your local utility-locate service (811 in the US) and wait for buried utilities to be marked before any hole is drilled.",
+  "Call before you dig: call your local utility-locate service (in the US, dial 811) and wait for buried utilities to be marked before any hole is drilled.",
   "Open holes are a fall and collapse hazard: cover or barricade them, never stand in an unshored hole deeper than your waist, and keep spoil back from the edge.",
   "Wet concrete burns skin and eyes: wear gloves and eye protection. Bags, posts and beams are heavy: lift with two people or a machine, and mind the auger's torque and pinch points.",
   "Do not lift or fasten modules in high or gusty wind: a module is a sail and can injure the crew or be torn loose.",

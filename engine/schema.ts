@@ -93,7 +93,7 @@ export const arraySchema = z.object({
 }, { error: "Array must be given: modules, rows and columns, tilt and clearance" });
 
 const diameterList = (label: string) =>
-  z.array(num(`Each ${label} diameter`, 8, 60, "in"), { error: `${label} diameters must be a list of inches` })
+  z.array(num(`Each ${label} diameter`, 8, 60, "in"), { error: `${label} diameters must be a list of numbers` })
     .min(1, { error: `${label} diameters must list between 1 and 20 sizes` })
     .max(20, { error: `${label} diameters must list between 1 and 20 sizes` });
 

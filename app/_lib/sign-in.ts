@@ -2,6 +2,7 @@ import { recordAudit } from "@/db/queries/audit";
 import { attemptSucceeded, reserveAttempt, THROTTLE } from "@/db/queries/sign-in-throttle";
 import { env } from "./env";
 import { deliverSoon, enqueueMail } from "./outbox";
+import { composeMail } from "./mail-template";
 import { db } from "@/db/client";
 import { findSignInCandidate } from "@/db/queries/users";
 import { hashPassword, verifyPassword } from "./password";
@@ -69,12 +70,15 @@ async function warnOwner(userId: string, organisationId: string, email: string):
     return enqueueMail(trx, {
       organisationId,
       to: email,
-      subject: "Many failed sign-ins on your Pierwise account",
-      text: [
-        `In the last ${THROTTLE.windowMinutes} minutes there were at least ${THROTTLE.perAccountCeiling} wrong passwords for this account, from several places.`,
-        "You can still sign in as usual. If this was not you, choose a longer password:",
-        `${env.appUrl}/reset`,
-      ].join("\n"),
+      ...composeMail({
+        subject: "Many failed sign-ins on your Pierwise account",
+        heading: "Many failed sign-ins on your account",
+        paragraphs: [
+          `In the last ${THROTTLE.windowMinutes} minutes there were at least ${THROTTLE.perAccountCeiling} wrong passwords for this account, from several places.`,
+          "You can still sign in as usual. If this was not you, choose a longer password.",
+        ],
+        action: { label: "Choose a new password", url: `${env.appUrl}/reset` },
+      }),
     });
   });
   await deliverSoon([mailId]);

@@ -1,6 +1,7 @@
 import type { DesignInput, DesignResult } from "@/engine";
 import { fieldLabel, FIELD_META } from "./fields";
-import type { UnitKind } from "./units";
+import { formatPipeSize, type UnitKind, type UnitSystem } from "@/components/format/quantity";
+import { checkTitleIn, warningIn } from "@/components/format/quantity-text";
 
 /**
  * What changed between two revisions, in inputs and in results, as rows a person reads:
@@ -14,6 +15,8 @@ export interface DiffRow {
   unit?: UnitKind;
   /** A utilisation (demand ÷ capacity): shown with two decimals, over 1.0 marked as failing. */
   ratio?: boolean;
+  /** A count of premix bags of this mass (lb): shown as a count naming the bag's mass. */
+  bagLb?: number;
   from: DiffValue;
   to: DiffValue;
 }
@@ -45,27 +48,37 @@ function rank(order: string[], path: string): number {
   return i === -1 ? order.length : i;
 }
 
-/** The result figures a designer, engineer or crew lead compares between revisions. */
-export function resultFigures(r: DesignResult): DiffRow[] {
+/**
+ * The largest wind uplift on any post (0.6W, before the array's dead load counts against it): what
+ * the editor's loads table and the uplift check's demand show. Not the net uplift
+ * (`governingLoads.uplift`, the 0.6D + 0.6W result), which is smaller by 0.6 × the dead load.
+ */
+export function largestWindUpliftLb(r: DesignResult): number {
+  return Math.max(0, ...r.postLoads.flatMap((p) => p.combinations.map((c) => c.windUpliftLb)));
+}
+
+/** The result figures a designer, engineer or crew lead compares between revisions (words in the reader's units). */
+export function resultFigures(r: DesignResult, units: UnitSystem = "imperial"): DiffRow[] {
   const row = (path: string, label: string, value: DiffValue, unit?: UnitKind): DiffRow => ({ path, label, unit, from: value, to: value });
   const rows: DiffRow[] = [
-    row("footing.depthFt", "Footing depth", r.footing.depthFt, "ft"),
+    row("footing.depthIn", "Footing depth", r.footing.depthIn, "in"),
     row("footing.diameterIn", "Hole diameter", r.footing.diameterIn, "in"),
-    row("footing.controllingCheck", "Check that sets the depth", r.footing.checks.find((c) => c.id === r.footing.controllingCheck)?.title ?? r.footing.controllingCheck),
+    row("footing.controllingCheck", "Check that sets the depth", ((c) => (c ? checkTitleIn(c, units) : r.footing.controllingCheck))(r.footing.checks.find((c) => c.id === r.footing.controllingCheck))),
     row("footing.pass", "All footing checks pass", r.footing.pass),
-    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${c.title}`, round(c.ratio, 2)), ratio: true })),
+    ...r.footing.checks.map((c) => ({ ...row(`footing.checks.${c.id}.ratio`, `Utilisation: ${checkTitleIn(c, units)}`, round(c.ratio, 2)), ratio: true })),
     row("governingLoads.shear", "Governing shear at grade", r.governingLoads.shear.valueLb ?? null, "lb"),
     row("governingLoads.moment", "Governing moment at grade", r.governingLoads.moment.valueLbFt ?? null, "lbFt"),
-    row("governingLoads.uplift", "Governing uplift", r.governingLoads.uplift?.valueLb ?? null, "lb"),
+    row("loads.windUplift", "Largest wind uplift on a post (0.6W, before dead load)", r.postLoads.length ? largestWindUpliftLb(r) : null, "lb"),
+    row("governingLoads.uplift", "Largest net uplift on a post (after the array's dead load)", r.governingLoads.uplift?.valueLb ?? null, "lb"),
     row("wind.velocity.qzWithKdPsf", "Velocity pressure qh", r.wind.velocity.qzWithKdPsf, "psf"),
     row("geometry.postTopFt", "Post top above grade", r.geometry.postTopFt, "ft"),
     row("geometry.highestEdgeFt", "Highest panel edge", r.geometry.highestEdgeFt, "ft"),
     row("concrete.perHole.volumeFt3", "Concrete per hole", r.concrete.perHole.volumeFt3, "ft3"),
     row("concrete.job.orderYd3", "Concrete to order", r.concrete.job.orderYd3, "yd3"),
-    row("concrete.job.bags80Lb", "80-lb bags for the job", r.concrete.job.bags80Lb),
-    row("footing.suggestedPipeSize", "Smallest pipe that carries the moment", r.footing.suggestedPipeSize),
+    { ...row("concrete.job.bags80Lb", "Premix bags for the job", r.concrete.job.bags80Lb), bagLb: 80 },
+    row("footing.suggestedPipeSize", "Smallest pipe that carries the moment", r.footing.suggestedPipeSize ? formatPipeSize(r.footing.suggestedPipeSize, units) : null),
     // The warnings' words, never their codes (CHECK_OVER_CAPACITY_BEARING is for the engine).
-    row("warnings", "Warnings", r.warnings.map((w) => w.message).sort().join(" ") || "none"),
+    row("warnings", "Warnings", r.warnings.map((w) => warningIn(w, units)).sort().join(" ") || "none"),
     row("engineVersion", "Engine version", r.engineVersion),
   ];
   return rows;
@@ -75,9 +88,9 @@ function round(x: number, d: number): number {
   return Number.isFinite(x) ? Math.round(x * 10 ** d) / 10 ** d : x;
 }
 
-export function resultChanges(from: DesignResult, to: DesignResult): { changed: DiffRow[]; unchanged: DiffRow[] } {
-  const a = resultFigures(from);
-  const b = new Map(resultFigures(to).map((r) => [r.path, r]));
+export function resultChanges(from: DesignResult, to: DesignResult, units: UnitSystem = "imperial"): { changed: DiffRow[]; unchanged: DiffRow[] } {
+  const a = resultFigures(from, units);
+  const b = new Map(resultFigures(to, units).map((r) => [r.path, r]));
   const rows = a.map((r) => ({ ...r, to: b.get(r.path)?.to ?? null }));
   for (const [path, r] of b) if (!a.some((x) => x.path === path)) rows.push({ ...r, from: null });
   return { changed: rows.filter((r) => !same(r.from, r.to)), unchanged: rows.filter((r) => same(r.from, r.to)) };

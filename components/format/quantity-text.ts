@@ -49,3 +49,8 @@ export function rangeMessageIn(message: string | undefined, kind: UnitKind, unit
     `${formatQuantity(Number(a.replace(/,/g, "")), kind, units)} and ${formatQuantity(Number(b.replace(/,/g, "")), kind, units)}`.replace(` ${unitLabel(kind, units)} and`, " and"));
 }
 
+
+/** A check's source in the reader's units (the net-bearing credit names a unit weight). */
+export function checkSourceIn(check: { source: string; sourceText?: QuantityText }, system: UnitSystem): string {
+  return check.sourceText ? sayIn(check.sourceText, system) : storedIn(check.source, system);
+}

@@ -1,6 +1,5 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import type { UnitSystem } from "./quantity";
 import { rememberUnitSystem } from "./unit-preference";
 
@@ -9,14 +8,15 @@ const NAMES: Record<UnitSystem, string> = { imperial: "US units (ft, in, lb)", m
 /**
  * The units switch, one radio group (WAI-ARIA APG): one tab stop, the arrow keys move to and choose
  * the other system. With `onChange` the caller re-renders itself (the editor); without it the page
- * is rendered again on the server in the chosen units.
+ * is loaded again and the server renders it in the chosen units.
  */
 export function UnitsSwitch({ units, onChange }: { units: UnitSystem; onChange?: (u: UnitSystem) => void }) {
-  const router = useRouter();
   const choose = (u: UnitSystem) => {
     rememberUnitSystem(u);
     if (onChange) onChange(u);
-    else router.refresh();
+    // A full reload (not the router): the switch also renders where no app router is mounted, and
+    // the server page then renders again in the chosen units from the cookie.
+    else window.location.reload();
   };
   return (
     <div role="radiogroup" aria-label="Units" className="no-print inline-flex rounded-md border border-slate-300 bg-white p-0.5 text-sm">

@@ -5,6 +5,8 @@
  * failing check cannot be missed on one of them. Client-safe (no database import).
  */
 import type { DesignResult } from "@/engine";
+import type { UnitSystem } from "@/components/format/quantity";
+import { checkTitleIn } from "@/components/format/quantity-text";
 
 export interface CheckLine {
   checkId: string;
@@ -45,3 +47,14 @@ export function checkOutcome(r: DesignResult): CheckOutcome {
 
 /** A ratio as engineers read it: 1.03 (two decimals; "over 99" for a ratio with no capacity): the one ratio formatter. */
 export { formatRatio as ratioText } from "@/components/format/ratio";
+
+/** The outcome with every check title in the reader's units ("Hole at least 102 mm larger than the post"). */
+export function outcomeIn(outcome: CheckOutcome, units: UnitSystem): CheckOutcome {
+  const local = (l: CheckLine): CheckLine => ({ ...l, title: checkTitleIn(l, units) });
+  return { ...outcome, governing: outcome.governing ? local(outcome.governing) : null, failing: outcome.failing.map(local) };
+}
+
+/** Overrides as stored with an approval, their titles in the reader's units. */
+export function overridesIn(overrides: CheckOverride[], units: UnitSystem): CheckOverride[] {
+  return overrides.map((o) => ({ ...o, title: checkTitleIn(o, units) }));
+}

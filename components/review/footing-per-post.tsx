@@ -1,3 +1,4 @@
+import { formatQuantity, type UnitSystem } from "@/components/format/quantity";
 import { rowCount } from "./plain-table";
 
 export interface PostFooting {
@@ -7,14 +8,15 @@ export interface PostFooting {
   postLengthIn: number;
 }
 
-const inches = (n: number) => `${Number(n.toFixed(1)).toLocaleString("en-US")} in`;
 
 /**
  * Each post's hole, embedment and post length, under the summary. Every hole has the same diameter
  * and depth (the deepest any post needs); post lengths differ on sloping ground. More than four posts
  * fold behind a <details> with their count, so the summary stays one screen on a phone.
  */
-export function FootingPerPost({ posts, diameterIn }: { posts: PostFooting[]; diameterIn: number }) {
+export function FootingPerPost({ posts, diameterIn, units = "imperial" }: { posts: PostFooting[]; diameterIn: number; units?: UnitSystem }) {
+  // The one formatter: "52.8 in" / "1,340 mm".
+  const inches = (n: number) => formatQuantity(n, "in", units);
   const table = (
     <table className="mt-2 w-full text-sm">
       <thead>

@@ -6,6 +6,7 @@
  */
 import { fieldLabel, FIELD_META } from "@/components/design/fields";
 import { inputValueText } from "@/components/design/input-values";
+import type { UnitSystem } from "@/components/format/quantity";
 import { flatten, type DiffValue } from "@/components/design/revision-diff";
 
 export interface ReviewInputRow {
@@ -39,6 +40,7 @@ const rank = (path: string) => (ORDER.indexOf(path) === -1 ? ORDER.length : ORDE
 export function reviewInputGroups(
   input: unknown,
   notes: { changed: Iterable<string>; offCard: Record<string, DiffValue>; pinned: Map<string, string[]> },
+  units: UnitSystem = "imperial",
 ): ReviewInputGroup[] {
   const changed = new Set(notes.changed);
   const values = Object.entries(flatten(input)).filter(([path]) => path !== "projectName");
@@ -49,9 +51,9 @@ export function reviewInputGroups(
       .map(([path, value]): ReviewInputRow => ({
         path,
         label: fieldLabel(path),
-        value: inputValueText(path, value),
+        value: inputValueText(path, value, units),
         changed: changed.has(path),
-        cardValue: path in notes.offCard ? inputValueText(path, notes.offCard[path]) : null,
+        cardValue: path in notes.offCard ? inputValueText(path, notes.offCard[path], units) : null,
         comments: notes.pinned.get(path) ?? [],
       }));
     return {

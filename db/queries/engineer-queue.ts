@@ -30,7 +30,7 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
-/** A review's state from the review row alone; `held` is the CTE of approved revisions of designs with an open hold. */
+/** A review's state from the review row alone; `held` is the CTE of the revisions of designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
   when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
   else 'decided' end`;
@@ -53,13 +53,14 @@ export interface QueueFilter {
 
 /**
  * One statement, built so its cost follows the page, not the engineer's whole history:
- * - `engaged`: the projects this engineer holds an accepted engagement on (a few rows);
- * - `held`: approved revisions of designs with an open hold, in the organisations they review for
- *   (open holds are few; each is looked up through the approved-revisions index);
+ * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
+ *   their designs (a few rows);
+ * - `held`: the revisions of designs with an open hold, in the organisations they review for
+ *   (open holds are few; each design's revisions are one range of its (design, number) index);
  * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
- *   with the state and sort key; a review in another organisation is checked against `engaged`
- *   through its revision and design. Names of contractor, project and design are joined here only
- *   when the search or the sort needs them;
+ *   with the state and sort key; a review in another organisation is checked against
+ *   `engaged_designs` through its revision (one primary-key probe). Names of contractor, project
+ *   and design are joined here only when the search or the sort needs them;
  * - `page`: sorted, counted (a window count over `picked`, so no second statement) and limited;
  * - only the page's rows are joined to revision, design, project and contractor, and only their
  *   result JSON is read (for the failing checks; the footing figures are columns).
@@ -74,6 +75,9 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const contractorName = Boolean(q) || sort === "contractor";
   const bindings: unknown[] = [user.userId, user.organisationId, user.userId, user.organisationId];
   const where: string[] = [];
+  // Waiting is told by the review alone: no held revisions to look up. (No "decision IS NULL" here:
+  // the planner would take the open-queue index and its table rows over the index-only scan.)
+  const waitingOnly = filter.state === "waiting";
   if (filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor)) {
     where.push("v.organisation_id = ?");
     bindings.push(filter.contractor);
@@ -89,9 +93,12 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const sql = `
     WITH engaged AS MATERIALIZED (
       SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
+    ), engaged_designs AS MATERIALIZED (
+      SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
-      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
+      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
+        ${waitingOnly ? "AND false" : ""}
     ), visible AS (
       SELECT v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at,
              ${contractorName ? "o.name" : "NULL::text"} AS contractor,
@@ -100,9 +107,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       FROM reviews v ${contractorName ? "JOIN organisations o ON o.id = v.organisation_id" : ""}
       ${names ? "JOIN revisions rn ON rn.id = v.revision_id JOIN designs dn ON dn.id = rn.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
       WHERE v.engineer_id = ?
-        AND (v.organisation_id = ? OR EXISTS (
-          SELECT 1 FROM revisions er JOIN designs ed ON ed.id = er.design_id
-          WHERE er.id = v.revision_id AND ed.project_id IN (SELECT project_id FROM engaged)))
+        AND (v.organisation_id = ? OR (SELECT er.design_id FROM revisions er WHERE er.id = v.revision_id) IN (SELECT id FROM engaged_designs))
         ${where.map((w) => `AND ${w}`).join(" ")}
     ), picked AS (
       SELECT * FROM visible ${stateWhere}

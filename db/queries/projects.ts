@@ -1,6 +1,6 @@
 import { db } from "../client";
 import { acceptedProjectIds } from "./engagements";
-import { likePattern, listPage, type ListPage, type ListQuery } from "./list-page";
+import { likePattern, MAX_PAGE_SIZE, type ListPage, type ListQuery } from "./list-page";
 import { isUuid } from "../ids";
 
 /** A customer site. */
@@ -44,39 +44,62 @@ export async function getProject(id: string): Promise<Project | undefined> {
 }
 
 export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
+const NOT_NULL_SORTS = new Set(["name", "state", "designCount", "updatedAt"]);
 
 /**
- * One page of the organisation's projects with their criteria card and design count. The design
- * count is a column kept by a trigger (so sorting by it reads no designs); `q` goes through the
- * trigram index over name, address and state, and matches a criteria card through its id. With
- * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside engineer).
+ * One page of the organisation's projects with their criteria card and design count, in one
+ * statement: the page's ids are picked first from an index that starts with the organisation and
+ * serves the sort (index-only: organisation, sort column, id; migration 20261203500000), counted
+ * in the same pass by a window count, and only those rows are joined to their card and
+ * organisation. A later page steps over index entries only (about 300 to a page of the index),
+ * never over joined rows. The design count is a column kept by a trigger; `q` goes through the
+ * trigram index over name, address and state, and matches a criteria card through its id (the
+ * organisation's matching cards are an array computed once in the same statement). With
+ * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside
+ * engineer): those ids are looked up first, so a person with none gets the organisation's index
+ * alone, not an OR the index cannot serve.
  */
 export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string): Promise<ListPage<ProjectRow>> {
-  const base = db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").join("organisations as o", "o.id", "p.organisation_id")
+  const q = (query.q ?? "").trim().slice(0, 200);
+  const sort = query.sort && Object.hasOwn(PROJECT_SORTS, query.sort) ? (query.sort as keyof typeof PROJECT_SORTS) : "updatedAt";
+  const dir = query.dir === "asc" || query.dir === "desc" ? query.dir : "desc";
+  const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(query.pageSize ?? 20)));
+  const page = Math.max(1, Math.floor(query.page ?? 1));
+  const engaged: string[] = engagedUserId ? await acceptedProjectIds(engagedUserId).pluck("project_id") : [];
+
+  // Ties broken by name (for state) and id, so pages neither repeat nor skip a project.
+  const order = `${PROJECT_SORTS[sort]} ${dir}${NOT_NULL_SORTS.has(sort) ? "" : " nulls last"}${sort === "state" ? `, p.name ${dir}` : ""}, p.id ${dir}`;
+  const picked = db("projects as p")
     .where((w) => {
       w.where("p.organisation_id", organisationId);
-      if (engagedUserId) w.orWhereIn("p.id", acceptedProjectIds(engagedUserId));
-    });
-  // Cards whose jurisdiction matches, looked up first (a few rows, trigram index): projects then
-  // match by card id through their own index, which the planner can OR with the trigram index.
-  const q = (query.q ?? "").trim().slice(0, 200);
-  const cardIds: string[] = q
-    ? await db("criteria_cards").where("organisation_id", organisationId).whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [likePattern(q)]).pluck("id")
-    : [];
-  const page = await listPage<ProjectRow>(base, query, {
-    sortable: PROJECT_SORTS,
-    defaultSort: "updatedAt",
-    defaultDir: "desc",
-    notNull: ["name", "state", "designCount", "updatedAt"],
-    search: ["p.name", "p.address", "p.state", "c.jurisdiction"],
+      if (engaged.length) w.orWhereIn("p.id", engaged);
+    })
+    .select("p.id", db.raw("count(*) over () as total"))
+    .orderByRaw(order)
+    .limit(pageSize)
+    .offset((page - 1) * pageSize);
+  if (sort === "jurisdiction") picked.leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id");
+  if (q) {
+    const pattern = likePattern(q);
     // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
-    match: (w, pattern) =>
+    picked.where((w) =>
       w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
-        .orWhereIn("p.criteria_card_id", cardIds),
-    select: (qb) =>
-      qb.select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount"),
-  });
-  return { ...page, rows: page.rows.map((r) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })) };
+        .orWhereRaw("p.criteria_card_id = ANY(ARRAY(SELECT id FROM criteria_cards WHERE organisation_id = ? AND jurisdiction ILIKE ? ESCAPE '\\'))", [organisationId, pattern]));
+  }
+  const rows: (ProjectRow & { total: string })[] = await db
+    .from(picked.as("pg"))
+    .join("projects as p", "p.id", "pg.id")
+    .leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id")
+    .join("organisations as o", "o.id", "p.organisation_id")
+    .select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount", "pg.total")
+    .orderByRaw(order);
+  let total = rows.length ? Number(rows[0].total) : 0;
+  // A page past the end has no row to carry the count: count on its own (only then).
+  if (!rows.length && page > 1) total = (await listProjects(organisationId, { ...query, page: 1, pageSize: 1 }, engagedUserId)).total;
+  return {
+    rows: rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })),
+    total, page, pageSize, sort, dir, q,
+  };
 }
 
 const toRow = (f: Partial<ProjectFields>) => ({

@@ -29,6 +29,8 @@ export interface FootingCheck {
   /** For the checks that set depth: the depth this check alone needs (in, unrounded). */
   requiredDepthIn: number | null;
   source: string;
+  /** The source with its numbers as quantities, when it carries any (the net bearing credit). */
+  sourceText?: QuantityText;
   /** Extra words for the reviewer, e.g. the load height h used. */
   detail?: string;
   /** The same words with their numbers as quantities. */

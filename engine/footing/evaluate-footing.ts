@@ -50,6 +50,15 @@ export interface FootingEvaluation {
   lateralConverged: boolean;
 }
 
+/** Bearing: gross pressure, or net with the soil removed credited (its unit weight named in the source). */
+function bearingCheck(pressurePsf: number, allowablePsf: number, soilSource: string, netSoilPcf: number | null | undefined, governing: Governing | null): FootingCheck {
+  if (!netSoilPcf) return makeCheck("bearing", pressurePsf, allowablePsf, "psf", soilSource, governing);
+  const sourceText = says`${soilSource}; net pressure, soil removed credited at ${qty(netSoilPcf, "pcf")} (engineer's option)`;
+  const c = makeCheck("bearing", pressurePsf, allowablePsf, "psf", imperialText(sourceText), governing);
+  c.sourceText = sourceText;
+  return c;
+}
+
 /** Lateral check as load vs allowable load at the same height h = M/P (moment when P = 0). */
 function lateralCheck(row: FactoredPostLoad | null, ratio: number, source: string, needIn: number): FootingCheck {
   if (!row) return makeCheck("lateral", 0, 1, "lb", source, null, needIn);
@@ -151,7 +160,7 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
     lateralCheck(latRow, Math.max(0, latRatio), LATERAL_SOURCE(ctx.constrained), need.lateral),
     makeCheck("uplift", upDemand, upCap, "lb", "ASCE 7 §2.4.1 0.6D + 0.6W; resisting weight × 0.6", upRow && gov(upRow), need.uplift),
     makeCheck("frost", frostIn, depthIn, "in", FROST_CHECK_SOURCE, null, need.frost),
-    makeCheck("bearing", brgPsf, ctx.soil.verticalPsf, "psf", ctx.netBearingSoilPcf ? `${ctx.soil.source}; net pressure, soil removed credited at ${ctx.netBearingSoilPcf} pcf (engineer's option)` : ctx.soil.source, brgRow && gov(brgRow)),
+    bearingCheck(brgPsf, ctx.soil.verticalPsf, ctx.soil.source, ctx.netBearingSoilPcf, brgRow && gov(brgRow)),
     makeCheck("holeSize", ctx.pipe.outsideDiameterIn + 4, diameterIn, "in", "IBC §1807.3.3 backfill (value as recalled; confirm against the printed code)", null),
     makeCheck("postBending", bendM / 1000, ctx.pipe.allowableMomentKipFt, "kip-ft", ctx.pipe.source, bendRow && gov(bendRow)),
   ];

@@ -77,16 +77,16 @@ export function startingSize(input: DesignInput): StartingSize {
   const closest = sizeParsedDesign(withSize(input, pipe, "auto"));
   const kept = withSize(input, pipe, closest.footing.diameterIn);
   const result = sizeParsedDesign(kept);
-  return { input: kept, result, pass: result.footing.pass, changes: describeChanges(input, kept, pipe, false), advice: adviceFor(input, result, bendingPipe) };
+  return { input: kept, result, pass: result.footing.pass, changes: describeChanges(input, kept, pipe, false, bendingPipe !== null), advice: adviceFor(input, result, bendingPipe) };
 }
 
-function describeChanges(from: DesignInput, to: DesignInput, pipe: PipeSize, pass: boolean): string[] {
+function describeChanges(from: DesignInput, to: DesignInput, pipe: PipeSize, pass: boolean, carriesBending = true): string[] {
   const out: string[] = [];
   if (to.posts.pipeSize !== from.posts.pipeSize) {
     const smaller = PIPE_SIZES[PIPE_SIZES.indexOf(pipe) - 1];
     out.push(pass
       ? `${pipeWords(pipe)}: the smallest that passes${smaller ? ` (${pipeWords(smaller)} does not)` : ""}`
-      : `${pipeWords(pipe)}: the smallest that comes closest to carrying the post bending`);
+      : carriesBending ? `${pipeWords(pipe)}: the smallest that carries the post bending` : `${pipeWords(pipe)}: the largest standard pipe (none carries the post bending)`);
   }
   if (to.posts.holeDiameterIn !== from.posts.holeDiameterIn) {
     const candidates = `${from.posts.autoDiametersIn.join(", ")} in`;

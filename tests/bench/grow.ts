@@ -216,7 +216,6 @@ export async function grow(client: pg.Client, from: number, to: number, options:
     }));
     notes.push(`${indexes.length} indexes rebuilt ${seconds(ti)}`);
   }
-  await client.query("COMMIT");
   // What autovacuum does on its own for insert-only tables, here at once: statistics, and the
   // visibility map that lets counts use index-only scans (TOAST is skipped: nothing there to do).
   const tv = Date.now();

@@ -1,5 +1,6 @@
 /**
- * The list-index migration (20261202500000) runs forward on a database that already holds data,
+ * The list-index migrations (20261202500000, and 20261203500000 with the queue and project-page
+ * indexes) run forward on a database that already holds data,
  * without losing a row: a copy of a grown database (every other migration, the demo seed and three
  * generated units of tests/bench/grow.ts) is migrated to the latest schema, then every table is
  * counted again and the new columns are checked against what they are derived from.
@@ -13,7 +14,7 @@ import pg from "pg";
 import { psql, type Cluster } from "@/db/lib/postgres";
 import { grow, prepare, tableCounts } from "../bench/grow";
 
-const MINE = /^202612025\d{5}_/;
+const MINE = /^20261202500000_|^2026120350\d{4}_/;
 const cluster = JSON.parse(process.env.PIERWISE_TEST_CLUSTER ?? "null") as Cluster | null;
 const appUrl = new URL(process.env.DATABASE_URL ?? "postgres://x@127.0.0.1/x");
 const suffix = crypto.randomBytes(4).toString("hex");

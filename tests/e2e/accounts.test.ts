@@ -40,6 +40,9 @@ describe("accounts in the browser", () => {
     await page.goto(firstLink(await mailTo(`founder-${stamp}@example.test`, { subject: /Finish creating/ })));
     await page.getByRole("heading", { name: "Finish creating Browser Test Solar Co" }).waitFor();
     await shot(page, "signup-confirm-desktop");
+    await page.setViewportSize(PHONE);
+    await shot(page, "signup-confirm-phone");
+    await page.setViewportSize(DESKTOP);
     await page.getByRole("button", { name: "Create organisation" }).click();
     await page.waitForURL(/\/admin\/members/);
     await page.getByText("Your organisation is ready").waitFor();

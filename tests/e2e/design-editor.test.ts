@@ -46,7 +46,7 @@ describe("design editor", () => {
     await page.getByLabel("Number of posts").fill("2");
     await page.getByLabel("Pipe size").selectOption("5");
     await page.getByLabel("Hole diameter", { exact: true }).fill("30");
-    await page.getByTestId("footing-spec").filter({ hasText: "30 in dia" }).waitFor({ timeout: 20_000 });
+    await page.getByTestId("footing-spec").filter({ hasText: "30 in diameter" }).waitFor({ timeout: 20_000 });
     await settled(page);
     const before = await spec(page);
 
@@ -56,7 +56,7 @@ describe("design editor", () => {
     await settled(page);
     const after = await spec(page);
     // More wind never gives a shallower footing (tests/engine/properties.test.ts).
-    const depth = (s: string | null) => Number(/× ([\d.]+) ft/.exec(s ?? "")?.[1]);
+    const depth = (s: string | null) => Number(/× ([\d.,]+) in deep/.exec(s ?? "")?.[1].replace(/,/g, ""));
     expect(depth(after)).toBeGreaterThanOrEqual(depth(before));
     await shot(page, "editor-desktop");
 

@@ -25,6 +25,10 @@ describe("pinned comments in the editor", () => {
     await engineer.getByLabel("Request changes").check();
     await engineer.locator("#comment-0-field").selectOption("site.windSpeedMph");
     await engineer.locator("#comment-0-body").fill(COMMENT);
+    // A second one on a field under "More site settings".
+    await engineer.getByRole("button", { name: "Add another comment" }).click();
+    await engineer.locator("#comment-1-field").selectOption("site.groundElevationFt");
+    await engineer.locator("#comment-1-body").fill("Give the surveyed elevation.");
     await engineer.getByRole("button", { name: "Record decision" }).click();
     await engineer.getByText("Changes requested: the designer has been e-mailed.").waitFor();
 
@@ -39,6 +43,8 @@ describe("pinned comments in the editor", () => {
     expect(text).toContain("Eli Engineer, P.E.");
     expect(text).toMatch(/on revision 1/);
     expect(text).toContain("Open: unchanged since revision 1.");
+    // The folded "More site settings" opens so the comment on the elevation is in view too.
+    expect(await designer.locator('[data-pinned-to="site.groundElevationFt"]').isVisible()).toBe(true);
     // The list at the top names the field in words; no input path anywhere a person reads.
     const panel = designer.getByRole("region", { name: /Engineer's comments on revision 1/ });
     expect(await panel.innerText()).toContain(`Basic wind speed: ${COMMENT}`);
@@ -56,7 +62,7 @@ describe("pinned comments in the editor", () => {
     await designer.getByRole("button", { name: "Save revision" }).click();
     await designer.getByText("Saved as revision 2.").waitFor();
     await note.getByText(/Resolved in this revision: 115 mph in revision 1, now 120 mph\./).waitFor();
-    expect(await panel.innerText()).toMatch(/all resolved/);
+    expect(await panel.innerText()).toContain("(1 open)");
 
     // A fresh load of the editor says the same.
     await designer.reload();

@@ -3,6 +3,8 @@ export interface CaughtMail {
   id: string;
   subject: string;
   text: string;
+  /** The HTML part, when the mail has one. */
+  html?: string;
   to: { address: string }[];
 }
 

@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { quarterIn } from "@/app/_lib/review/field-format";
+import { tapeInches } from "@/components/format/tape";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
 import { approvedSpecs, fieldCursorText, parseFieldCursor } from "@/db/queries/review-queue";
@@ -16,6 +17,7 @@ export default async function FieldSpecsPage({ searchParams }: { searchParams: P
   const older = (await searchParams).older;
   const specs = await approvedSpecs(user.organisationId, { older: parseFieldCursor(Array.isArray(older) ? older[0] : older) });
   const last = specs.at(-1);
+  const units = await readerUnits();
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-2xl font-semibold">Field specs</h1>
@@ -31,7 +33,7 @@ export default async function FieldSpecsPage({ searchParams }: { searchParams: P
                   Revision {s.number} <StatusBadge status={s.superseded ? "superseded" : "approved"} onHold={s.onHold} />
                   {s.approvedAt ? <span className="text-slate-600">approved {shortDate(s.approvedAt, user.timeZone)}</span> : null}
                 </p>
-                <p className="mt-1 text-base">{s.posts} holes, {quarterIn(s.diameterIn)} across × {quarterIn(s.depthIn)} deep</p>
+                <p className="mt-1 text-base">{s.posts} holes, {tapeInches(s.diameterIn, units)} across × {tapeInches(s.depthIn, units)} deep</p>
               </Link>
             </li>
           ))}

@@ -9,6 +9,7 @@ import { engagementsOfPerson } from "@/db/queries/engagements";
 import { engineerQueue, queueContractors, type QueueState } from "@/db/queries/engineer-queue";
 import { QueueFilters } from "./_components/queue-filters";
 import { QueueTable } from "./_components/queue-table";
+import { readerUnits } from "@/app/_lib/unit-preference";
 
 export const metadata: Metadata = { title: "Review queue" };
 
@@ -45,7 +46,7 @@ export default async function QueuePage({ searchParams }: { searchParams: Promis
       ) : null}
       <div className="mt-4 space-y-3">
         <QueueFilters contractors={contractors} contractor={one("contractor")} state={state ?? ""} />
-        <QueueTable page={page} />
+        <QueueTable page={page} units={await readerUnits()} />
       </div>
       <Caution compact className="mt-6" />
     </>

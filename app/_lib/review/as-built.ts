@@ -3,6 +3,7 @@ import { ConflictError, ValidationError } from "@/app/_lib/errors";
 import type { CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { deliverSoon, enqueueMail, type QueuedMail } from "@/app/_lib/outbox";
+import { composeMail } from "@/app/_lib/mail-template";
 import { deleteObject, putObject } from "@/app/_lib/storage";
 import { acceptUpload, revisionObjectKey, UPLOAD_KINDS } from "@/app/_lib/uploads";
 import type { DesignResult } from "@/engine";
@@ -103,17 +104,20 @@ async function holdMail(organisationId: string, revisionId: string, designName: 
     if (r.decision === "approve" && r.decidedBy) people.add(r.decidedBy);
     people.add(r.submittedBy);
   }
-  const text = [
-    `${raisedBy} recorded a hole on "${designName}" (${projectName}) that does not match the approved spec:`,
-    ...reasons.map((r) => `- ${r}`),
-    "",
-    "The design is ON HOLD: no concrete is to be placed until an engineer reviews it and clears the hold.",
-    `Review: ${env.appUrl}/reviews/${revisionId}`,
-  ].join("\n");
+  const mail = composeMail({
+    subject: `On hold: ${designName} (${projectName})`,
+    heading: "ON HOLD: a hole does not match the approved spec",
+    project: projectName,
+    revision: designName,
+    paragraphs: [`${raisedBy} recorded a hole on "${designName}" (${projectName}) that does not match the approved spec:`],
+    list: reasons,
+    footnote: "The design is ON HOLD: no concrete is to be placed until an engineer reviews it and clears the hold.",
+    action: { label: "Open the review", url: `${env.appUrl}/reviews/${revisionId}` },
+  });
   const mails: QueuedMail[] = [];
   for (const id of people) {
     const person = await userEmailAndName(id);
-    if (person) mails.push({ organisationId, to: person.email, subject: `On hold: ${designName} (${projectName})`, text });
+    if (person) mails.push({ organisationId, to: person.email, ...mail });
   }
   return mails;
 }

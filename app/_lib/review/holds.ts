@@ -3,6 +3,7 @@ import { ConflictError } from "@/app/_lib/errors";
 import { assertOwnedOrEngaged, type CurrentUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
 import { deliverSoon, enqueueMail } from "@/app/_lib/outbox";
+import { composeMail } from "@/app/_lib/mail-template";
 import { db } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import { clearHoldRow, getHold, holdAudience, type HoldRecord } from "@/db/queries/holds";
@@ -27,22 +28,25 @@ export async function clearHold(user: CurrentUser, hold: HoldRecord & { organisa
   const holdId = hold.id;
   const where = await db("designs as d").join("projects as p", "p.id", "d.project_id").where("d.id", hold.designId).first("d.name as designName", "p.name as projectName");
   const people = hold.revisionId ? await holdAudience(hold.revisionId) : [];
-  const text = [
-    `${user.name} cleared the hold on "${where?.designName}" (${where?.projectName}).`,
-    "",
-    `The hold was: ${hold.reason}`,
-    "",
-    `What to do now (the engineer's note): ${note}`,
-    "",
-    ...(hold.revisionId ? [`Field spec: ${env.appUrl}/field/${hold.revisionId}`] : []),
-  ].join("\n");
+  const mail = composeMail({
+    subject: `Hold cleared: ${where?.designName} (${where?.projectName})`,
+    heading: "The hold is cleared",
+    project: where?.projectName,
+    revision: where?.designName,
+    paragraphs: [
+      `${user.name} cleared the hold on "${where?.designName}" (${where?.projectName}).`,
+      `The hold was: ${hold.reason}`,
+      `What to do now (the engineer's note): ${note}`,
+    ],
+    action: hold.revisionId ? { label: "Open the field spec", url: `${env.appUrl}/field/${hold.revisionId}` } : undefined,
+  });
   // Clearing, its audit event and the e-mails commit together; the mails go out after commit.
   const mailIds = await db.transaction(async (trx) => {
     if (!(await clearHoldRow(hold.id, user.userId, note, trx))) throw new ConflictError("This hold was already cleared.");
     // The contractor's audit log holds it, also when an engaged outside engineer cleared the hold.
     await recordAudit({ organisationId: hold.organisationId, actorUserId: user.userId, action: "hold-cleared", subject: hold.designId, detail: { holdId, note } }, trx);
     const ids: string[] = [];
-    for (const p of people) ids.push(await enqueueMail(trx, { organisationId: hold.organisationId, to: p.email, subject: `Hold cleared: ${where?.designName} (${where?.projectName})`, text }));
+    for (const p of people) ids.push(await enqueueMail(trx, { organisationId: hold.organisationId, to: p.email, ...mail }));
     return ids;
   });
   await deliverSoon(mailIds);

@@ -7,12 +7,15 @@
 import type PDFKit from "pdfkit";
 import type { DesignResult } from "@/engine";
 import { sideElevation, type Pt } from "@/components/preview/elevation-mapping";
-import { ftIn } from "./field-format";
+import type { UnitSystem } from "@/components/format/quantity";
+import { formatQuantity } from "@/components/format/quantity";
+import { tapeLength } from "@/components/format/tape";
 
 /** Architect's scales, feet of the real thing per inch of paper. */
 const SCALES_FT_PER_IN = [1, 2, 3, 4, 5, 6, 8, 10, 12, 16, 20, 24, 32, 40];
 
-export function drawElevation(doc: PDFKit.PDFDocument, r: DesignResult, box: { x: number; y: number; width: number; height: number }, font: { regular: string; bold: string }): void {
+export function drawElevation(doc: PDFKit.PDFDocument, r: DesignResult, box: { x: number; y: number; width: number; height: number }, font: { regular: string; bold: string }, units: UnitSystem = "imperial"): void {
+  const ftIn = (inches: number) => tapeLength(inches, units);
   const e = sideElevation(r.geometryPreview);
   const [vx, vy, vw, vh] = e.viewBox;
   const ftPerIn = SCALES_FT_PER_IN.find((s) => (vw / s) * 72 <= box.width && (vh / s) * 72 <= box.height - 24) ?? SCALES_FT_PER_IN.at(-1)!;
@@ -72,7 +75,7 @@ export function drawElevation(doc: PDFKit.PDFDocument, r: DesignResult, box: { x
   const barFt = ftPerIn >= 10 ? 10 : 5;
   const bx = box.x, by = Math.min(oy + vh * k + 16, box.y + box.height - 10);
   doc.rect(bx, by, barFt * k, 3).fill("#0f172a");
-  doc.fillColor("#0f172a").font(font.bold).text(`Scale 1 in = ${ftPerIn} ft   (bar ${barFt} ft)`, bx + barFt * k + 8, by - 4, { width: 260 });
+  doc.fillColor("#0f172a").font(font.bold).text(units === "imperial" ? `Scale 1 in = ${ftPerIn} ft   (bar ${barFt} ft)` : `Scale 1:${ftPerIn * 12}   (bar ${formatQuantity(barFt, "ft", units)})`, bx + barFt * k + 8, by - 4, { width: 260 });
   doc.restore();
   doc.font(font.regular).fillColor("black");
 }

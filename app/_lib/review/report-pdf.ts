@@ -8,15 +8,19 @@
  */
 import PDFDocument from "pdfkit";
 import QRCode from "qrcode";
-import { DEFER_TO_CODE, SITE_CAUTIONS } from "@/engine";
+import { DEFER_TO_CODE } from "@/engine";
+import { SITE_CAUTION_TEXTS } from "@/engine/notices";
+import { formatFootingSize, formatPipeSize, formatQuantity, type UnitSystem } from "@/components/format/quantity";
+import { checkTitleIn, sayIn, storedIn, warningIn } from "@/components/format/quantity-text";
+import { formatRatio, ratioWithVerdict } from "@/components/format/ratio";
 import { fieldLabel } from "@/engine/field-labels";
 import type { RevisionContext } from "@/db/queries/reviews";
-import { checkOutcome, ratioText } from "@/components/review/check-outcome";
+import { checkOutcome } from "@/components/review/check-outcome";
 import { calendarDateInWords, dateInWords, dateTimeInWords } from "@/components/ui/dates";
 import { drawElevation } from "./report-drawing";
 import { reportFont } from "./report-fonts";
 import { methodSteps } from "./report-method";
-import { checksTable, concreteLines, fmt, governingLines, loadsTable, windTable, type Table } from "./report-model";
+import { checksTable, concreteLines, criterionValue, governingLines, loadsTable, windTable, type Table } from "./report-model";
 import { inputGroups, userText } from "./report-text";
 import type { Standing } from "./standing";
 import { verifyUrl } from "./verify";
@@ -31,9 +35,8 @@ const CRITERIA_LABELS: Record<string, string> = {
   buildingCode: "Building code", asceEdition: "ASCE 7 edition", riskCategory: "Risk category", windSpeedMph: "Basic wind speed",
   exposure: "Exposure category", groundSnowPsf: "Ground snow load", frostDepthIn: "Frost depth", soilClass: "Presumptive soil class (IBC Table 1806.2)",
 };
-const CRITERIA_UNITS: Record<string, string> = { windSpeedMph: "mph", groundSnowPsf: "psf", frostDepthIn: "in" };
-
-export async function renderReportPdf(ctx: RevisionContext, standing: Standing, generatedAt = new Date()): Promise<Buffer> {
+/** `units`: the reader's unit system; every number and unit word of the report follows it. */
+export async function renderReportPdf(ctx: RevisionContext, standing: Standing, generatedAt = new Date(), units: UnitSystem = "imperial"): Promise<Buffer> {
   const doc = new PDFDocument({
     size: "LETTER",
     margins: { top: MARGIN, left: MARGIN, right: MARGIN, bottom: MARGIN + FOOTER_HEIGHT },
@@ -52,6 +55,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   const a = standing.approval;
   const outcome = checkOutcome(r);
   const approved = ctx.status === "approved" && a;
+  const len = (inches: number) => formatQuantity(inches, "in", units, { decimals: 2 });
 
   const heading = (text: string, size = 12) => {
     if (doc.y > bottom() - 60) doc.addPage();
@@ -118,7 +122,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
     if (a.overrides.length) {
       doc.moveDown(0.3);
       line(`APPROVED ALTHOUGH ${a.overrides.length === 1 ? "A CHECK FAILS" : `${a.overrides.length} CHECKS FAIL`}: the engineer's reasons`, { bold: true, colour: BAD, size: 10 });
-      for (const o of a.overrides) line(`${o.title} (ratio ${ratioText(o.ratio)}): ${o.reason}`, { colour: BAD, indent: 10 });
+      for (const o of a.overrides) line(`${checkTitleIn(o, units)} (ratio ${formatRatio(o.ratio)}): ${o.reason}`, { colour: BAD, indent: 10 });
     }
   } else {
     doc.moveDown(0.3);
@@ -130,25 +134,25 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
 
   // ── Summary ────────────────────────────────────────────────────────────────────────────────
   heading("Summary", 14);
-  line(`Every post: hole ${fmt(r.footing.diameterIn)} in diameter × ${fmt(r.footing.depthIn)} in deep, ${r.footing.post.size} in standard pipe post (${outcome.posts} posts). Depth set by ${r.footing.controllingCheck === "lateral" ? "lateral embedment" : r.footing.controllingCheck === "uplift" ? "uplift" : "frost and minimum depth"}.`, { bold: true, size: 10 });
-  table({ title: "Footing per post", columns: ["Post", "Hole", "Above grade", "Below grade", "Post length"], rows: r.field.posts.map((p) => [p.id, `${fmt(r.footing.diameterIn)} in × ${fmt(p.embedmentIn)} in`, `${fmt(p.heightAboveGradeIn)} in`, `${fmt(p.embedmentIn)} in`, `${fmt(p.postLengthIn)} in`]) }, [1, 2, 1.4, 1.4, 1.4]);
+  line(`Every post: hole ${formatFootingSize(r.footing.diameterIn, r.footing.depthIn, units)}, ${formatPipeSize(r.footing.post.size, units)} post (${outcome.posts} posts). Depth set by ${r.footing.controllingCheck === "lateral" ? "lateral embedment" : r.footing.controllingCheck === "uplift" ? "uplift" : "frost and minimum depth"}.`, { bold: true, size: 10 });
+  table({ title: "Footing per post", columns: ["Post", "Hole", "Above grade", "Below grade", "Post length"], rows: r.field.posts.map((p) => [p.id, `${len(r.footing.diameterIn)} × ${len(p.embedmentIn)}`, len(p.heightAboveGradeIn), len(p.embedmentIn), len(p.postLengthIn)]) }, [1, 2, 1.4, 1.4, 1.4]);
   heading("Concrete to order");
-  for (const c of concreteLines(r)) line(c);
-  table({ title: "Checks, governing first", columns: ["Check", "Ratio", "Result"], rows: [...r.footing.checks].sort((x, y) => y.ratio - x.ratio).map((c) => [c.title, ratioText(c.ratio), c.pass ? "passes (≤ 1.00)" : "FAILS (> 1.00)"]) }, [4, 1, 2], { redWhen: (row) => row[2].startsWith("FAILS") });
+  for (const c of concreteLines(r, units)) line(c);
+  table({ title: "Checks, governing first", columns: ["Check", "Ratio", "Result"], rows: [...r.footing.checks].sort((x, y) => y.ratio - x.ratio).map((c) => [checkTitleIn(c, units), ratioWithVerdict(c.ratio), c.pass ? "passes (≤ 1.00)" : "FAILS (> 1.00)"]) }, [4, 1, 2], { redWhen: (row) => row[2].startsWith("FAILS") });
   heading(`Warnings (${r.warnings.length})`);
   if (r.warnings.length === 0) line("None: no method limit is crossed.");
-  for (const w of r.warnings) line(`${w.severity === "warning" ? "Warning" : "Note"}: ${w.message}`);
+  for (const w of r.warnings) line(`${w.severity === "warning" ? "Warning" : "Note"}: ${warningIn(w, units)}`);
 
   // ── Elevation ──────────────────────────────────────────────────────────────────────────────
   doc.addPage();
   heading("Side elevation of the governing post (to scale)", 14);
   line("Looking along the array from its right end; the front (low edge) is on the left. Drawn from the same geometry as the elevation on screen.");
-  drawElevation(doc, r, { x: MARGIN, y: doc.y + 10, width, height: bottom() - doc.y - 20 }, F);
+  drawElevation(doc, r, { x: MARGIN, y: doc.y + 10, width, height: bottom() - doc.y - 20 }, F, units);
 
   // ── Inputs and criteria ────────────────────────────────────────────────────────────────────
   doc.addPage();
   heading("Inputs of this revision", 14);
-  for (const g of inputGroups(ctx.input)) {
+  for (const g of inputGroups(ctx.input, units)) {
     heading(g.title, 11);
     pairs(g.rows, 190);
   }
@@ -159,7 +163,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
       columns: ["Criterion", "Value", "Source", "Checked on"],
       rows: Object.entries(c.values).map(([key, value]) => {
         const src = (c.sources[key] ?? {}) as { source?: string; checkedOn?: string };
-        return [CRITERIA_LABELS[key] ?? key, `${String(value)}${CRITERIA_UNITS[key] ? ` ${CRITERIA_UNITS[key]}` : ""}`, src.source ?? "no source given", src.checkedOn ? calendarDateInWords(src.checkedOn) : "—"];
+        return [CRITERIA_LABELS[key] ?? key, criterionValue(key, value, units), src.source ?? "no source given", src.checkedOn ? calendarDateInWords(src.checkedOn) : "—"];
       }),
     }, [2.6, 1.2, 4, 1.6]);
   } else {
@@ -170,20 +174,23 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   // ── Method ─────────────────────────────────────────────────────────────────────────────────
   heading("Method, with the governing case's numbers", 14);
   line(`${r.references.asce}; ${r.references.ibc}; ${r.references.aisc}. ${r.wind.method}`);
+  // The standard's equations carry constants for US customary units (0.00256 for mph → psf), so the
+  // substituted steps stay in them; every result above and below is in the reader's units.
+  if (units === "metric") line("The equations below are printed in the US customary units their constants are written for (as the standard prints them); every other figure in this report is metric.", { colour: "#475569", size: 8 });
   for (const s of methodSteps(r)) {
     heading(s.title, 10);
     line(`Source: ${s.source}`, { colour: "#475569", size: 8 });
     for (const l of s.lines) line(l, { indent: 10 });
   }
   heading("Sections used");
-  for (const s of r.references.sections) line(`• ${s}`);
+  for (const s of r.references.sections) line(`• ${storedIn(s, units)}`);
 
   // ── Tables ─────────────────────────────────────────────────────────────────────────────────
-  table(windTable(r), [2.4, 1, 1, 1.1, 1.1, 1.2, 1.2, 1.2]);
+  table(windTable(r, units), [2.4, 1, 1, 1.1, 1.1, 1.2, 1.2, 1.2]);
   heading("Governing loads");
-  for (const g of governingLines(r)) line(g);
-  table(loadsTable(r), [0.8, 3, 1, 1.2, 1.2, 1.2]);
-  table(checksTable(r), [2.4, 1, 1, 0.7, 0.7, 0.8, 3], { redWhen: (row) => row[5] === "FAILS" });
+  for (const g of governingLines(r, units)) line(g);
+  table(loadsTable(r, units), [0.8, 3, 1, 1.2, 1.2, 1.2]);
+  table(checksTable(r, units), [2.4, 1, 1, 0.7, 0.7, 0.8, 3], { redWhen: (row) => row[5] === "FAILS" });
 
   // ── Review record and cautions ─────────────────────────────────────────────────────────────
   heading("Review record");
@@ -195,7 +202,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   }
   heading("Cautions");
   line(DEFER_TO_CODE, { bold: true });
-  for (const c of SITE_CAUTIONS) line(`• ${c}`);
+  for (const c of SITE_CAUTION_TEXTS) line(`• ${sayIn(c, units)}`);
 
   // ── Every page: watermark, caution, page n of N, revision id, approval check QR ────────────
   const qr = approved && a.verifyCode ? QRCode.create(verifyUrl(a.verifyCode), { errorCorrectionLevel: "M" }) : null;

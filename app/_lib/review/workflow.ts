@@ -13,7 +13,8 @@ import {
   reviewsOfRevision, setRevisionStatus, type RevisionContext,
 } from "@/db/queries/reviews";
 import { confirmSignature, decideOverrides } from "./approval-signature";
-import { ratioText } from "@/components/review/check-outcome";
+import { formatRatio } from "@/components/format/ratio";
+import { composeMail } from "@/app/_lib/mail-template";
 import { fieldLabel } from "@/components/design/fields";
 import { engineerEligibility, licenceEligibility } from "./eligibility";
 import type { ReviewBody } from "./schemas";
@@ -76,14 +77,17 @@ export async function submitRevision(user: CurrentUser, revision: RevisionContex
     const mailId = await enqueueMail(trx, {
       organisationId: user.organisationId,
       to: engineer.email,
-      subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
-      text: [
-        `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
-        "",
-        `Open the review: ${reviewUrl(revisionId)}`,
-        "",
-        "You can approve it or request changes with comments pinned to the inputs.",
-      ].join("\n"),
+      ...composeMail({
+        subject: `Review requested: ${revision.projectName} — ${revision.designName}, revision ${revision.number}`,
+        heading: "A revision is waiting for your review",
+        project: `${revision.projectName} (${revision.projectState})`,
+        revision: `${revision.designName}, revision ${revision.number}`,
+        paragraphs: [
+          `${user.name} asks you to review revision ${revision.number} of "${revision.designName}" (${revision.projectName}, ${revision.projectState}).`,
+          "You can approve it or request changes with comments pinned to the inputs.",
+        ],
+        action: { label: "Open the review", url: reviewUrl(revisionId) },
+      }),
     });
     return { reviewId, mailId };
   });
@@ -148,15 +152,22 @@ export async function decideRevision(
     return [await enqueueMail(trx, {
       organisationId: revision.organisationId,
       to: designer.email,
-      subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
-      text: [
-        `${user.name} (licence ${eligible.licence.licenceNumber}, ${eligible.licence.state}) ${words} revision ${revision.number} of "${revision.designName}" (${revision.projectName}).`,
-        ...(overrides.length ? ["", "Approved although these checks fail, for the reasons given:", ...overrides.map((o) => `- ${o.title} (ratio ${ratioText(o.ratio)}): ${o.reason}`)] : []),
-        ...(body.comments.length ? ["", "Comments:", ...body.comments.map((c) => `- ${c.fieldPath ? `[${fieldLabel(c.fieldPath)}] ` : ""}${c.body}`)] : []),
-        "",
-        `Open the review: ${reviewUrl(revisionId)}`,
-        ...(to === "approved" ? [`Field spec for the crew: ${env.appUrl}/field/${revisionId}`] : []),
-      ].join("\n"),
+      ...composeMail({
+        subject: `Revision ${revision.number} of ${revision.designName} ${to === "approved" ? "approved" : "needs changes"}`,
+        heading: to === "approved" ? "Revision approved" : "Changes requested",
+        project: revision.projectName,
+        revision: `${revision.designName}, revision ${revision.number}`,
+        paragraphs: [
+          `${user.name} (licence ${eligible.licence.licenceNumber}, ${eligible.licence.state}) ${words} revision ${revision.number} of "${revision.designName}" (${revision.projectName}).`,
+          ...(overrides.length || body.comments.length ? [overrides.length ? "Approved although checks fail, for the reasons given; and the engineer's comments:" : "The engineer's comments:"] : []),
+        ],
+        list: [
+          ...overrides.map((o) => `Fails, accepted: ${o.title} (ratio ${formatRatio(o.ratio)}): ${o.reason}`),
+          ...body.comments.map((c) => `${c.fieldPath ? `[${fieldLabel(c.fieldPath)}] ` : ""}${c.body}`),
+        ],
+        action: { label: "Open the review", url: reviewUrl(revisionId) },
+        links: to === "approved" ? [{ label: "Field spec for the crew", url: `${env.appUrl}/field/${revisionId}` }] : [],
+      }),
     })];
   });
   await deliverSoon(mailIds);

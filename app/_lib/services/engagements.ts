@@ -4,6 +4,7 @@ import { AccessError, ConflictError, ValidationError } from "../errors";
 import { projectFor } from "../designs";
 import { env } from "../env";
 import { deliverSoon, enqueueMail } from "../outbox";
+import { composeMail } from "../mail-template";
 import { hashPassword } from "../password";
 import { requestIp } from "../request-ip";
 import { engagementSchema, engineerSignUpSchema, type EngagementInput } from "../schemas/engagement";
@@ -67,15 +68,17 @@ export async function engageEngineer(user: CurrentUser, projectId: string, body:
         to: input.email,
         kind: "engagement",
         secretLink: true,
-        subject: `Review engagement: ${project.name} for ${user.organisationName}`,
-        text: [
-          `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
-          ...(input.message ? ["", input.message] : []),
-          "",
-          `Accept or decline here: ${engagementUrl(token)}`,
-          "",
-          "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
-        ].join("\n"),
+        ...composeMail({
+          subject: `Review engagement: ${project.name} for ${user.organisationName}`,
+          heading: "You are asked to review a project",
+          project: `${project.name} (${project.state})`,
+          paragraphs: [
+            `${user.name} of ${user.organisationName} asks you to be the reviewing engineer for the project "${project.name}" (${project.state}).`,
+            ...(input.message ? [input.message] : []),
+          ],
+          action: { label: "Accept or decline", url: engagementUrl(token) },
+          footnote: "No Pierwise account yet? The link lets you sign up, as yourself or as your engineering firm. Accepting needs your engineer's licence on file.",
+        }),
       });
       return { id, mailId };
     }));
@@ -113,8 +116,13 @@ export async function revokeEngagement(user: CurrentUser, projectId: string, eng
       organisationId: project.organisationId,
       to: engagement.email,
       kind: "engagement-ended",
-      subject: `Engagement ended: ${project.name}`,
-      text: `${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`,
+      ...composeMail({
+        subject: `Engagement ended: ${project.name}`,
+        heading: "Your engagement has ended",
+        project: project.name,
+        paragraphs: [`${user.name} of ${user.organisationName} ended your engagement on "${project.name}". You no longer have access to it; decisions you made stay on record.`],
+        action: { label: "Open Pierwise", url: `${env.appUrl}/queue` },
+      }),
     });
     return { withdrawn, mailId };
   });
@@ -174,13 +182,16 @@ export async function answerEngagement(user: CurrentUser, engagementId: string, 
       organisationId: e.organisationId,
       to: to_.email,
       kind: `engagement-${to}`,
-      subject: `${user.name} ${to} the engagement on ${e.projectName}`,
-      text: [
-        `${user.name} (${user.organisationName}) ${to} your engagement on "${e.projectName}".`,
-        ...(to === "accepted" ? ["You can now submit revisions of this project to them for review."] : []),
-        "",
-        `Project: ${env.appUrl}/projects/${e.projectId}`,
-      ].join("\n"),
+      ...composeMail({
+        subject: `${user.name} ${to} the engagement on ${e.projectName}`,
+        heading: `Engagement ${to}`,
+        project: e.projectName,
+        paragraphs: [
+          `${user.name} (${user.organisationName}) ${to} your engagement on "${e.projectName}".`,
+          ...(to === "accepted" ? ["You can now submit revisions of this project to them for review."] : []),
+        ],
+        action: { label: "Open the project", url: `${env.appUrl}/projects/${e.projectId}` },
+      }),
     })];
   });
   await deliverSoon(mailIds);

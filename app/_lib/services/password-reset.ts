@@ -7,6 +7,7 @@ import { resetProblem } from "../account-messages";
 import { env } from "../env";
 import { ConflictError } from "../errors";
 import { deliverSoon, enqueueMail } from "../outbox";
+import { composeMail } from "../mail-template";
 import { hashPassword } from "../password";
 import { requestIp } from "../request-ip";
 import { newPasswordSchema, resetRequestSchema } from "../schemas/account";
@@ -31,15 +32,16 @@ async function issueResetLink(email: string, ip: string): Promise<void> {
       to: user.email,
       kind: "password-reset",
       secretLink: true,
-      subject: "Set a new Pierwise password",
-      text: [
-        `Someone (we hope you) asked to set a new password for the Pierwise account ${user.email}.`,
-        "",
-        "Open this link to choose a new password (it works once, for 1 hour):",
-        `${env.appUrl}/reset/${token}`,
-        "",
-        "If you did not ask, ignore this e-mail: your password stays as it is.",
-      ].join("\n"),
+      ...composeMail({
+        subject: "Set a new Pierwise password",
+        heading: "Set a new password",
+        paragraphs: [
+          `Someone (we hope you) asked to set a new password for the Pierwise account ${user.email}.`,
+          "The link works once, for 1 hour.",
+        ],
+        action: { label: "Choose a new password", url: `${env.appUrl}/reset/${token}` },
+        footnote: "If you did not ask, ignore this e-mail: your password stays as it is.",
+      }),
     });
   });
   if (mailId) await deliverSoon([mailId]);

@@ -8,6 +8,7 @@ import { signUpProblem } from "../account-messages";
 import { env } from "../env";
 import { ConflictError } from "../errors";
 import { deliverSoon, enqueueMail } from "../outbox";
+import { composeMail } from "../mail-template";
 import { hashPassword } from "../password";
 import { requestIp } from "../request-ip";
 import { signUpSchema } from "../schemas/account";
@@ -46,15 +47,18 @@ export async function requestSignUp(body: Body): Promise<{ email: string; messag
         organisationId: home?.organisationId ?? null,
         to: existing.email,
         kind: "sign-up-existing",
-        subject: "Someone tried to create a Pierwise account with your address",
-        text: [
-          `Someone (perhaps you) filled in the Pierwise sign-up form with ${existing.email}, which already has an account.`,
-          "No new account or organisation was made, and your account is unchanged.",
-          "",
-          `If it was you: sign in at ${env.appUrl}/login, or choose a new password at ${env.appUrl}/reset.`,
-          "To join another company's organisation, ask its admin to invite this address.",
-          "If it was not you, you can ignore this e-mail.",
-        ].join("\n"),
+        ...composeMail({
+          subject: "Someone tried to create a Pierwise account with your address",
+          heading: "Your address already has an account",
+          paragraphs: [
+            `Someone (perhaps you) filled in the Pierwise sign-up form with ${existing.email}, which already has an account.`,
+            "No new account or organisation was made, and your account is unchanged.",
+            "To join another company's organisation, ask its admin to invite this address.",
+          ],
+          action: { label: "Sign in", url: `${env.appUrl}/login` },
+          links: [{ label: "Or choose a new password", url: `${env.appUrl}/reset` }],
+          footnote: "If it was not you, you can ignore this e-mail.",
+        }),
       })];
     }
     const { token, tokenHash } = newToken();
@@ -68,15 +72,16 @@ export async function requestSignUp(body: Body): Promise<{ email: string; messag
       to: input.email,
       kind: "sign-up",
       secretLink: true,
-      subject: "Finish creating your organisation on Pierwise",
-      text: [
-        `Someone (we hope you) asked to create the organisation "${input.organisationName}" on Pierwise with this address.`,
-        "",
-        "Open this link to finish (it works once, for 24 hours):",
-        `${env.appUrl}/signup/${token}`,
-        "",
-        "If you did not ask, ignore this e-mail: nothing is created unless the link is opened and confirmed.",
-      ].join("\n"),
+      ...composeMail({
+        subject: "Finish creating your organisation on Pierwise",
+        heading: `Finish creating ${input.organisationName}`,
+        paragraphs: [
+          `Someone (we hope you) asked to create the organisation "${input.organisationName}" on Pierwise with this address.`,
+          "The link works once, for 24 hours.",
+        ],
+        action: { label: "Finish sign-up", url: `${env.appUrl}/signup/${token}` },
+        footnote: "If you did not ask, ignore this e-mail: nothing is created unless the link is opened and confirmed.",
+      }),
     })];
   });
   await deliverSoon(mailIds);

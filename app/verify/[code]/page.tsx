@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import { allowRequest } from "@/app/_lib/rate-limit";
 import { requestIp } from "@/app/_lib/request-ip";
 import { dateInWords } from "@/components/ui/dates";
-import { quarterIn } from "@/app/_lib/review/field-format";
+import { tapeInches } from "@/components/format/tape";
+import type { UnitSystem } from "@/components/format/quantity";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { cityOf, VERIFY_STATUS_WORDS, verifyStatus } from "@/app/_lib/review/verify";
 import { Brand } from "@/components/ui/brand";
 import { approvalByCode, type VerifiedApproval } from "@/db/queries/verify";
@@ -21,6 +23,7 @@ const LIMIT = { requests: 30, windowMs: 60_000 };
  */
 export default async function VerifyPage({ params }: { params: Promise<{ code: string }> }) {
   const { code } = await params;
+  const units = await readerUnits();
   const allowed = allowRequest(`verify:${await requestIp()}`, LIMIT.requests, LIMIT.windowMs);
   const approval = allowed ? await approvalByCode(code) : undefined;
   return (
@@ -33,7 +36,7 @@ export default async function VerifyPage({ params }: { params: Promise<{ code: s
         <Panel tone="neutral" title="Too many checks from this address">
           <p>Wait a minute and open the link again.</p>
         </Panel>
-      ) : approval ? <Found a={approval} /> : (
+      ) : approval ? <Found a={approval} units={units} /> : (
         <Panel tone="bad" title="No such approval">
           <p>This link or code does not match any approved revision. Do not build from a spec that carries it: ask the contractor for the current field spec.</p>
         </Panel>
@@ -47,7 +50,7 @@ export default async function VerifyPage({ params }: { params: Promise<{ code: s
   );
 }
 
-function Found({ a }: { a: VerifiedApproval }) {
+function Found({ a, units }: { a: VerifiedApproval; units: UnitSystem }) {
   const status = verifyStatus(a);
   const words = VERIFY_STATUS_WORDS[status];
   const city = cityOf(a.facts.projectAddress, a.facts.projectState);
@@ -64,7 +67,7 @@ function Found({ a }: { a: VerifiedApproval }) {
           <dt className="text-slate-600">Licence</dt><dd>{a.licenceNumber}, {a.licenceState}</dd>
           <dt className="text-slate-600">Approved on</dt><dd>{dateInWords(a.decidedAt, a.timeZone)}</dd>
           <dt className="text-slate-600">Site</dt><dd>{city ? `${city}, ` : ""}{a.facts.projectState}</dd>
-          <dt className="text-slate-600">Footings</dt><dd className="font-semibold">{a.posts} posts, each hole {quarterIn(a.diameterIn)} across × {quarterIn(a.depthIn)} deep</dd>
+          <dt className="text-slate-600">Footings</dt><dd className="font-semibold">{a.posts} posts, each hole {tapeInches(a.diameterIn, units)} across × {tapeInches(a.depthIn, units)} deep</dd>
         </dl>
       </section>
       <section aria-label="Contractor" className="rounded-lg border border-slate-200 bg-white p-4 text-sm">

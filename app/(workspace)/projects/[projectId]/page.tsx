@@ -12,6 +12,7 @@ import { projectEngagements } from "@/db/queries/engagements";
 import { organisationName } from "@/db/queries/organisations";
 import { EngagementsPanel } from "./_components/engagements-panel";
 import { DesignsTable } from "./_components/designs-table";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { FilesTable } from "./_components/files-table";
 import { NewDesignForm } from "./_components/new-design-form";
 import { UploadForm } from "./_components/upload-form";
@@ -66,7 +67,7 @@ export default async function ProjectPage({ params, searchParams }: Props) {
 
       <section aria-labelledby="designs-heading" className="mt-8 space-y-3">
         <h2 id="designs-heading" className="text-lg font-semibold">Designs</h2>
-        <DesignsTable page={designs} projectId={project.id} timeZone={user.timeZone} />
+        <DesignsTable page={designs} projectId={project.id} timeZone={user.timeZone} units={await readerUnits()} />
         {canWrite ? <NewDesignForm projectId={project.id} hasCard={Boolean(card)} /> : null}
       </section>
 

@@ -4,6 +4,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
 import type { EngineerQueueRow } from "@/db/queries/engineer-queue";
+import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
 
 const STATE = {
   waiting: { label: "Waiting for you", tone: "bg-amber-100 text-amber-900" },
@@ -15,7 +16,7 @@ const day = (iso: string) => new Date(iso).toLocaleDateString("en-US", { year: "
 
 const col = createColumnHelper<EngineerQueueRow>();
 // Few, wide columns so a phone shows what matters (which revision, for whom, its state) without scrolling sideways.
-const columns = [
+const columnsFor = (units: UnitSystem) => [
   col.accessor("designName", {
     header: "Revision",
     cell: (c) => {
@@ -44,7 +45,7 @@ const columns = [
       const r = c.row.original;
       return (
         <span className="block min-w-36">
-          {r.diameterIn === null || r.depthIn === null ? <span className="text-slate-500">No footing result</span> : <span className="tabular-nums">{r.posts ?? "?"} × ⌀{r.diameterIn} in, {r.depthIn} in deep</span>}
+          {r.diameterIn === null || r.depthIn === null ? <span className="text-slate-500">No footing result</span> : <span className="tabular-nums">{r.posts ?? "?"} holes, {formatFootingSize(r.diameterIn, r.depthIn, units)}</span>}
           <span className={`block text-xs ${r.failing.length ? "text-red-800" : "text-slate-500"}`}>{r.failing.length ? `Fails: ${r.failing.join("; ")}` : "All checks pass"}</span>
         </span>
       );
@@ -59,6 +60,6 @@ const columns = [
   }),
 ];
 
-export function QueueTable({ page }: { page: ServerPage<EngineerQueueRow> }) {
-  return <DataTable page={page} columns={columns} caption="Review queue" filterLabel="Filter by project, design or contractor" emptyText="Nothing has been submitted to you yet." />;
+export function QueueTable({ page, units = "imperial" }: { page: ServerPage<EngineerQueueRow>; units?: UnitSystem }) {
+  return <DataTable page={page} columns={columnsFor(units)} caption="Review queue" filterLabel="Filter by project, design or contractor" emptyText="Nothing has been submitted to you yet." />;
 }

@@ -2,7 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { forPage } from "@/app/_lib/page-access";
-import { checkOutcome } from "@/components/review/check-outcome";
+import { checkOutcome, outcomeIn, overridesIn } from "@/components/review/check-outcome";
+import { readerUnits } from "@/app/_lib/unit-preference";
+import { formatQuantity } from "@/components/format/quantity";
+import { warningIn } from "@/components/format/quantity-text";
+import { UnitsSwitch } from "@/components/format/units-switch";
 import { dateInWords } from "@/components/ui/dates";
 import { engineerEligibility, licenceEligibility } from "@/app/_lib/review/eligibility";
 import { checksTable, concreteLines, criteriaTable, fmt, governingLines, loadsTable, methodLines, windTable } from "@/app/_lib/review/report-model";
@@ -72,10 +76,12 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
   for (const rv of standing.reviews) for (const c of rv.comments) if (c.fieldPath) pinned.set(c.fieldPath, [...(pinned.get(c.fieldPath) ?? []), c.body]);
   const inputs = Object.entries(flatInputs(ctx.input));
   const offCard = criteriaDifferences(ctx.input, ctx.criteria?.values);
-  const groups = reviewInputGroups(ctx.input, { changed: changes.map((c) => c.path), offCard, pinned });
+  const units = await readerUnits();
+  const groups = reviewInputGroups(ctx.input, { changed: changes.map((c) => c.path), offCard, pinned }, units);
   const offCardRows = groups.flatMap((g) => g.rows.filter((row) => row.cardValue !== null));
-  const outcome = checkOutcome(r);
-  const criteria = criteriaTable(ctx);
+  // Check titles in the reader's units for every panel below (the hole-size check names a length).
+  const outcome = outcomeIn(checkOutcome(r), units);
+  const criteria = criteriaTable(ctx, units);
 
   // Reading order, top to bottom on a phone: summary, what differs from the card, what changed,
   // the checks, the inputs; the long tables after, folded with their row counts; the decision last
@@ -85,14 +91,15 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
       <div className="space-y-2">
         <p className="text-sm text-slate-600">{outsider ? <Link href="/queue" className="underline">Review queue</Link> : <Link href="/reviews" className="underline">Reviews</Link>} · {ctx.projectName} ({ctx.projectState})</p>
         <h1 className="text-2xl font-semibold">{ctx.designName}: revision {ctx.number}</h1>
-        <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []}
+        <CheckSummary outcome={outcome} overrides={standing.approval?.overrides ?? []} units={units}
           lead={outcome.failing.length && ctx.status !== "approved" ? "A failing check can still be submitted and approved, but only with the engineer's written reason for each one." : undefined} />
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <span>Status:</span> <StatusBadge status={standing.status} onHold={standing.holds.length > 0} />
           <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {dateInWords(ctx.createdAt, ctx.timeZone)}</span>
           {ctx.factsPinned ? <span className="text-slate-600">· project facts as approved</span> : null}
         </div>
-        <div className="no-print flex flex-wrap gap-2 text-sm">
+        <div className="no-print flex flex-wrap items-center gap-2 text-sm">
+          <UnitsSwitch units={units} />
           {canDecide ? <a href="#decide-h" className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800 lg:hidden">Go to your decision</a> : null}
           {canSubmit ? <a href="#submit-h" className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800 lg:hidden">Go to submit</a> : null}
           <a href={`/api/revisions/${ctx.id}/report.pdf`} className="rounded-md bg-accent-700 px-3 py-2 font-medium text-white hover:bg-accent-800">Download calculation report (PDF)</a>
@@ -110,7 +117,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-6">
-          <FootingPerPost posts={r.field.posts} diameterIn={r.footing.diameterIn} />
+          <FootingPerPost posts={r.field.posts} diameterIn={r.footing.diameterIn} units={units} />
 
           <section aria-labelledby="card-diff-h" className={`rounded-lg border p-4 ${offCardRows.length ? "border-orange-300 bg-orange-50" : "border-slate-200 bg-white"}`}>
             <h2 id="card-diff-h" className="text-base font-semibold">
@@ -130,7 +137,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             <h2 id="diff-h" className="text-base font-semibold">{previous ? `Changes since revision ${previous.number}${isEngineer ? ", the last one you reviewed" : ", the last one reviewed"}` : "Changes since the last review"}</h2>
             {!previous ? <p className="mt-1 text-sm text-slate-600">No earlier revision of this design was reviewed{isEngineer ? " by you" : ""}: every input below is new to the review.</p> : changes.length === 0 ? <p className="mt-1 text-sm text-slate-600">No input changed.</p> : (
               <ul className="mt-2 space-y-1 text-sm">
-                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span>: {inputValueText(c.path, c.from)} → <strong>{inputValueText(c.path, c.to)}</strong></li>)}
+                {changes.map((c) => <li key={c.path}><span className="font-medium">{c.label}</span>: {inputValueText(c.path, c.from, units)} → <strong>{inputValueText(c.path, c.to, units)}</strong></li>)}
               </ul>
             )}
             {previousComments.length ? (
@@ -141,10 +148,10 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
             ) : null}
           </section>
 
-          <ChecksList id="checks-h" table={checksTable(r)} />
+          <ChecksList id="checks-h" table={checksTable(r, units)} />
           <section aria-labelledby="gov-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="gov-h" className="text-base font-semibold">Governing loads</h2>
-            <ul className="mt-2 space-y-1 text-sm">{governingLines(r).map((g) => <li key={g}>{g}</li>)}</ul>
+            <ul className="mt-2 space-y-1 text-sm">{governingLines(r, units).map((g) => <li key={g}>{g}</li>)}</ul>
           </section>
 
           <section aria-labelledby="inputs-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -175,24 +182,24 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           <section aria-labelledby="warn-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="warn-h" className="text-base font-semibold">Warnings ({r.warnings.length})</h2>
             {r.warnings.length === 0 ? <p className="mt-1 text-sm text-slate-600">None: no method limit is crossed.</p> : (
-              <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {w.message}</li>)}</ul>
+              <ul className="mt-2 space-y-1 text-sm">{r.warnings.map((w) => <li key={w.code + w.message}><strong className="uppercase">{w.severity}:</strong> {warningIn(w, units)}</li>)}</ul>
             )}
           </section>
           <PlainTable id="criteria-h" table={criteria} numericFrom={99} collapsed noun="criterion" plural="criteria" />
-          <PlainTable id="wind-h" table={windTable(r)} collapsed noun="wind case" />
-          <PlainTable id="loads-h" table={loadsTable(r)} numericFrom={2} collapsed />
+          <PlainTable id="wind-h" table={windTable(r, units)} collapsed noun="wind case" />
+          <PlainTable id="loads-h" table={loadsTable(r, units)} numericFrom={2} collapsed />
           <section aria-labelledby="conc-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="conc-h" className="text-base font-semibold">Concrete and field dimensions</h2>
             <ul className="mt-2 space-y-1 text-sm">
-              {concreteLines(r).map((c) => <li key={c}>{c}</li>)}
-              <li>Lowest-edge clearance {fmt(r.geometry.minClearanceIn)} in at {fmt(r.geometry.tiltDeg)}° tilt; post lengths under “Footing at each post”</li>
+              {concreteLines(r, units).map((c) => <li key={c}>{c}</li>)}
+              <li>Lowest-edge clearance {formatQuantity(r.geometry.minClearanceIn, "in", units)} at {fmt(r.geometry.tiltDeg)}° tilt; post lengths under “Footing at each post”</li>
             </ul>
           </section>
           <section aria-labelledby="method-h" className="rounded-lg border border-slate-200 bg-white p-4">
             <h2 id="method-h" className="text-base font-semibold">Method, editions and sections</h2>
             <details className="mt-1">
-              <summary className="cursor-pointer text-sm font-medium text-accent-800 hover:underline">Show the method ({rowCount(methodLines(r).length, "line")})</summary>
-              <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r).map((m) => <li key={m}>{m}</li>)}</ul>
+              <summary className="cursor-pointer text-sm font-medium text-accent-800 hover:underline">Show the method ({rowCount(methodLines(r, units).length, "line")})</summary>
+              <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{methodLines(r, units).map((m) => <li key={m}>{m}</li>)}</ul>
             </details>
           </section>
           <section aria-labelledby="files-h" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -211,7 +218,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               </ul>
             )}
           </section>
-          <ReviewPreview input={ctx.input as DesignInput} result={r} />
+          <ReviewPreview input={ctx.input as DesignInput} result={r} units={units} />
         </div>
 
         <aside className="min-w-0 space-y-4">
@@ -220,8 +227,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
               licenceProblem={eligibility && !eligibility.ok ? eligibility.message : null}
               licenceNote={eligibility?.ok ? `Recorded with your name, ${eligibility.licence.state} licence ${eligibility.licence.licenceNumber} (valid through ${eligibility.licence.expiresOn}), the time and the project facts as they stand now. Approval pins this revision: it can never be changed.` : "Only an engineer licensed in the project's state can decide."} />
           ) : null}
-          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} /> : null}
-          <ReviewHistory standing={standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
+          {!outsider && hasRole(user, "designer") ? <SubmitPanel open={canSubmit} resubmit={ctx.status === "changes_requested"} revisionId={ctx.id} engineers={choices} outcome={outcome} units={units} /> : null}
+          <ReviewHistory standing={standing.approval ? { ...standing, approval: { ...standing.approval, overrides: overridesIn(standing.approval.overrides, units) } } : standing} revisionId={ctx.id} timeZone={ctx.timeZone} />
         </aside>
       </div>
     </div>

@@ -6,10 +6,11 @@ import { DataTable, type ServerPage } from "@/components/design/data-table";
 import { StatusBadge } from "@/components/review/status-badge";
 import type { DesignRow } from "@/db/queries/designs";
 import { shortDateTime } from "@/components/ui/dates";
+import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
 
 const col = createColumnHelper<DesignRow>();
 
-export function DesignsTable({ page, projectId, timeZone }: { page: ServerPage<DesignRow>; projectId: string; timeZone?: string }) {
+export function DesignsTable({ page, projectId, timeZone, units = "imperial" }: { page: ServerPage<DesignRow>; projectId: string; timeZone?: string; units?: UnitSystem }) {
   const columns = [
     col.accessor("name", { header: "Design", cell: (c) => <Link href={`/projects/${projectId}/designs/${c.row.original.id}`} className="font-medium text-accent-800 hover:underline">{c.getValue()}</Link> }),
     col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
@@ -28,7 +29,7 @@ export function DesignsTable({ page, projectId, timeZone }: { page: ServerPage<D
       cell: (c) => {
         const r = c.row.original;
         if (r.depthIn === null) return "—";
-        return <span className="whitespace-nowrap tabular-nums">{r.diameterIn} in × {(r.depthIn / 12).toFixed(1)} ft {r.pass ? <span className="text-slate-500">(passes)</span> : <span className="font-medium text-red-700">(fails a check)</span>}</span>;
+        return <span className="whitespace-nowrap tabular-nums">{formatFootingSize(r.diameterIn ?? 0, r.depthIn, units)} {r.pass ? <span className="text-slate-500">(passes)</span> : <span className="font-medium text-red-700">(fails a check)</span>}</span>;
       },
     }),
     col.accessor("updatedAt", { header: "Last saved", cell: (c) => <time dateTime={c.getValue()} className="whitespace-nowrap text-slate-600">{shortDateTime(c.getValue(), timeZone)}</time> }),

@@ -4,6 +4,7 @@ import { useActionState } from "react";
 import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { ActionState } from "@/components/ui/action-state";
 import { ratioText, type CheckOutcome } from "@/components/review/check-outcome";
+import { formatFootingSize, type UnitSystem } from "@/components/format/quantity";
 import { submitForReviewAction } from "../actions";
 
 export interface EngineerChoice {
@@ -18,13 +19,13 @@ export interface EngineerChoice {
  * The designer chooses a reviewing engineer and submits this revision. Stays mounted after a
  * successful submit (when the page no longer offers the form) so its confirmation stays in view.
  */
-export function SubmitPanel({ revisionId, engineers, open, resubmit, outcome }: { revisionId: string; engineers: EngineerChoice[]; open: boolean; resubmit: boolean; outcome: CheckOutcome }) {
+export function SubmitPanel({ revisionId, engineers, open, resubmit, outcome, units = "imperial" }: { revisionId: string; engineers: EngineerChoice[]; open: boolean; resubmit: boolean; outcome: CheckOutcome; units?: UnitSystem }) {
   const [state, action] = useActionState<ActionState, FormData>(submitForReviewAction, {});
   if (!open) return state.ok ? <p role="status" className="no-print rounded-lg border-2 border-accent-600 bg-accent-50 p-4 text-sm font-medium">{state.message}</p> : null;
   return (
     <section aria-labelledby="submit-h" className="no-print rounded-lg border-2 border-accent-600 bg-white p-4">
       <h2 id="submit-h" className="text-base font-semibold">{resubmit ? "Resubmit for review" : "Submit for review"}</h2>
-      <p className="mt-1 text-sm">Footing {outcome.diameterIn} in × {outcome.depthIn} in deep{outcome.governing ? `; governing check ${outcome.governing.title}, ratio ${ratioText(outcome.governing.ratio)}` : ""}.</p>
+      <p className="mt-1 text-sm">Footing {formatFootingSize(outcome.diameterIn, outcome.depthIn, units)}{outcome.governing ? `; governing check ${outcome.governing.title}, ratio ${ratioText(outcome.governing.ratio)}` : ""}.</p>
       {outcome.failing.length ? (
         <div role="note" className="mt-2 rounded-md border-2 border-red-600 bg-red-50 p-2 text-sm text-red-950">
           <p className="font-semibold">This revision fails {outcome.failing.map((f) => `${f.title} (ratio ${ratioText(f.ratio)})`).join(", ")}.</p>

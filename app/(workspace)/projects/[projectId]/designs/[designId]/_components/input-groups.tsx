@@ -4,16 +4,19 @@ import { useFormContext, useWatch } from "react-hook-form";
 import { formatPipeSize, type UnitSystem } from "@/components/format/quantity";
 import { PIPE_SIZES } from "@/engine/footing/pipe";
 import { CheckField, ListField, NumberField, SelectField } from "./editor-fields";
+import { usePinnedUnder } from "./pinned-comments";
 
 /** The three input groups of the editor: Site, Array, Posts and footings. */
 function Group({ id, title, lead, children, more }: { id: string; title: string; lead: string; children: React.ReactNode; more?: React.ReactNode }) {
+  // An engineer's comment may sit on a field under "More … settings": open them so it is seen.
+  const pinnedHere = usePinnedUnder(`${id.replace("group-", "")}.`);
   return (
     <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4">
       <h2 id={id} className="text-base font-semibold text-slate-900">{title}</h2>
       <p className="mb-3 text-xs text-slate-500">{lead}</p>
       <div className="grid gap-4 sm:grid-cols-2">{children}</div>
       {more ? (
-        <details className="mt-4 rounded-md border border-slate-100 bg-slate-50 px-3 py-2">
+        <details open={pinnedHere || undefined} className="mt-4 rounded-md border border-slate-100 bg-slate-50 px-3 py-2">
           <summary className="cursor-pointer text-sm font-medium text-slate-700">More {title.toLowerCase()} settings</summary>
           <div className="mt-3 grid gap-4 pb-2 sm:grid-cols-2">{more}</div>
         </details>

@@ -16,6 +16,13 @@ export function PinnedCommentsProvider({ comments, children }: { comments: Map<s
   return <PinnedContext.Provider value={comments}>{children}</PinnedContext.Provider>;
 }
 
+/** Whether any comment is pinned to a field under this prefix ("site."): its group's "More … settings" then starts open. */
+export function usePinnedUnder(prefix: string): boolean {
+  const comments = useContext(PinnedContext);
+  for (const path of comments.keys()) if (path.startsWith(prefix)) return true;
+  return false;
+}
+
 export function pinnedByPath(comments: PinnedCommentView[]): Map<string, PinnedCommentView[]> {
   const map = new Map<string, PinnedCommentView[]>();
   for (const c of comments) map.set(c.path, [...(map.get(c.path) ?? []), c]);

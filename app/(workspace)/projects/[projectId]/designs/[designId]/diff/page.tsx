@@ -5,8 +5,10 @@ import { designFor, projectFor, revisionFor } from "@/app/_lib/designs";
 import { forPage } from "@/app/_lib/page-access";
 import { inputChanges, resultChanges, type DiffRow, type DiffValue } from "@/components/design/revision-diff";
 import { inputValueText } from "@/components/design/input-values";
-import { formatQuantity, type UnitSystem } from "@/components/design/units";
-import { ratioText } from "@/components/review/check-outcome";
+import { formatBags, formatQuantity, type UnitSystem } from "@/components/format/quantity";
+import { RatioText } from "@/components/format/ratio-text";
+import { parseUnitSystem } from "@/components/format/unit-preference";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { Caution } from "@/components/ui/caution";
 import { revisionNumbers } from "@/db/queries/revisions";
 import { shortDateTime } from "@/components/ui/dates";
@@ -18,8 +20,9 @@ function show(v: DiffValue, row: DiffRow, units: UnitSystem, inputs: boolean): R
   if (inputs) return inputValueText(row.path, v, units);
   if (v === null || v === undefined || v === "") return "—";
   if (typeof v === "boolean") return v ? "Yes" : "No";
-  if (typeof v === "number" && row.ratio) return v > 1 ? <span className="font-semibold text-red-700">{ratioText(v)} — fails</span> : ratioText(v);
-  if (typeof v === "number" && row.unit) return formatQuantity(v, row.unit, units, { decimals: row.unit === "ft" ? 2 : undefined });
+  if (typeof v === "number" && row.ratio) return <RatioText ratio={v} />;
+  if (typeof v === "number" && row.bagLb) return formatBags(v, row.bagLb, units);
+  if (typeof v === "number" && row.unit) return formatQuantity(v, row.unit, units);
   return String(v);
 }
 
@@ -50,7 +53,8 @@ export default async function DiffPage({ params, searchParams }: Props) {
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
   const path = `/projects/${projectId}/designs/${designId}`;
-  const units: UnitSystem = one("units") === "metric" ? "metric" : "imperial";
+  // ?units= (the form below) wins; else the reader's preference, as on every other page.
+  const units: UnitSystem = one("units") ? parseUnitSystem(one("units")) : await readerUnits();
   const { project, design, numbers, from, to, timeZone } = await forPage(async () => {
     const u = await requireUser();
     const p = await projectFor(u, projectId, { engaged: true });
@@ -68,7 +72,7 @@ export default async function DiffPage({ params, searchParams }: Props) {
   }, path + "/diff");
 
   const inputs = inputChanges(from.input, to.input);
-  const results = resultChanges(from.result, to.result);
+  const results = resultChanges(from.result, to.result, units);
   const select = (name: string, value: string) => (
     <select name={name} defaultValue={value} className="rounded-md border border-slate-300 bg-white px-2 py-1.5 text-sm">
       {numbers.map((n) => <option key={n.id} value={n.id}>Revision {n.number}</option>)}

@@ -1,0 +1,57 @@
+/**
+ * The reviews page and the field list show a page, not everything (issue 19): the engineer's
+ * waiting list shows its first rows with the total and a link to the full queue; the field list
+ * shows 50 specs with an "Older specs" link to the next 50. Screenshots at 390 px and 1280 px go to
+ * /tmp/shots with SCREENSHOTS=1.
+ */
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/client";
+import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
+import { FIELD_SPEC_LIMIT, REVIEW_LIST_LIMIT } from "@/db/queries/review-queue";
+import { browserSuite } from "../support/browser-suite";
+import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
+import { ENGINEER, INSTALLER, freshApproved, freshInReview, userId } from "../support/review-fixtures";
+
+const suite = browserSuite();
+
+describe("lists that show a page", () => {
+  it("reviews page: the first waiting reviews, how many wait in all, and the way to the full queue", async () => {
+    const engineer = await userId(ENGINEER);
+    const waiting = async () => Number((await db("reviews").where({ organisation_id: DEMO_ORG_ID, engineer_id: engineer }).whereNull("decision").count({ n: "*" }))[0].n);
+    while ((await waiting()) <= REVIEW_LIST_LIMIT) await freshInReview();
+    const total = await waiting();
+    for (const viewport of [PHONE, DESKTOP]) {
+      const context = suite.keep(await signedInContext(suite.browser, ENGINEER, viewport));
+      const page = await context.newPage();
+      await page.goto(`${baseUrl()}/reviews`);
+      const heading = page.getByRole("heading", { name: /Waiting for your review/ });
+      await expect(heading.innerText()).resolves.toBe(`Waiting for your review (first ${REVIEW_LIST_LIMIT} of ${total.toLocaleString("en-US")})`);
+      const section = page.locator("section", { has: heading });
+      expect(await section.locator("li").count()).toBe(REVIEW_LIST_LIMIT);
+      await section.getByRole("link", { name: `All ${total.toLocaleString("en-US")} waiting, in your review queue` }).click();
+      await page.waitForURL(/\/queue\?state=waiting/);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+      await page.goBack();
+      await shot(page, `reviews-page-${viewport.width}`);
+    }
+  });
+
+  it("field list: 50 specs a page and an older-specs link to the next ones", async () => {
+    const current = async () => Number((await db("designs").where({ organisation_id: DEMO_ORG_ID }).whereNotNull("approved_revision_id").count({ n: "*" }))[0].n);
+    while ((await current()) <= FIELD_SPEC_LIMIT) await freshApproved();
+    for (const viewport of [PHONE, DESKTOP]) {
+      const context = suite.keep(await signedInContext(suite.browser, INSTALLER, viewport));
+      const page = await context.newPage();
+      await page.goto(`${baseUrl()}/field`);
+      const firstPage = await page.locator("main ul > li a").evaluateAll((links) => links.map((a) => a.getAttribute("href")));
+      expect(firstPage).toHaveLength(FIELD_SPEC_LIMIT);
+      await shot(page, `field-list-${viewport.width}`);
+      await page.getByRole("link", { name: "Older specs" }).click();
+      await page.waitForURL(/\/field\?older=/);
+      const secondPage = await page.locator("main ul > li a").evaluateAll((links) => links.map((a) => a.getAttribute("href")));
+      expect(secondPage.length).toBeGreaterThan(0);
+      expect(secondPage.filter((href) => firstPage.includes(href))).toEqual([]);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+    }
+  });
+});
