@@ -57,6 +57,38 @@ function changedFraction(a: number[], b: number[]): number {
   return changed / (a.length / 4);
 }
 
+/**
+ * The scene's labels (page text over the canvas) that are shown, with their boxes on screen. Waits
+ * until the first frame has placed at least one.
+ */
+async function shownLabels(preview: Locator): Promise<{ id: string; text: string; box: { x: number; y: number; width: number; height: number } }[]> {
+  const read = () => preview.locator("[data-preview-label]").evaluateAll((els) => els
+    .filter((el) => getComputedStyle(el).visibility === "visible")
+    .map((el) => {
+      const r = el.getBoundingClientRect();
+      return { id: el.getAttribute("data-preview-label") ?? "", text: el.textContent ?? "", box: { x: r.x, y: r.y, width: r.width, height: r.height } };
+    }));
+  return eventually(read, (ls) => ls.length > 0);
+}
+
+/** No two shown labels share any area, and each lies inside the canvas. */
+async function expectLabelsApart(preview: Locator): Promise<string[]> {
+  const labels = await shownLabels(preview);
+  const canvas = (await preview.locator("canvas").boundingBox())!;
+  for (const l of labels) {
+    expect(l.box.x).toBeGreaterThanOrEqual(canvas.x - 0.5);
+    expect(l.box.y).toBeGreaterThanOrEqual(canvas.y - 0.5);
+    expect(l.box.x + l.box.width).toBeLessThanOrEqual(canvas.x + canvas.width + 0.5);
+    expect(l.box.y + l.box.height).toBeLessThanOrEqual(canvas.y + canvas.height + 0.5);
+  }
+  for (let i = 0; i < labels.length; i++) for (let j = i + 1; j < labels.length; j++) {
+    const a = labels[i].box, b = labels[j].box;
+    const overlap = a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+    expect(overlap, `"${labels[i].text}" overlaps "${labels[j].text}"`).toBe(false);
+  }
+  return labels.map((l) => l.id);
+}
+
 /** The preview alone, for reading by eye (SCREENSHOTS=1). */
 async function elementShot(element: Locator, name: string): Promise<void> {
   if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `/tmp/shots/${name}.png` });
@@ -94,6 +126,8 @@ describe("3D preview in the design editor (software WebGL)", () => {
     expect(drawnFraction(before)).toBeGreaterThan(0.03);
     await shot(page, "preview-editor-desktop");
     await elementShot(preview, "preview-element-desktop");
+    // The embedment (what the crew digs) is always labelled; no two labels overlap.
+    expect(await expectLabelsApart(preview)).toContain("embedment");
 
     const tilt = page.getByLabel("Tilt", { exact: true });
     expect(await tilt.inputValue()).toBe("30");
@@ -108,6 +142,7 @@ describe("3D preview in the design editor (software WebGL)", () => {
     const side = await eventually(() => canvasPixels(page, canvas), (px) => changedFraction(after, px) > 0.01);
     expect(changedFraction(after, side)).toBeGreaterThan(0.01);
     await shot(page, "preview-editor-side");
+    await expectLabelsApart(preview);
     await page.context().close();
   });
 
@@ -120,6 +155,12 @@ describe("3D preview in the design editor (software WebGL)", () => {
     await shot(page, "preview-editor-phone");
     await elementShot(preview, "preview-element-phone");
     expect(drawnFraction(px)).toBeGreaterThan(0.03);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
+    for (const view of ["Front", "Side", "Top"]) {
+      await preview.getByRole("button", { name: view }).click();
+      await page.waitForTimeout(600);
+      await expectLabelsApart(preview);
+    }
     // The preview is as wide as the column the host gives it, never wider.
     const own = (await preview.boundingBox())!;
     const host = (await preview.locator("xpath=..").boundingBox())!;
