@@ -22,8 +22,6 @@ export function proxy(request: NextRequest) {
   });
   const forward = new Headers(request.headers);
   forward.set("x-nonce", nonce);
-  // The workspace layout's early access check (app/_lib/page-gate.ts) reads the page's path here.
-  forward.set("x-pierwise-page-path", request.nextUrl.pathname);
   if (headers["content-security-policy"]) forward.set("content-security-policy", headers["content-security-policy"]);
   const response = NextResponse.next({ request: { headers: forward } });
   for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);

@@ -1,6 +1,5 @@
 import Link from "next/link";
 import { currentUser } from "@/app/_lib/auth";
-import { gateWorkspacePage } from "@/app/_lib/page-gate";
 import { signOutAction } from "@/app/(auth)/login/actions";
 import { Brand } from "@/components/ui/brand";
 import { SkipLink } from "@/components/ui/skip-link";
@@ -9,11 +8,13 @@ import { homeFor, menuFor } from "@/components/ui/role-navigation";
 
 /**
  * The signed-in shell. It shows who is signed in; every page below checks access itself next to its
- * query (layouts do not re-render on navigation). gateWorkspacePage only repeats a page's first
- * check before the loading shell streams, so a missing or forbidden page answers 404 or 403, not 200.
+ * query (layouts do not re-render on navigation). There is no loading.tsx in the workspace on
+ * purpose: a loading boundary streams the answer before the page runs, so a missing or forbidden page
+ * would answer 200 instead of 404/403, and without JavaScript the page would stay hidden behind the
+ * loading shell (forms must work without scripts). Pages answer in tens of milliseconds, so the whole
+ * page is rendered before anything is sent.
  */
 export default async function WorkspaceLayout({ children }: { children: React.ReactNode }) {
-  await gateWorkspacePage();
   const user = await currentUser();
   return (
     <div className="min-h-screen">

@@ -1,8 +1,8 @@
 /**
  * Finding 11 of the hardening issue: a page that is not there, or not the visitor's, answers with its
  * real HTTP status (RFC 9110 §15.5.5 404 Not Found, §15.5.4 403 Forbidden), not 200 with a "not
- * found" text. The workspace's loading shell streams its answer early, so these statuses come from
- * the layout's early check (app/_lib/page-gate.ts) before the stream starts.
+ * found" text. The workspace has no loading boundary, so a page is rendered whole before anything is
+ * sent: its own access check decides the status, and the page works without JavaScript.
  */
 import crypto from "node:crypto";
 import type { Browser, BrowserContext } from "playwright-core";
@@ -60,5 +60,27 @@ describe("page-level status codes", () => {
     const page = await statusOf(null, `/projects/${DEMO_PROJECT_ID}`);
     expect(new URL(page.url).pathname).toBe("/login");
     expect(new URL(page.url).searchParams.get("next")).toBe(`/projects/${DEMO_PROJECT_ID}`);
+  });
+});
+
+describe("pages without JavaScript", () => {
+  it("shows a signed-in page whole and keeps a refused form's values, with the error beside the field", async () => {
+    const context = await browser.newContext({ baseURL: baseUrl(), javaScriptEnabled: false });
+    contexts.push(context);
+    expect((await context.request.post("/api/session", { data: { email: DESIGNER, password: "pierwise-demo" } })).ok()).toBe(true);
+    const page = await context.newPage();
+    await page.goto("/projects/new");
+    // A loading boundary would leave only its placeholder visible here: the page stays hidden until a script reveals it.
+    expect(await page.getByRole("heading", { level: 1 }).isVisible()).toBe(true);
+    const name = `No-script site ${crypto.randomUUID().slice(0, 6)}`;
+    await page.getByLabel("Project name").fill(name);
+    await page.getByLabel("State").selectOption("WY");
+    await page.getByLabel("Longitude").fill("-500");
+    await page.getByRole("button", { name: /create/i }).click();
+    await page.waitForLoadState("load");
+    expect(await page.locator("#field-longitude-error").isVisible()).toBe(true);
+    expect(await page.getByLabel("Project name").inputValue()).toBe(name);
+    expect(await page.getByLabel("State").inputValue()).toBe("WY");
+    expect(await db("projects").where({ name }).first()).toBeUndefined();
   });
 });
