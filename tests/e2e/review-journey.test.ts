@@ -140,7 +140,9 @@ describe("review journey", () => {
     await both(installer, `${baseUrl()}/field/${rev1}`, "field-not-approved");
     await installer.setViewportSize(PHONE);
     await installer.goto(`${baseUrl()}/field/${rev1}`);
-    expect(await installer.getByRole("heading", { name: "Not approved for construction" }).isVisible()).toBe(true);
+    const refusal = installer.getByRole("heading", { name: "Not approved for construction" });
+    await refusal.waitFor();
+    expect(await refusal.isVisible()).toBe(true);
   });
 
   it("puts the design on hold from a shallow as-built hole, on every screen, until the engineer clears it", async () => {
