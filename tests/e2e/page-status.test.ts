@@ -28,6 +28,9 @@ async function statusOf(email: string | null, path: string): Promise<{ status: n
   contexts.push(context);
   const page = await context.newPage();
   const response = await page.goto(path);
+  // A 404/403 page's body is sometimes empty for a moment right after "load" (the client renders it
+  // again); read it once it has text.
+  await page.waitForFunction(() => document.body.innerText.trim().length > 0);
   const text = await page.locator("body").innerText();
   return { status: response!.status(), text, url: page.url() };
 }
