@@ -4,6 +4,7 @@
  * changed since the revision the comment was made on ("resolved in this revision"). Pure: the page
  * builds these on the server from the stored comments; no engine run.
  */
+import type { PinnedCommentRow } from "@/db/queries/review-comments";
 import type { UnitSystem } from "@/components/format/quantity";
 import { shortDateTime } from "@/components/ui/dates";
 import { fieldLabel } from "./fields";
@@ -11,15 +12,8 @@ import { inputValueText } from "./input-values";
 import { sameValue } from "./pinned-change";
 import { flatten, type DiffValue } from "./revision-diff";
 
-export interface PinnedCommentSource {
-  id: string;
-  fieldPath: string;
-  body: string;
-  createdAt: Date;
-  authorName: string;
-  revisionNumber: number;
-  revisionInput: unknown;
-}
+/** The stored comment as the query reads it (db/queries/review-comments.ts). */
+export type PinnedCommentSource = PinnedCommentRow;
 
 export interface PinnedCommentView {
   id: string;

@@ -5,7 +5,6 @@
  * delivers it later. Their links are single-use secrets: once a row is done (delivered or given
  * up) its links are replaced by a marker, so email_outbox keeps no usable token.
  */
-import { createServer } from "node:net";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { acceptInvitationAction } from "@/app/(auth)/invite/[token]/actions";
 import { requestPasswordResetAction } from "@/app/(auth)/reset/actions";
@@ -19,22 +18,10 @@ import { freshMember, uniqueEmail } from "../support/accounts";
 import { firstLink, mailTo } from "../support/mailbox";
 import { actAs, jsonRequest, outcomeOf, params, resetRequest } from "../support/next-context";
 import { freshProject } from "../support/project-fixtures";
+import { mailServerBack, mailServerDown } from "../support/mail-server";
 
-const realSmtpPort = process.env.SMTP_PORT;
-function mailServerBack(): void {
-  if (realSmtpPort === undefined) delete process.env.SMTP_PORT;
-  else process.env.SMTP_PORT = realSmtpPort;
-}
 beforeEach(() => resetRequest());
 afterEach(mailServerBack);
-
-/** Points the mail transport at a port nothing listens on: the mail server is "down". */
-async function mailServerDown(): Promise<void> {
-  const server = createServer();
-  const port = await new Promise<number>((resolve) => server.listen(0, "127.0.0.1", () => resolve((server.address() as { port: number }).port)));
-  await new Promise((resolve) => server.close(resolve));
-  process.env.SMTP_PORT = String(port);
-}
 
 /** The outbox row of one kind to one address, once its first attempt has been made (it may run in the background). */
 async function attempted(to: string, kind: string) {

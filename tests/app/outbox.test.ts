@@ -4,7 +4,6 @@
  * delivers it once the server answers again; a mail that keeps failing is given up with a
  * "mail-failed" event in the audit log.
  */
-import { createServer } from "node:net";
 import { afterEach, describe, expect, it } from "vitest";
 import { recordAsBuiltAction } from "@/app/(workspace)/field/[revisionId]/actions";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
@@ -17,21 +16,9 @@ import { openHolds } from "@/db/queries/holds";
 import { mailTo } from "../support/mailbox";
 import { actAs, jsonRequest, outcomeOf, params } from "../support/next-context";
 import { DEMO_PASSWORD, DESIGNER, ENGINEER, INSTALLER, makeDesign, userId } from "../support/review-fixtures";
+import { mailServerBack, mailServerDown } from "../support/mail-server";
 
-const realSmtpPort = process.env.SMTP_PORT;
-function mailServerBack(): void {
-  if (realSmtpPort === undefined) delete process.env.SMTP_PORT;
-  else process.env.SMTP_PORT = realSmtpPort;
-}
 afterEach(mailServerBack);
-
-/** Points the mail transport at a port nothing listens on: the mail server is "down". */
-async function mailServerDown(): Promise<void> {
-  const server = createServer();
-  const port = await new Promise<number>((resolve) => server.listen(0, "127.0.0.1", () => resolve((server.address() as { port: number }).port)));
-  await new Promise((resolve) => server.close(resolve));
-  process.env.SMTP_PORT = String(port);
-}
 
 const outboxRow = (to: string, subject: string) => db("email_outbox").where({ to }).whereLike("subject", `%${subject}%`).first();
 
