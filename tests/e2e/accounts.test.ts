@@ -55,6 +55,21 @@ describe("accounts in the browser", () => {
     await phone.context().close();
   });
 
+  it("checks the invitation form in the browser once it is focused (the check loads then, not with the page)", async () => {
+    const admin = await (await signedInContext(browser, "admin@demo.pierwise.test")).newPage();
+    await admin.goto("/admin/members");
+    await admin.getByLabel("E-mail").focus();
+    await admin.waitForLoadState("networkidle");
+    const posts: string[] = [];
+    admin.on("request", (r) => { if (r.method() === "POST") posts.push(r.url()); });
+    await admin.getByLabel("E-mail").fill("not an address");
+    await admin.getByRole("button", { name: "Send invitation" }).click();
+    await admin.locator("#field-email-error").waitFor();
+    // Refused beside the field before anything went to the server.
+    expect(posts).toEqual([]);
+    await admin.context().close();
+  });
+
   it("invites by e-mail; the link from the mail lets the new person join; a second use is refused", async () => {
     const admin = await (await signedInContext(browser, "admin@demo.pierwise.test")).newPage();
     await admin.goto("/admin/members");
