@@ -50,9 +50,9 @@ export function previewFigures(g: PreviewGeometry, units: UnitSystem): PreviewFi
   };
 }
 
-// The scene's short wind label lives with the scene's other labels (no unit formatting, so the
+// The scene's short wind label has a module of its own (wind-label.ts: no unit formatting, so the
 // scene's chunk carries none of the formatter); kept importable from here for the 2D elevation.
-export { windSceneLabel } from "./scene-annotations";
+export { windSceneLabel } from "./wind-label";
 
 /** Where the north marker comes from; revisions saved before the azimuth input were drawn facing south. */
 export function northCaption(azimuthDeg: number | undefined): string {

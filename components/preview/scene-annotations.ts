@@ -93,11 +93,6 @@ export function northTip(g: PreviewGeometry, radiusFt: number): Vec3 {
   return [n.at[0] + n.north[0] * size * 3, n.at[1], n.at[2] + n.north[2] * size * 3];
 }
 
-/** A short wind label for the scene: "Wind onto the face, case A". */
-export function windSceneLabel(wind: NonNullable<PreviewGeometry["wind"]>): string {
-  return `Wind ${wind.windDirectionDeg === 180 ? "onto the face" : "from behind"}, case ${wind.loadCase}`;
-}
-
 export interface SceneLabel {
   id: "embedment" | "clearance" | "wind" | "north";
   text: string;

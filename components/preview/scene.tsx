@@ -3,9 +3,10 @@ import { memo, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
 import { sceneBounds, type ViewName } from "./camera-framing";
 import type { PreviewFigures } from "./preview-labels";
-import { sceneLabels, windSceneLabel } from "./scene-annotations";
+import { sceneLabels } from "./scene-annotations";
 import { LabelLayer, placeLabelElements, type LabelSizes } from "./scene-labels";
 import { SceneView } from "./scene-view";
+import { windSceneLabel } from "./wind-label";
 import { softwareRendering } from "./webgl-support";
 
 export interface SceneProps {
