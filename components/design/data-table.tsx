@@ -10,10 +10,10 @@ import type { ListPage } from "@/db/queries/list-page";
  * (`?q=&sort=&dir=&page=&pageSize=`, optionally prefixed so two tables can share a page) and each
  * change navigates, so the server query returns only the rows shown.
  *
- * Columns are written with the table library's column helper (`createColumnHelper`, a few bytes),
- * but the table itself is drawn here: with sorting, filtering and paging all on the server, the
- * library's table engine had nothing left to do, and it was 13 kB (gzip) of every list page's and
- * the design editor's first load. Sorting follows the library's rules: a click on the sorted
+ * Columns are written with the table library's column helper (its few lines copied in
+ * column-helper.ts, with the library's types), but the table itself is drawn here: with sorting,
+ * filtering and paging all on the server, the library's table engine had nothing left to do, and
+ * it was 13 kB (gzip) of every list page's and the design editor's first load. Sorting follows the library's rules: a click on the sorted
  * column flips it; on another column, text sorts A→Z first and anything else largest first.
  */
 /** One server-side page of rows, exactly as the list queries return it. */
