@@ -112,7 +112,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </div>
-      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} units={units} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">

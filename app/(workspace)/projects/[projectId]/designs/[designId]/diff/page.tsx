@@ -9,6 +9,7 @@ import { formatBags, formatQuantity, type UnitSystem } from "@/components/format
 import { RatioText } from "@/components/format/ratio-text";
 import { parseUnitSystem } from "@/components/format/unit-preference";
 import { readerUnits } from "@/app/_lib/unit-preference";
+import { revisionNoteIn } from "@/components/format/revision-note";
 import { Caution } from "@/components/ui/caution";
 import { revisionNumbers } from "@/db/queries/revisions";
 import { shortDateTime } from "@/components/ui/dates";
@@ -95,8 +96,8 @@ export default async function DiffPage({ params, searchParams }: Props) {
         <button type="submit" className="rounded-md border border-slate-300 bg-white px-3 py-1.5 hover:bg-slate-50">Compare</button>
       </form>
       <div className="mt-3 grid gap-2 text-sm text-slate-600 sm:grid-cols-2">
-        <p><strong>Rev {from.number}</strong> · {from.authorName} · {shortDateTime(from.createdAt, timeZone)}{from.note ? ` — “${from.note}”` : ""}</p>
-        <p><strong>Rev {to.number}</strong> · {to.authorName} · {shortDateTime(to.createdAt, timeZone)}{to.note ? ` — “${to.note}”` : ""}</p>
+        <p><strong>Rev {from.number}</strong> · {from.authorName} · {shortDateTime(from.createdAt, timeZone)}{from.note ? ` — “${revisionNoteIn(from.note, units)}”` : ""}</p>
+        <p><strong>Rev {to.number}</strong> · {to.authorName} · {shortDateTime(to.createdAt, timeZone)}{to.note ? ` — “${revisionNoteIn(to.note, units)}”` : ""}</p>
       </div>
 
       <section aria-labelledby="inputs-heading" className="mt-6 space-y-2">
