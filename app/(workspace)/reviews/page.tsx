@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { displayStatus } from "@/app/_lib/review/standing";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
@@ -13,7 +13,7 @@ import { countWaitingFor, recentlyDecided, submittedBy, waitingFor, type QueueRo
 
 export const metadata: Metadata = { title: "Reviews" };
 
-export default async function ReviewsPage() {
+async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
   const units = await readerUnits();
   const engineer = hasRole(user, "engineer");
@@ -84,3 +84,6 @@ function QueueTable({ title, rows, total, more, empty, show, timeZone }: {
     </section>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(ReviewsPage);

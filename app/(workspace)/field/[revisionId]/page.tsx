@@ -3,7 +3,7 @@ import Link from "next/link";
 import QRCode from "qrcode";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { bearing } from "@/app/_lib/review/field-format";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { formatBags, formatPipeSize, formatQuantity } from "@/components/format/quantity";
@@ -36,7 +36,7 @@ import { PrintButton } from "./_components/print-button";
 export const metadata: Metadata = { title: "Field spec" };
 
 
-export default async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
+async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const { revisionId } = await params;
   const { user, ctx } = await forPage(async () => {
     const user = await requireUser();
@@ -241,3 +241,6 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
     </div>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(FieldSpecPage);

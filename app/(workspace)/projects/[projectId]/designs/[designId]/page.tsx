@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AccessError, hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { StatusBadge } from "@/components/review/status-badge";
 import { DesignReviewBar } from "@/components/review/design-review-bar";
@@ -22,7 +22,7 @@ type Props = { params: Promise<{ projectId: string; designId: string }>; searchP
  * The design editor on its latest revision. `?revision=<id>` opens an older revision read-only;
  * `?from=<id>` starts editing from an older revision's values on top of the latest.
  */
-export default async function DesignPage({ params, searchParams }: Props) {
+async function DesignPage({ params, searchParams }: Props) {
   const { projectId, designId } = await params;
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
@@ -108,3 +108,6 @@ export default async function DesignPage({ params, searchParams }: Props) {
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(DesignPage);

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AccessError, requireUser } from "@/app/_lib/auth";
 import { designFor, projectFor, revisionFor } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { inputChanges, resultChanges, type DiffRow, type DiffValue } from "@/components/design/revision-diff";
 import { inputValueText } from "@/components/design/input-values";
 import { formatBags, formatQuantity, type UnitSystem } from "@/components/format/quantity";
@@ -49,7 +49,7 @@ function DiffTable({ rows, units, caption, empty, inputs = false }: { rows: Diff
 }
 
 /** What changed between two revisions, in inputs and in results (`?from=&to=`, defaults: the two latest). */
-export default async function DiffPage({ params, searchParams }: Props) {
+async function DiffPage({ params, searchParams }: Props) {
   const { projectId, designId } = await params;
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
@@ -115,3 +115,6 @@ export default async function DiffPage({ params, searchParams }: Props) {
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(DiffPage);
