@@ -79,7 +79,7 @@ export interface GrowOptions {
    * For the benchmark's own throwaway cluster, as the superuser: triggers (foreign-key checks
    * included) are off while the rows go in, and the secondary indexes of the grown tables are
    * dropped first and rebuilt after (what a bulk load does); the columns the triggers keep
-   * (projects.design_count, designs.approved_revision_id / approved_at) are then set in one
+   * (projects.design_count, designs.approved_revision_id / approved_at, projects.criteria_jurisdiction) are then set in one
    * statement each. The rows are the same as without it. `extra` connections take a share of the
    * units each, so the load uses every core.
    */
@@ -203,8 +203,8 @@ export async function grow(client: pg.Client, from: number, to: number, options:
   notes.push(...[...took].map(([table, ms]) => `${table} ${(ms / 1000).toFixed(1)} s`));
   if (options.bulk) {
     for (const c of clients) await c.query("RESET session_replication_role");
-    // What the triggers would have kept: design counts, and each design's newest approved revision
-    // (approved when its approval was decided).
+    // What the triggers would have kept: design counts, each design's newest approved revision
+    // (approved when its approval was decided), each project's card jurisdiction.
     const t = Date.now();
     await client.query(`UPDATE projects p SET design_count = n.n FROM (SELECT project_id, count(*)::int AS n FROM designs GROUP BY project_id) n
       WHERE n.project_id = p.id AND p.design_count <> n.n`);
@@ -213,6 +213,11 @@ export async function grow(client: pg.Client, from: number, to: number, options:
         FROM revisions r LEFT JOIN reviews v ON v.revision_id = r.id AND v.decision = 'approve'
         WHERE r.status = 'approved' ORDER BY r.design_id, r.number DESC, v.decided_at DESC) a
       WHERE a.design_id = d.id AND d.approved_revision_id IS DISTINCT FROM a.id`);
+    // Each project's copy of its card's jurisdiction, once 20261204100100 ran (the new rows only).
+    if ((await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'projects' AND column_name = 'criteria_jurisdiction'")).rowCount === 1) {
+      await client.query(`UPDATE projects p SET criteria_jurisdiction = c.jurisdiction FROM criteria_cards c
+        WHERE c.id = p.criteria_card_id AND p.criteria_jurisdiction IS DISTINCT FROM c.jurisdiction`);
+    }
     notes.push(`trigger-kept columns ${seconds(t)}`);
     const ti = Date.now();
     await Promise.all(clients.map(async (c, i) => {
