@@ -30,9 +30,9 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
-/** A review's state from the review row alone; `held` is the CTE of the approved revisions of designs with an open hold. */
+/** A review's state from the review row alone; `held` is the CTE of the designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
-  when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
+  when v.decision = 'approve' and v.design_id in (select id from held) then 'on_hold'
   else 'decided' end`;
 
 /**
@@ -55,11 +55,11 @@ export interface QueueFilter {
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
  *   their designs (a few rows);
- * - `held`: the approved revisions of designs with an open hold, in the organisations they review
- *   for, through the approved-revisions index (open holds are few). Only an approval can be on
- *   hold, and an approval is recorded with its revision's status in one transaction
- *   (app/_lib/review/workflow.ts; 20261203100000 refuses the status without the record), after
- *   which the pin keeps it;
+ * - `held`: the designs with an open hold, in the organisations they review for (open holds are
+ *   few; read from design_holds alone). An approval is on hold when its design is held: it is
+ *   recorded with its revision's status in one transaction (app/_lib/review/workflow.ts;
+ *   20261203100000 refuses the status without the record), after which the pin keeps both, so an
+ *   approval's revision is always an approved revision of that design;
  * - a review is visible when it is in the organisation they are signed in to, or its design
  *   (copied onto the review, 20261204100000) is one of `engaged_designs`: both told from the index;
  * - the default order (state, no search) reads each state in its order straight from the
@@ -93,7 +93,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     ), engaged_designs AS MATERIALIZED (
       SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
-      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
+      SELECT DISTINCT h.design_id AS id FROM design_holds h
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
         ${waitingOnly ? "AND false" : ""}
     )`;
@@ -113,19 +113,19 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     }
     if (!filter.state || filter.state === "on_hold") {
       branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
-        WHERE ${visible} AND v.decision = 'approve' AND v.revision_id IN (SELECT id FROM held))`);
+        WHERE ${visible} AND v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))`);
       bindings.push(...visibleBindings);
     }
     if (!filter.state || filter.state === "decided") {
       branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v
-        WHERE ${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.revision_id IN (SELECT id FROM held))
+        WHERE ${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))
         ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
       bindings.push(...visibleBindings);
     }
     const total = { waiting: "waiting", on_hold: "on_hold", decided: "everything - waiting - on_hold" }[filter.state ?? "waiting"];
     body = `, counts AS (
       SELECT count(*) FILTER (WHERE v.decision IS NULL) AS waiting,
-             count(*) FILTER (WHERE v.decision = 'approve' AND v.revision_id IN (SELECT id FROM held)) AS on_hold,
+             count(*) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)) AS on_hold,
              count(*) AS everything
       FROM reviews v WHERE ${visible}
     ), picked AS (
@@ -197,18 +197,19 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
 /**
  * The contractors that appear in this engineer's queue, for the filter: their own organisation when
  * a review of it was submitted to them, and each organisation that engaged them on a project with
- * a review submitted to them. Each is one index probe, not a pass over the queue.
+ * a review submitted to them. One early-stopping probe per organisation (the engineer's reviews in
+ * it, until one is on a project they are engaged on), not one per engagement.
  */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
   const { rows } = await db.raw(
     `SELECT o.id, o.name FROM organisations o
      WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
-        OR o.id IN (SELECT g.organisation_id FROM engagements g
-                    WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND EXISTS (
-                      SELECT 1 FROM designs d JOIN revisions r ON r.design_id = d.id JOIN reviews v ON v.revision_id = r.id
-                      WHERE d.project_id = g.project_id AND v.engineer_id = ?))
+        OR (o.id IN (SELECT g.organisation_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted')
+            AND EXISTS (SELECT 1 FROM reviews v JOIN designs d ON d.id = v.design_id
+                        JOIN engagements g ON g.project_id = d.project_id AND g.engineer_user_id = ? AND g.status = 'accepted'
+                        WHERE v.engineer_id = ? AND v.organisation_id = o.id))
      ORDER BY o.name`,
-    [user.organisationId, user.userId, user.userId, user.userId],
+    [user.organisationId, user.userId, user.userId, user.userId, user.userId],
   );
   return rows;
 }

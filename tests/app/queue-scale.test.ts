@@ -10,8 +10,9 @@
 import crypto from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
-import { engineerQueue, type QueueState } from "@/db/queries/engineer-queue";
+import { DEMO_ORG_ID, OTHER_ORG_ID } from "@/db/seeds/01_demo_accounts";
+import { OTHER_PROJECT_ID } from "@/db/seeds/02_demo_projects";
+import { engineerQueue, queueContractors, type QueueState } from "@/db/queries/engineer-queue";
 import { lastReviewed, lastReviewedBy } from "@/db/queries/review-queue";
 import { pinnedCommentsOfLatestDecision } from "@/db/queries/review-comments";
 import { twoPostDesignInput } from "@/engine";
@@ -92,6 +93,10 @@ describe("the engineer's queue in its default order", () => {
     // A page past the end still says how many there are.
     const past = await engineerQueue(me, { page: 9, pageSize: 5 });
     expect([past.rows, past.total]).toEqual([[], 12]);
+    // The contractor filter lists the demo organisation (reviews on engaged projects), not another
+    // contractor that engaged them but submitted nothing, nor their own firm (nothing of it submitted).
+    await engage(OTHER_PROJECT_ID, engineer, "accepted", OTHER_ORG_ID);
+    expect((await queueContractors(me)).map((c) => c.id)).toEqual([DEMO_ORG_ID]);
     // The rows carry their details, joined for the page only.
     const first = (await engineerQueue(me, { pageSize: 1 })).rows[0];
     expect(first).toMatchObject({ state: "waiting", contractor: "Example Ground-Mount Co. (demo)", decision: null, decidedAt: null });
