@@ -49,15 +49,17 @@ export function isQuantity(part: unknown): part is Quantity {
 
 /** Tagged template: strings and plain numbers stay words, quantities stay quantities, nested texts are spliced in. */
 export function says(strings: TemplateStringsArray, ...values: (TextPart | number | QuantityText)[]): QuantityText {
+  // Plain loops (no callback, no spread): a sentence is built per design on the sizing path.
   const out: QuantityText = [];
-  strings.forEach((s, i) => {
+  for (let i = 0; i < strings.length; i++) {
+    const s = strings[i];
     if (s) out.push(s);
     if (i < values.length) {
       const v = values[i];
-      if (Array.isArray(v)) out.push(...v);
+      if (Array.isArray(v)) for (let j = 0; j < v.length; j++) out.push(v[j]);
       else out.push(typeof v === "number" ? String(v) : v);
     }
-  });
+  }
   return out;
 }
 
@@ -99,7 +101,12 @@ export function groupThousands(digits: string): string {
 
 /** The sentence in US customary words: "Hole at least 4 in larger than the post". */
 export function imperialText(text: QuantityText): string {
-  return text.map((p) => (typeof p === "string" ? p : isPipeName(p) ? imperialPipe(p.pipe) : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`)).join("");
+  let out = "";
+  for (let i = 0; i < text.length; i++) {
+    const p = text[i];
+    out += typeof p === "string" ? p : isPipeName(p) ? imperialPipe(p.pipe) : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`;
+  }
+  return out;
 }
 
 /** "3-1/2" → "3 1/2 in standard pipe" (ASME B36.10 nominal size, as the trade says it). */
