@@ -141,7 +141,15 @@ export class SceneView {
       this.state = "ready";
       this.invalidate();
     };
-    this.renderer.compileAsync(this.scene, this.camera).then(go, go);
+    // Where the browser compiles in parallel, wait for every program without blocking the page.
+    // Elsewhere (software renderers) the compile starts now, in the GPU process, and the first
+    // frame follows on the next animation frame (what compileAsync would do there, less its
+    // console warning about the missing extension).
+    if (this.renderer.extensions.has("KHR_parallel_shader_compile")) this.renderer.compileAsync(this.scene, this.camera).then(go, go);
+    else {
+      this.renderer.compile(this.scene, this.camera);
+      go();
+    }
   }
 
   private resize(width: number, height: number): void {
