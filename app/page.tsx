@@ -1,7 +1,9 @@
 import Link from "next/link";
 import { Brand } from "@/components/ui/brand";
 import { Caution } from "@/components/ui/caution";
-import { SITE_CAUTIONS } from "@/engine/notices";
+import { SITE_CAUTION_TEXTS } from "@/engine/notices";
+import { sayIn } from "@/components/format/quantity-text";
+import { readerUnits } from "@/app/_lib/unit-preference";
 import { SkipLink } from "@/components/ui/skip-link";
 
 const ROLES = [
@@ -19,7 +21,9 @@ const ROLES = [
   },
 ];
 
-export default function LandingPage() {
+export default async function LandingPage() {
+  // The site cautions name concrete strengths: in the units this browser chose (the units cookie).
+  const units = await readerUnits();
   return (
     <div className="mx-auto flex min-h-screen max-w-5xl flex-col px-5 py-6">
       <SkipLink />
@@ -62,8 +66,8 @@ export default function LandingPage() {
         <section className="mt-8 max-w-3xl" aria-labelledby="site-safety">
           <h2 id="site-safety" className="font-semibold">On site, always</h2>
           <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-slate-600">
-            {SITE_CAUTIONS.map((c) => (
-              <li key={c}>{c}</li>
+            {SITE_CAUTION_TEXTS.map((c, i) => (
+              <li key={i}>{sayIn(c, units)}</li>
             ))}
           </ul>
         </section>

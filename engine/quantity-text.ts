@@ -17,12 +17,30 @@ export interface Quantity {
   decimals?: number;
 }
 
-export type TextPart = string | Quantity;
+/** A standard pipe named by its trade size ("3-1/2"): a name, not a length, so metric words it by its DN. */
+export interface PipeName {
+  pipe: string;
+}
+
+export type TextPart = string | Quantity | PipeName;
 /** A sentence as parts: words and quantities in reading order. */
 export type QuantityText = TextPart[];
 
 export function qty(value: number, unit: QuantityUnit, decimals?: number): Quantity {
   return decimals === undefined ? { value, unit } : { value, unit, decimals };
+}
+
+export function pipeName(size: string): PipeName {
+  return { pipe: size };
+}
+
+export function isPipeName(part: unknown): part is PipeName {
+  return typeof part === "object" && part !== null && typeof (part as PipeName).pipe === "string";
+}
+
+/** "12 in, 16 in, 24 in": each value its own quantity, so every one is converted. */
+export function qtyList(values: readonly number[], unit: QuantityUnit): QuantityText {
+  return values.flatMap((v, i) => (i === 0 ? [qty(v, unit)] : [", ", qty(v, unit)]));
 }
 
 export function isQuantity(part: unknown): part is Quantity {
@@ -59,5 +77,47 @@ function customaryNumber(q: Quantity): string {
 
 /** The sentence in US customary words: "Hole at least 4 in larger than the post". */
 export function imperialText(text: QuantityText): string {
-  return text.map((p) => (typeof p === "string" ? p : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`)).join("");
+  return text.map((p) => (typeof p === "string" ? p : isPipeName(p) ? imperialPipe(p.pipe) : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`)).join("");
+}
+
+/** "3-1/2" → "3 1/2 in standard pipe" (ASME B36.10 nominal size, as the trade says it). */
+export function imperialPipe(size: string): string {
+  return `${size.replace("-", " ")} in standard pipe`;
+}
+
+// Unit words longest first, so "psf per ft" is not read as "psf" and "lb-ft" not as "lb".
+const UNIT_BY_WORD = new Map<string, QuantityUnit>(
+  (Object.entries(IMPERIAL_WORDS) as [QuantityUnit, string][])
+    .filter(([unit]) => unit !== "lbMass") // "lb" reads as a force; a mass in a stored sentence is not expected
+    .map(([unit, word]) => [word, unit]),
+);
+const UNIT_WORDS = [...UNIT_BY_WORD.keys()].sort((a, b) => b.length - a.length).map((w) => w.replace(/[.*+?^${}()|[\]\\-]/g, "\\$&"));
+// A pipe's trade name, or a customary number (as `customaryNumber` writes it) then a space and a unit word.
+// Not a digit inside a word or an id ("P2"), and not a unit word that runs on into a longer word ("inch").
+const STORED_QUANTITY = new RegExp(
+  `(\\d+(?: 1/2)?) in standard pipe|(?<![\\w.,/−-])(−?\\d{1,3}(?:,\\d{3})+|−?\\d+)(?:\\.(\\d+))? (${UNIT_WORDS.join("|")})(?![\\w-])`,
+  "g",
+);
+
+/**
+ * The inverse of `imperialText` for a sentence the app composed and saved as customary words (a
+ * hold's reason, a new design's starting note): its numbers with units back as quantities, so a
+ * screen words it in the reader's units. Only for text the app wrote: a person's own words are
+ * shown as typed. `quantitiesIn(imperialText(t))` words the same as `t` (tests/engine/quantity-text).
+ * @example quantitiesIn("Hole P2 is 40 in deep") // ["Hole P2 is ", { value: 40, unit: "in" }, " deep"]
+ */
+export function quantitiesIn(stored: string): QuantityText {
+  const out: QuantityText = [];
+  let last = 0;
+  for (const m of stored.matchAll(STORED_QUANTITY)) {
+    if (m.index > last) out.push(stored.slice(last, m.index));
+    if (m[1] !== undefined) out.push(pipeName(m[1].replace(" ", "-")));
+    else {
+      const value = Number(`${m[2].replace(/,/g, "").replace("−", "-")}${m[3] === undefined ? "" : `.${m[3]}`}`);
+      out.push(m[3] === undefined ? qty(value, UNIT_BY_WORD.get(m[4])!) : qty(value, UNIT_BY_WORD.get(m[4])!, m[3].length));
+    }
+    last = m.index + m[0].length;
+  }
+  if (last < stored.length) out.push(stored.slice(last));
+  return out;
 }

@@ -1,7 +1,7 @@
-import { imperialText, isQuantity, type QuantityText, type QuantityUnit } from "@/engine/quantity-text";
+import { imperialText, isPipeName, isQuantity, quantitiesIn, type QuantityText, type QuantityUnit } from "@/engine/quantity-text";
 import { CHECK_TITLE_TEXTS } from "@/engine/footing/checks";
 import { knownText } from "@/engine/known-texts";
-import { formatQuantity, unitLabel, type UnitKind, type UnitSystem } from "./quantity";
+import { formatPipeSize, formatQuantity, unitLabel, type UnitKind, type UnitSystem } from "./quantity";
 
 /** The display kind of each unit an engine sentence carries. */
 const KIND: Record<QuantityUnit, UnitKind> = {
@@ -18,7 +18,15 @@ export function sayIn(text: QuantityText | string | undefined | null, system: Un
   if (text === undefined || text === null) return "";
   if (typeof text === "string") return text;
   if (system === "imperial") return imperialText(text);
-  return text.map((p) => (typeof p === "string" ? p : isQuantity(p) ? formatQuantity(p.value, KIND[p.unit] ?? "none", system) : String(p))).join("");
+  return text.map((p) => (typeof p === "string" ? p : isPipeName(p) ? formatPipeSize(p.pipe, system) : isQuantity(p) ? formatQuantity(p.value, KIND[p.unit] ?? "none", system) : String(p))).join("");
+}
+
+/**
+ * A sentence the app composed and saved in customary words (a hold's reason, a new design's starting
+ * note) in the reader's units. Never for a person's own words: those are shown as typed.
+ */
+export function composedIn(stored: string, system: UnitSystem): string {
+  return system === "imperial" ? stored : sayIn(quantitiesIn(stored), system);
 }
 
 /** A warning in the reader's units: its structured text, or (results saved before it) its message. */

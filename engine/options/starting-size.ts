@@ -19,6 +19,7 @@ import { PIPE_SIZES, type PipeSize } from "../footing/pipe";
 import type { DesignInput } from "../schema";
 import { sizeParsedDesign } from "../size-design";
 import type { DesignResult } from "../types";
+import { imperialText, pipeName, qty, qtyList, says, type QuantityText } from "../quantity-text";
 
 export interface StartingSize {
   input: DesignInput;
@@ -29,10 +30,12 @@ export interface StartingSize {
   changes: string[];
   /** When nothing passes: what to change, in words (empty when `pass`). */
   advice: string[];
+  /** `changes` and `advice` with their numbers as quantities, so a screen words them in the reader's units. */
+  changesText: QuantityText[];
+  adviceText: QuantityText[];
 }
 
 const MAX_POSTS = 20; // posts.count's upper bound in engine/schema.ts
-const pipeWords = (size: PipeSize) => `${size.replace("-", " ")} in standard pipe`;
 const noReasonableHole = (r: DesignResult) => r.warnings.some((w) => w.code === "AUTO_DIAMETER_NO_REASONABLE_DEPTH");
 const passes = (r: DesignResult) => r.footing.pass && !noReasonableHole(r);
 
@@ -59,15 +62,20 @@ function smallestPassing(input: DesignInput, count: number): { pipe: PipeSize; r
 }
 
 export function startingSize(input: DesignInput): StartingSize {
+  const s = startingSizeText(input);
+  return { ...s, changes: s.changesText.map(imperialText), advice: s.adviceText.map(imperialText) };
+}
+
+function startingSizeText(input: DesignInput): Omit<StartingSize, "changes" | "advice"> {
   const given = sizeParsedDesign(input);
   // A given depth is a hole already dug: sizing it is the engineer's call, not a default's.
-  if (input.posts.fixedDepthIn !== undefined) return { input, result: given, pass: given.footing.pass, changes: [], advice: given.footing.pass ? [] : ["The given footing depth fails a check: clear it to size the depth."] };
+  if (input.posts.fixedDepthIn !== undefined) return { input, result: given, pass: given.footing.pass, changesText: [], adviceText: given.footing.pass ? [] : [["The given footing depth fails a check: clear it to size the depth."]] };
 
   const found = smallestPassing(input, input.posts.count);
   if (found) {
     const sized = withSize(input, found.pipe, found.result.footing.diameterIn);
     const result = sizeParsedDesign(sized);
-    return { input: sized, result, pass: result.footing.pass, changes: describeChanges(input, sized, found.pipe, result.footing.pass), advice: [] };
+    return { input: sized, result, pass: result.footing.pass, changesText: describeChanges(input, sized, found.pipe, result.footing.pass), adviceText: [] };
   }
 
   // Nothing passes at this count: keep the pipe that carries the bending (or the largest) and the
@@ -80,49 +88,50 @@ export function startingSize(input: DesignInput): StartingSize {
   const changes = describeChanges(input, kept, pipe, false, bendingPipe !== null);
   if (result.footing.pass) {
     // Every check passes, only deeper than the hole the designer called reasonable: say so, no advice needed.
-    const hole = changes.findIndex((c) => c.includes(" in holes"));
-    const deep = `${kept.posts.holeDiameterIn} in holes ${result.footing.depthIn} in deep: every check passes, deeper than the ${input.posts.maxAutoDepthIn} in set as the deepest reasonable hole (more posts or larger augers make it shallower)`;
+    const hole = changes.findIndex((c) => imperialText(c).includes(" in holes"));
+    const deep = says`${qty(kept.posts.holeDiameterIn as number, "in")} holes ${qty(result.footing.depthIn, "in")} deep: every check passes, deeper than the ${qty(input.posts.maxAutoDepthIn, "in")} set as the deepest reasonable hole (more posts or larger augers make it shallower)`;
     if (hole === -1) changes.push(deep);
     else changes[hole] = deep;
-    return { input: kept, result, pass: true, changes, advice: [] };
+    return { input: kept, result, pass: true, changesText: changes, adviceText: [] };
   }
-  return { input: kept, result, pass: false, changes, advice: adviceFor(input, result, bendingPipe) };
+  return { input: kept, result, pass: false, changesText: changes, adviceText: adviceFor(input, result, bendingPipe) };
 }
 
-function describeChanges(from: DesignInput, to: DesignInput, pipe: PipeSize, pass: boolean, carriesBending = true): string[] {
-  const out: string[] = [];
+function describeChanges(from: DesignInput, to: DesignInput, pipe: PipeSize, pass: boolean, carriesBending = true): QuantityText[] {
+  const out: QuantityText[] = [];
   if (to.posts.pipeSize !== from.posts.pipeSize) {
     const smaller = PIPE_SIZES[PIPE_SIZES.indexOf(pipe) - 1];
     out.push(pass
-      ? `${pipeWords(pipe)}: the smallest that passes${smaller ? ` (${pipeWords(smaller)} does not)` : ""}`
-      : carriesBending ? `${pipeWords(pipe)}: the smallest that carries the post bending` : `${pipeWords(pipe)}: the largest standard pipe (none carries the post bending)`);
+      ? says`${pipeName(pipe)}: the smallest that passes${smaller ? says` (${pipeName(smaller)} does not)` : ""}`
+      : carriesBending ? says`${pipeName(pipe)}: the smallest that carries the post bending` : says`${pipeName(pipe)}: the largest standard pipe (none carries the post bending)`);
   }
   if (to.posts.holeDiameterIn !== from.posts.holeDiameterIn) {
-    const candidates = `${from.posts.autoDiametersIn.join(", ")} in`;
+    const hole = qty(to.posts.holeDiameterIn as number, "in");
+    const candidates = qtyList(from.posts.autoDiametersIn, "in");
     out.push(pass
-      ? `${to.posts.holeDiameterIn} in holes: the smallest of the candidate augers (${candidates}) that passes within ${from.posts.maxAutoDepthIn} in deep`
-      : `${to.posts.holeDiameterIn} in holes: the candidate auger (${candidates}) that comes closest to passing`);
+      ? says`${hole} holes: the smallest of the candidate augers (${candidates}) that passes within ${qty(from.posts.maxAutoDepthIn, "in")} deep`
+      : says`${hole} holes: the candidate auger (${candidates}) that comes closest to passing`);
   }
   return out;
 }
 
-function adviceFor(input: DesignInput, result: DesignResult, bendingPipe: PipeSize | null): string[] {
-  const out: string[] = [];
+function adviceFor(input: DesignInput, result: DesignResult, bendingPipe: PipeSize | null): QuantityText[] {
+  const out: QuantityText[] = [];
   const bending = result.footing.checks.find((c) => c.id === "postBending");
   if (!bendingPipe && bending) {
-    out.push(`No standard pipe up to 6 in carries the ${bending.demand.toFixed(1)} kip-ft bending at grade with ${input.posts.count} posts: add posts, lower the lowest edge clearance or the tilt, or have the engineer specify a heavier post.`);
+    out.push(says`No standard pipe up to the ${pipeName(PIPE_SIZES[PIPE_SIZES.length - 1])} carries the ${qty(Math.round(bending.demand * 10) / 10, "kipFt")} bending at grade with ${input.posts.count} posts: add posts, lower the lowest edge clearance or the tilt, or have the engineer specify a heavier post.`);
   }
   if (noReasonableHole(result) || result.footing.checks.some((c) => c.id === "bearing" && !c.pass)) {
-    out.push(`No candidate auger (${input.posts.autoDiametersIn.join(", ")} in) passes bearing within ${input.posts.maxAutoDepthIn} in deep: add larger augers to the candidate hole sizes, allow a deeper hole, give soil report values, or add posts.`);
+    out.push(says`No candidate auger (${qtyList(input.posts.autoDiametersIn, "in")}) passes bearing within ${qty(input.posts.maxAutoDepthIn, "in")} deep: add larger augers to the candidate hole sizes, allow a deeper hole, give soil report values, or add posts.`);
   }
   for (let count = input.posts.count + 1; count <= MAX_POSTS; count++) {
     const found = smallestPassing(input, count);
     if (found) {
-      out.push(`With ${count} posts it passes: ${pipeWords(found.pipe)} in ${found.result.footing.diameterIn} in holes ${found.result.footing.depthIn} in deep. Change the number of posts to ${count}.`);
+      out.push(says`With ${count} posts it passes: ${pipeName(found.pipe)} in ${qty(found.result.footing.diameterIn, "in")} holes ${qty(found.result.footing.depthIn, "in")} deep. Change the number of posts to ${count}.`);
       break;
     }
-    if (count === MAX_POSTS) out.push(`Even ${MAX_POSTS} posts do not pass: split the array into smaller racks or have the engineer size it.`);
+    if (count === MAX_POSTS) out.push([`Even ${MAX_POSTS} posts do not pass: split the array into smaller racks or have the engineer size it.`]);
   }
-  if (out.length === 0) out.push(`Check the failing checks: ${result.footing.checks.filter((c) => !c.pass).map((c) => c.title).join(", ")}.`);
+  if (out.length === 0) out.push([`Check the failing checks: ${result.footing.checks.filter((c) => !c.pass).map((c) => c.title).join(", ")}.`]);
   return out;
 }

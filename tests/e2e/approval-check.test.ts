@@ -26,8 +26,9 @@ async function as(email: string | null, viewport = DESKTOP): Promise<Page> {
 /** What the screen shows without scrolling: the point of "at the top". */
 async function top(page: Page, name: string) {
   if (process.env.SCREENSHOTS !== "1") return;
-  fs.mkdirSync("/tmp/shots", { recursive: true });
-  await page.screenshot({ path: `/tmp/shots/${name}.png` });
+  const dir = process.env.SCREENSHOTS_DIR || "/tmp/shots";
+  fs.mkdirSync(dir, { recursive: true });
+  await page.screenshot({ path: `${dir}/${name}.png` });
 }
 
 // A 24 in hole: shallower than frost and too short laterally, so checks fail (IBC §1809.5; IBC §1807.3.2.1 Eq. 18-1).

@@ -14,7 +14,8 @@ import { formatFootingSize, formatQuantity } from "@/components/format/quantity"
 import type { DesignResult } from "@/engine";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
-import { DESIGNER, INSTALLER, addRevision, freshApproved } from "../support/review-fixtures";
+import { DESIGNER, ENGINEER, INSTALLER, addRevision, freshApproved } from "../support/review-fixtures";
+import { DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 
 const suite = browserSuite();
 
@@ -132,5 +133,54 @@ describe("metric mode", () => {
     }
     // The report follows the same cookie: metric words, no US ones outside the standard's equations.
     expect(report).toContain("mm diameter");
+  });
+
+  it("words the text the app wrote in metric too: a new design's starting note, a hold's reason, the landing cautions, the report's method", async () => {
+    // A new design from the demo card: revision 1's note says how the engine sized it (engine/options/starting-size.ts).
+    const page = await metricPage(DESIGNER);
+    await page.goto(`${baseUrl()}/projects/${DEMO_PROJECT_ID}`);
+    await page.getByLabel("New design name").fill(`Metric start ${Date.now()}`);
+    await page.getByRole("button", { name: "Create design" }).click();
+    await page.getByTestId("footing-spec").filter({ hasText: "mm diameter" }).waitFor({ timeout: 20_000 });
+    const note = await page.locator("main").innerText();
+    expect(note).toContain("Started from the Juniper Flats County (demo) criteria card.");
+    expect(imperialWords(await visibleText(page)), "editor of a new design").toEqual([]);
+    await shot(page, "metric-new-design-desktop");
+
+    // A hole logged shallower than the spec, in millimetres, on the phone: the hold's reason in mm on every screen.
+    const d = await approvedDesign();
+    const crew = await metricPage(INSTALLER, PHONE);
+    await crew.goto(`${baseUrl()}/field/${d.revisionId}`);
+    await crew.getByLabel("Measured diameter (mm)").fill(String(Math.round(d.result.footing.diameterIn * 25.4)));
+    // 300 mm short of the specified depth (1 in = 25.4 mm exactly, NIST SP 811, 2008 edition, App. B.8).
+    await crew.getByLabel("Measured depth (mm)").fill(String(Math.round(d.result.footing.depthIn * 25.4) - 300));
+    await crew.getByRole("button", { name: "Record this hole" }).click();
+    await crew.getByText(/ON HOLD: Hole P1 is [\d,]+ mm deep, shallower than the [\d,]+ mm specified\./).first().waitFor({ timeout: 20_000 });
+    const hold = await db("design_holds").where({ revision_id: d.revisionId }).first("reason");
+    expect(hold.reason, "saved as customary words for the e-mail and the API").toMatch(/ in deep, shallower than the \d+(\.\d)? in specified\./);
+    await crew.reload();
+    await crew.getByRole("alert", { name: "Design on hold" }).waitFor();
+    expect(imperialWords(await visibleText(crew)), "field spec on hold").toEqual([]);
+    await shot(crew, "metric-hold-field-phone");
+    for (const [who, path, name] of [[ENGINEER, `/reviews/${d.revisionId}`, "review"], [ENGINEER, "/reviews", "reviews list"], [DESIGNER, `/projects/${d.projectId}/designs/${d.designId}`, "editor"]] as const) {
+      const p = await metricPage(who);
+      await p.goto(`${baseUrl()}${path}`);
+      await p.getByText(/Hole P1 is [\d,]+ mm deep/).first().waitFor({ timeout: 20_000 });
+      expect(imperialWords(await visibleText(p)), `${name} with the hold`).toEqual([]);
+    }
+
+    // The landing page's site cautions follow the cookie (the concrete strengths in MPa).
+    const landing = await metricPage(DESIGNER);
+    await landing.goto(baseUrl());
+    expect(await landing.getByRole("region", { name: "On site, always" }).innerText()).toMatch(/MPa/);
+    expect(imperialWords(await visibleText(landing)), "landing").toEqual([]);
+
+    // The report's method in SI: no US unit word anywhere in it, the velocity pressure in its SI form.
+    const pdf = await page.request.get(`${baseUrl()}/api/revisions/${d.revisionId}/report.pdf`);
+    const parser = new PDFParse({ data: new Uint8Array(await pdf.body()) });
+    const report = (await parser.getText()).text;
+    await parser.destroy();
+    expect(report).toContain("qz = 0.613");
+    expect(imperialWords(report), "report").toEqual([]);
   });
 });

@@ -9,7 +9,7 @@ import type { Browser, BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_CARD_ID, DEMO_PROJECT_ID, OTHER_PROJECT_ID } from "@/db/seeds/02_demo_projects";
-import { baseUrl, launch, signedInContext } from "../support/browser";
+import { baseUrl, launch, shot, signedInContext } from "../support/browser";
 import { DESIGNER, INSTALLER, OUTSIDER, freshApproved } from "../support/review-fixtures";
 
 let browser: Browser;
@@ -27,12 +27,25 @@ async function statusOf(email: string | null, path: string): Promise<{ status: n
   const context = email ? await signedInContext(browser, email) : await browser.newContext({ baseURL: baseUrl() });
   contexts.push(context);
   const page = await context.newPage();
-  const response = await page.goto(path);
-  // A 404/403 page's body is sometimes empty for a moment right after "load" (the client renders it
-  // again); read it once it has text.
-  await page.waitForFunction(() => document.body.innerText.trim().length > 0);
-  const text = await page.locator("body").innerText();
+  // Read at DOMContentLoaded, without waiting for anything: the words must be in the server HTML
+  // (Next's error shell alone has an empty body until scripts run: components/ui/access-refused.tsx).
+  const response = await page.goto(path, { waitUntil: "domcontentloaded" });
+  const text = await page.evaluate(() => document.body.innerText);
   return { status: response!.status(), text, url: page.url() };
+}
+
+/** The words of a refusal in the HTML as sent, and as a browser without JavaScript shows it. */
+async function withoutScripts(email: string, path: string): Promise<{ status: number; html: string; shown: string }> {
+  const context = await signedInContext(browser, email);
+  contexts.push(context);
+  const raw = await context.request.get(path, { maxRedirects: 0 });
+  const noJs = await browser.newContext({ baseURL: baseUrl(), javaScriptEnabled: false, storageState: await context.storageState() });
+  contexts.push(noJs);
+  const page = await noJs.newPage();
+  await page.goto(path);
+  // Less the scripts: the page data (the RSC payload) carries the words too, in a script.
+  const html = (await raw.text()).replace(/<script\b[\s\S]*?<\/script>/g, "");
+  return { status: raw.status(), html, shown: await page.locator("body").innerText() };
 }
 
 describe("page-level status codes", () => {
@@ -63,6 +76,40 @@ describe("page-level status codes", () => {
     const page = await statusOf(null, `/projects/${DEMO_PROJECT_ID}`);
     expect(new URL(page.url).pathname).toBe("/login");
     expect(new URL(page.url).searchParams.get("next")).toBe(`/projects/${DEMO_PROJECT_ID}`);
+  });
+});
+
+describe("a 404 or 403 page's words", () => {
+  it("are in the server HTML, shown without JavaScript, and stay once the page's scripts have run", async () => {
+    const missing = `/projects/${crypto.randomUUID()}`;
+    for (const [email, path, status, words] of [[DESIGNER, missing, 404, "Nothing here"], [DESIGNER, "/admin/members", 403, "Your role does not allow this page"]] as const) {
+      const sent = await withoutScripts(email, path);
+      expect(sent.status, path).toBe(status);
+      expect(sent.html, path).toContain(words);
+      expect(sent.shown, path).toContain(words);
+      // With scripts: there from the first paint, and once the app has rendered it (styled), once only.
+      const context = await signedInContext(browser, email);
+      contexts.push(context);
+      const page = await context.newPage();
+      await page.addInitScript(() => {
+        const w = window as unknown as { emptyAfterFirstText?: boolean };
+        document.addEventListener("DOMContentLoaded", () => {
+          let seen = document.body.innerText.trim().length > 0;
+          new MutationObserver(() => {
+            const has = document.body.innerText.trim().length > 0;
+            if (seen && !has) w.emptyAfterFirstText = true;
+            seen = seen || has;
+          }).observe(document.body, { childList: true, subtree: true, characterData: true });
+        });
+      });
+      await page.goto(path, { waitUntil: "domcontentloaded" });
+      expect(await page.evaluate(() => document.body.innerText), path).toContain(words);
+      // The app's own render replaces the plain words with the styled page (the link styled by the app's CSS).
+      await page.locator("a.underline").filter({ hasText: status === 404 ? "Go to the start page" : "Back to projects" }).waitFor();
+      expect(await page.getByRole("heading", { level: 1, name: words }).count(), path).toBe(1);
+      expect(await page.evaluate(() => (window as unknown as { emptyAfterFirstText?: boolean }).emptyAfterFirstText ?? false), path).toBe(false);
+      await shot(page, `refusal-${status}`);
+    }
   });
 });
 

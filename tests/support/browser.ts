@@ -36,9 +36,13 @@ export async function signedInContext(browser: Browser, email: string, viewport 
   return context;
 }
 
-/** Saves a full-page screenshot to /tmp/shots/<name>.png when SCREENSHOTS=1 (for reading by eye). */
+/**
+ * Saves a full-page screenshot to /tmp/shots/<name>.png when SCREENSHOTS=1 (for reading by eye);
+ * SCREENSHOTS_DIR=<folder> puts them elsewhere (several people's runs at once).
+ */
 export async function shot(page: Page, name: string): Promise<void> {
   if (process.env.SCREENSHOTS !== "1") return;
-  fs.mkdirSync("/tmp/shots", { recursive: true });
-  await page.screenshot({ path: `/tmp/shots/${name}.png`, fullPage: true });
+  const dir = process.env.SCREENSHOTS_DIR || "/tmp/shots";
+  fs.mkdirSync(dir, { recursive: true });
+  await page.screenshot({ path: `${dir}/${name}.png`, fullPage: true });
 }

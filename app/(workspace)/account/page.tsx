@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { hasRole, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listLicences } from "@/db/queries/licences";
 import { readSession } from "@/app/_lib/session";
 import { activeSessions } from "@/db/queries/sessions";
@@ -12,7 +12,7 @@ import { dateTimeInWords, todayInZone } from "@/components/ui/dates";
 
 export const metadata: Metadata = { title: "Your account" };
 
-export default async function AccountPage() {
+async function AccountPage() {
   const user = await forPage(() => requireUser(), "/account");
   const isEngineer = hasRole(user, "engineer");
   const licences = isEngineer ? await listLicences(user.userId) : [];
@@ -97,3 +97,6 @@ function browserName(userAgent: string | null): string {
   const device = /iPhone|Android.*Mobile/.test(userAgent) ? "phone" : /iPad|Android/.test(userAgent) ? "tablet" : "computer";
   return `${browser} on a ${device}`;
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(AccountPage);

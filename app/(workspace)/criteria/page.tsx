@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { US_STATES } from "@/app/_lib/schemas/project";
 import { CriteriaCardView } from "@/components/design/criteria-card-view";
 import { listCriteriaCards } from "@/db/queries/criteria-cards";
@@ -10,7 +10,7 @@ import { CriteriaCardForm } from "./_components/criteria-card-form";
 export const metadata: Metadata = { title: "Design criteria cards" };
 
 /** The organisation's criteria cards, one per jurisdiction, entered once and applied to projects. */
-export default async function CriteriaPage() {
+async function CriteriaPage() {
   const user = await forPage(() => requireUser(), "/criteria");
   const cards = await listCriteriaCards(user.organisationId);
   const canWrite = hasRole(user, "designer", "admin");
@@ -41,3 +41,6 @@ export default async function CriteriaPage() {
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(CriteriaPage);

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { tapeInches } from "@/components/format/tape";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { StatusBadge } from "@/components/review/status-badge";
@@ -12,7 +12,7 @@ import { shortDate } from "@/components/ui/dates";
 export const metadata: Metadata = { title: "Field specs" };
 
 /** The crew's list: only approved revisions have a field spec; superseded ones say so. */
-export default async function FieldSpecsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+async function FieldSpecsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/field");
   const older = (await searchParams).older;
   const specs = await approvedSpecs(user.organisationId, { older: parseFieldCursor(Array.isArray(older) ? older[0] : older) });
@@ -48,3 +48,6 @@ export default async function FieldSpecsPage({ searchParams }: { searchParams: P
     </div>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(FieldSpecsPage);

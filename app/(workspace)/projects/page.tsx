@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { Caution } from "@/components/ui/caution";
 import { listProjects } from "@/db/queries/projects";
@@ -9,7 +9,7 @@ import { ProjectsTable } from "./_components/projects-table";
 
 export const metadata: Metadata = { title: "Projects" };
 
-export default async function ProjectsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+async function ProjectsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/projects");
   const page = await listProjects(user.organisationId, listQueryLenient(await searchParams), user.userId);
   const showContractor = page.rows.some((r) => r.organisationName !== user.organisationName);
@@ -31,3 +31,6 @@ export default async function ProjectsPage({ searchParams }: { searchParams: Pro
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(ProjectsPage);

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { AnswerForm } from "@/components/engagements/answer-form";
 import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
@@ -20,7 +20,7 @@ const STATES: QueueState[] = ["waiting", "on_hold", "decided"];
  * on hold after their approval, and what they decided, filtered by contractor and state and paged
  * on the server. Invitations not yet answered are listed above it.
  */
-export default async function QueuePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+async function QueuePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await forPage(() => requireUser(), "/queue");
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]) ?? "";
@@ -52,3 +52,6 @@ export default async function QueuePage({ searchParams }: { searchParams: Promis
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(QueuePage);

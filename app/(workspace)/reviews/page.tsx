@@ -1,18 +1,21 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { displayStatus } from "@/app/_lib/review/standing";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Caution } from "@/components/ui/caution";
+import { readerUnits } from "@/app/_lib/unit-preference";
+import { composedIn } from "@/components/format/quantity-text";
 import { dateInWords, shortDate } from "@/components/ui/dates";
 import { countOpenHolds, openHoldsOfOrganisation } from "@/db/queries/holds";
 import { countWaitingFor, recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
 
 export const metadata: Metadata = { title: "Reviews" };
 
-export default async function ReviewsPage() {
+async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
+  const units = await readerUnits();
   const engineer = hasRole(user, "engineer");
   // Each list shows its first rows; the counts say how many there are in all.
   const [holds, holdCount, waiting, waitingCount, mine, decided] = await Promise.all([
@@ -34,7 +37,7 @@ export default async function ReviewsPage() {
               <li key={h.id} className="py-2 text-sm">
                 {h.revisionId ? <Link href={`/reviews/${h.revisionId}`} className="font-medium underline">{h.designName}, revision {h.number}</Link> : <span className="font-medium">{h.designName}</span>}
                 <span> · {h.projectName}</span>
-                <p>{h.reason}</p>
+                <p>{composedIn(h.reason, units)}</p>
                 <p className="text-xs">Raised by {h.raisedByName} on {dateInWords(h.raisedAt, user.timeZone)}</p>
               </li>
             ))}
@@ -81,3 +84,6 @@ function QueueTable({ title, rows, total, more, empty, show, timeZone }: {
     </section>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(ReviewsPage);

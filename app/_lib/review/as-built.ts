@@ -7,6 +7,7 @@ import { composeMail } from "@/app/_lib/mail-template";
 import { deleteObject, putObject } from "@/app/_lib/storage";
 import { acceptUpload, revisionObjectKey, UPLOAD_KINDS } from "@/app/_lib/uploads";
 import type { DesignResult } from "@/engine";
+import { imperialText, qty, says, type QuantityText } from "@/engine/quantity-text";
 import { db } from "@/db/client";
 import { GROUND_FOUND, insertAsBuilt } from "@/db/queries/as-built";
 import { recordAudit } from "@/db/queries/audit";
@@ -36,17 +37,20 @@ export const PHOTO_LIMITS = { count: 6, bytes: UPLOAD_KINDS.asBuiltPhoto.maxByte
 /**
  * Why this hole stops the job, if it does: shallower or narrower than specified, or ground that
  * contradicts the presumed soil (the design's soil values and frost depth assumed none of these).
+ * Saved as customary words (the e-mail and the API read them so); the sizes are quantities, so a
+ * screen words the saved reason in the reader's units (components/format `composedIn`).
  */
 export function holdReasons(result: DesignResult, entry: AsBuiltInput): string[] {
-  const reasons: string[] = [];
+  const reasons: QuantityText[] = [];
   const spec = result.field.posts.find((p) => p.id === entry.postId);
   const depthIn = spec?.embedmentIn ?? result.footing.depthIn;
-  if (entry.measuredDepthIn < depthIn) reasons.push(`Hole ${entry.postId} is ${entry.measuredDepthIn} in deep, shallower than the ${depthIn} in specified.`);
-  if (entry.measuredDiameterIn < result.footing.diameterIn) reasons.push(`Hole ${entry.postId} is ${entry.measuredDiameterIn} in across, narrower than the ${result.footing.diameterIn} in specified.`);
+  // A size measured in mm and saved in inches reads to 0.1 in, not 39.37007874 in.
+  if (entry.measuredDepthIn < depthIn) reasons.push(says`Hole ${entry.postId} is ${qty(entry.measuredDepthIn, "in")} deep, shallower than the ${qty(depthIn, "in")} specified.`);
+  if (entry.measuredDiameterIn < result.footing.diameterIn) reasons.push(says`Hole ${entry.postId} is ${qty(entry.measuredDiameterIn, "in")} across, narrower than the ${qty(result.footing.diameterIn, "in")} specified.`);
   if (entry.groundFound !== "as_expected") {
-    reasons.push(`Hole ${entry.postId}: ${GROUND_FOUND_LABELS[entry.groundFound].toLowerCase()} found, which contradicts the presumed soil and frost depth the design assumed.`);
+    reasons.push([`Hole ${entry.postId}: ${GROUND_FOUND_LABELS[entry.groundFound].toLowerCase()} found, which contradicts the presumed soil and frost depth the design assumed.`]);
   }
-  return reasons;
+  return reasons.map(imperialText);
 }
 
 /**

@@ -11,7 +11,7 @@ import QRCode from "qrcode";
 import { DEFER_TO_CODE } from "@/engine";
 import { SITE_CAUTION_TEXTS } from "@/engine/notices";
 import { formatFootingSize, formatPipeSize, formatQuantity, type UnitSystem } from "@/components/format/quantity";
-import { checkTitleIn, sayIn, storedIn, warningIn } from "@/components/format/quantity-text";
+import { checkTitleIn, composedIn, sayIn, storedIn, warningIn } from "@/components/format/quantity-text";
 import { formatRatio, ratioWithVerdict } from "@/components/format/ratio";
 import { fieldLabel } from "@/engine/field-labels";
 import type { RevisionContext } from "@/db/queries/reviews";
@@ -129,7 +129,7 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
     line("NOT APPROVED: not for construction. A licensed engineer has not approved this revision.", { bold: true, colour: BAD, size: 11 });
   }
   if (standing.supersededBy) line(`Superseded by revision ${standing.supersededBy.number}: do not build from this revision.`, { bold: true, colour: BAD });
-  for (const h of standing.holds) line(`ON HOLD since ${dateTimeInWords(h.raisedAt, tz)} (raised by ${h.raisedByName}): ${h.reason}`, { bold: true, colour: BAD });
+  for (const h of standing.holds) line(`ON HOLD since ${dateTimeInWords(h.raisedAt, tz)} (raised by ${h.raisedByName}): ${composedIn(h.reason, units)}`, { bold: true, colour: BAD });
   line(`Report generated ${dateTimeInWords(generatedAt, tz)}; calculation engine ${ctx.engineVersion}.`, { colour: "#475569", size: 8 });
 
   // ── Summary ────────────────────────────────────────────────────────────────────────────────
@@ -174,10 +174,10 @@ export async function renderReportPdf(ctx: RevisionContext, standing: Standing, 
   // ── Method ─────────────────────────────────────────────────────────────────────────────────
   heading("Method, with the governing case's numbers", 14);
   line(`${r.references.asce}; ${r.references.ibc}; ${r.references.aisc}. ${r.wind.method}`);
-  // The standard's equations carry constants for US customary units (0.00256 for mph → psf), so the
-  // substituted steps stay in them; every result above and below is in the reader's units.
-  if (units === "metric") line("The equations below are printed in the US customary units their constants are written for (as the standard prints them); every other figure in this report is metric.", { colour: "#475569", size: 8 });
-  for (const s of methodSteps(r)) {
+  // In metric the steps are in SI (report-method.ts): the velocity pressure in its SI form, the
+  // other equations as they stand (dimensionally consistent).
+  if (units === "metric") line("The steps below are in SI units: kN, m, kPa and MPa. The velocity pressure uses the equation's SI form (0.613, for N/m² with V in m/s); the other equations hold in any consistent units.", { colour: "#475569", size: 8 });
+  for (const s of methodSteps(r, units)) {
     heading(s.title, 10);
     line(`Source: ${s.source}`, { colour: "#475569", size: 8 });
     for (const l of s.lines) line(l, { indent: 10 });

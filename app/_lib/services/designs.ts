@@ -7,6 +7,7 @@ import { startingInput } from "../design-defaults";
 import { assertCanWrite, cardFor, computeResult, designFor, projectFor, saveRevision as insertRevision, type DesignRevision } from "../designs";
 import { designCreateSchema, revisionCreateSchema } from "../schemas/project";
 import type { Body } from "./input";
+import { startingNote } from "@/components/format/revision-note";
 
 /** How a design made from the card was sized: what changed and, when nothing passes, what to change. */
 export interface StartingSizing {
@@ -29,20 +30,13 @@ export async function createDesign(user: CurrentUser, projectId: string, body: B
   const start = fields.input ? null : startingSize(designInputSchema.parse(startingInput(card?.values, project.name)));
   const input = fields.input ?? start!.input;
   const result = start ? start.result : computeResult(input, ["input"]);
-  const startedFrom = fields.input ? "First revision" : `${card ? `Started from the ${card.jurisdiction} criteria card.` : "Started from the default design."} ${sizingNote(start!)}`;
+  const startedFrom = fields.input ? "First revision" : startingNote(card ? `Started from the ${card.jurisdiction} criteria card.` : "Started from the default design.", start!);
   const created = await createDesignWithRevision({
     projectId: project.id, organisationId: user.organisationId, name: fields.name, authorId: user.userId,
     input, result, engineVersion: ENGINE_VERSION, note: fields.note || startedFrom,
   });
   const sizing = start ? { pass: start.pass, changes: start.changes, advice: start.advice } : null;
   return { design: (await getDesign(created.designId))!, revisionId: created.revisionId, sizing };
-}
-
-/** Revision 1's note: how the start was sized, or plainly what to change when nothing passes. */
-function sizingNote(start: StartingSizing): string {
-  const changed = start.changes.length ? ` Sized: ${start.changes.join("; ")}.` : "";
-  if (start.pass) return `Every check passes.${changed}`;
-  return `Fails a check at this size.${changed} To pass: ${start.advice.join(" ")}`;
 }
 
 /** The next revision of a design from `{ baseRevisionId, input, note }`; a stale base is a 409 naming the latest. */

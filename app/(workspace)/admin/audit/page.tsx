@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requireRole } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { auditCursorText, listAuditEvents, parseAuditCursor, type AuditRow } from "@/db/queries/audit";
 import { shortDateTime } from "@/components/ui/dates";
 import { auditActionLabel, auditDetailWords } from "@/components/admin/audit-labels";
@@ -14,7 +14,7 @@ const AUDIT_COUNT_LABEL = "10,000+";
 
 type Search = { older?: string; newer?: string; oldest?: string };
 
-export default async function AuditPage({ searchParams }: { searchParams: Promise<Search> }) {
+async function AuditPage({ searchParams }: { searchParams: Promise<Search> }) {
   const user = await forPage(() => requireRole("admin"), "/admin/audit");
   const search = await searchParams;
   // Keyset pages: a long log costs the same on its last page as on its first.
@@ -92,3 +92,6 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(AuditPage);

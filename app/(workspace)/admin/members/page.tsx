@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { membersOverview } from "@/app/_lib/services/members";
 import { InviteForm } from "./_components/invite-form";
 import { MembersTable } from "./_components/members-table";
@@ -9,7 +9,7 @@ import { PendingInvitations } from "./_components/pending-invitations";
 
 export const metadata: Metadata = { title: "Members" };
 
-export default async function MembersPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
+async function MembersPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
   const { user, members, invitations } = await forPage(async () => {
     const user = await requireUser();
     return { user, ...(await membersOverview(user)) };
@@ -42,3 +42,6 @@ export default async function MembersPage({ searchParams }: { searchParams: Prom
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(MembersPage);

@@ -2,13 +2,13 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
 import { assertCanWrite, cardFor } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { US_STATES } from "@/app/_lib/schemas/project";
 import { CriteriaCardForm } from "../_components/criteria-card-form";
 
 export const metadata: Metadata = { title: "Edit criteria card" };
 
-export default async function EditCardPage({ params }: { params: Promise<{ cardId: string }> }) {
+async function EditCardPage({ params }: { params: Promise<{ cardId: string }> }) {
   const { cardId } = await params;
   const { card, timeZone } = await forPage(async () => {
     const u = await requireUser();
@@ -25,3 +25,6 @@ export default async function EditCardPage({ params }: { params: Promise<{ cardI
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(EditCardPage);

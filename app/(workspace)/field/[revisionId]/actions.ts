@@ -8,7 +8,7 @@ import { recordAsBuilt } from "@/app/_lib/services/field";
 import { tickChecklistItem } from "@/app/_lib/services/field-checklist";
 import { typedValues, type ActionState } from "@/components/ui/action-state";
 import { fromDisplay } from "@/components/format/quantity";
-import { rangeMessageIn } from "@/components/format/quantity-text";
+import { composedIn, rangeMessageIn } from "@/components/format/quantity-text";
 
 /** The crew records one hole as dug; a hole that contradicts the spec puts the design on hold. */
 export async function recordAsBuiltAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -38,7 +38,7 @@ export async function recordAsBuiltAction(_prev: ActionState, form: FormData): P
   }
   revalidatePath(`/field/${revisionId}`);
   const out = recorded.value;
-  if (out.holdId) return { ok: true, message: `Recorded. The design is now ON HOLD: ${out.reasons.join(" ")} Do not pour; the engineer and designer have been e-mailed.` };
+  if (out.holdId) return { ok: true, message: `Recorded. The design is now ON HOLD: ${out.reasons.map((r) => composedIn(r, metric ? "metric" : "imperial")).join(" ")} Do not pour; the engineer and designer have been e-mailed.` };
   return { ok: true, message: `Hole ${form.get("postId")} recorded.` };
 }
 

@@ -3,11 +3,11 @@ import Link from "next/link";
 import QRCode from "qrcode";
 import { hasRole, requireUser } from "@/app/_lib/auth";
 import { env } from "@/app/_lib/env";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { bearing } from "@/app/_lib/review/field-format";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { formatBags, formatPipeSize, formatQuantity } from "@/components/format/quantity";
-import { sayIn, storedIn } from "@/components/format/quantity-text";
+import { composedIn, sayIn, storedIn } from "@/components/format/quantity-text";
 import { tapeInches, tapeLength } from "@/components/format/tape";
 import { UnitsSwitch } from "@/components/format/units-switch";
 import { checkOutcome } from "@/components/review/check-outcome";
@@ -36,7 +36,7 @@ import { PrintButton } from "./_components/print-button";
 export const metadata: Metadata = { title: "Field spec" };
 
 
-export default async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
+async function FieldSpecPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const { revisionId } = await params;
   const { user, ctx } = await forPage(async () => {
     const user = await requireUser();
@@ -97,7 +97,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
           <Link href={`/field/${standing.supersededBy.id}`} className="no-print mt-1 inline-block underline">Open the field spec of revision {standing.supersededBy.number}</Link>
         </section>
       ) : null}
-      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} units={units} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} />
 
       {/* Safety and the preliminary-sizing caution come first, before the job details and any number: above the fold on a phone and on printed page 1. */}
       <Caution />
@@ -126,7 +126,7 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
             {cleared.map((h) => (
               <li key={h.id}>
                 <p className="font-semibold">{h.clearNote}</p>
-                <p className="text-sm">Hold cleared by {h.clearedByName} on {dateTimeInWords(h.clearedAt, ctx.timeZone)}. The hold was: {h.reason}</p>
+                <p className="text-sm">Hold cleared by {h.clearedByName} on {dateTimeInWords(h.clearedAt, ctx.timeZone)}. The hold was: {composedIn(h.reason, units)}</p>
               </li>
             ))}
           </ul>
@@ -241,3 +241,6 @@ export default async function FieldSpecPage({ params }: { params: Promise<{ revi
     </div>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(FieldSpecPage);

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, projectFor } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { CriteriaCardView } from "@/components/design/criteria-card-view";
 import { Caution } from "@/components/ui/caution";
@@ -21,7 +21,7 @@ import { shortDate } from "@/components/ui/dates";
 export const metadata: Metadata = { title: "Project" };
 type Props = { params: Promise<{ projectId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
-export default async function ProjectPage({ params, searchParams }: Props) {
+async function ProjectPage({ params, searchParams }: Props) {
   const { projectId } = await params;
   const search = await searchParams;
   const { user, project, card } = await forPage(async () => {
@@ -88,4 +88,5 @@ export default async function ProjectPage({ params, searchParams }: Props) {
   );
 }
 
-
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(ProjectPage);

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
 import { assertCanWrite } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { US_STATES } from "@/app/_lib/schemas/project";
 import { listCriteriaCards } from "@/db/queries/criteria-cards";
 import { createProjectAction } from "../actions";
@@ -10,7 +10,7 @@ import { ProjectForm } from "../_components/project-form";
 
 export const metadata: Metadata = { title: "New project" };
 
-export default async function NewProjectPage() {
+async function NewProjectPage() {
   const user = await forPage(async () => {
     const u = await requireUser();
     assertCanWrite(u);
@@ -29,3 +29,6 @@ export default async function NewProjectPage() {
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(NewProjectPage);

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { checkOutcome, outcomeIn, overridesIn } from "@/components/review/check-outcome";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { formatQuantity } from "@/components/format/quantity";
@@ -45,7 +45,7 @@ async function engineerChoices(organisationId: string, projectId: string) {
   return [...members, ...outside.map((e) => ({ userId: e.userId, name: `${e.name} (outside engineer${e.firmName ? `, ${e.firmName}` : ""})` }))];
 }
 
-export default async function ReviewPage({ params }: { params: Promise<{ revisionId: string }> }) {
+async function ReviewPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const { revisionId } = await params;
   const { user, ctx } = await forPage(async () => {
     const user = await requireUser();
@@ -112,7 +112,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
           </p>
         ) : null}
       </div>
-      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} clearAction={isEngineer ? clearHoldAction : undefined} />
+      <HoldBanner holds={standing.holds} timeZone={ctx.timeZone} units={units} clearAction={isEngineer ? clearHoldAction : undefined} />
       <Caution />
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
@@ -234,3 +234,6 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
     </div>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(ReviewPage);

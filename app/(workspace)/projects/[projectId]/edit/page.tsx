@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requireUser } from "@/app/_lib/auth";
 import { assertCanWrite, projectFor } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { US_STATES } from "@/app/_lib/schemas/project";
 import { listCriteriaCards } from "@/db/queries/criteria-cards";
 import { updateProjectAction } from "../../actions";
@@ -10,7 +10,7 @@ import { ProjectForm } from "../../_components/project-form";
 
 export const metadata: Metadata = { title: "Edit project" };
 
-export default async function EditProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
+async function EditProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params;
   const { user, project } = await forPage(async () => {
     const u = await requireUser();
@@ -27,3 +27,6 @@ export default async function EditProjectPage({ params }: { params: Promise<{ pr
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(EditProjectPage);

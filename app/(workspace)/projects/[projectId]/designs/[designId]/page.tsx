@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AccessError, hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
 import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { StatusBadge } from "@/components/review/status-badge";
 import { DesignReviewBar } from "@/components/review/design-review-bar";
@@ -11,6 +11,7 @@ import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
 import { chosenUnits, readerUnits } from "@/app/_lib/unit-preference";
 import { RevisionsTable } from "./_components/revisions-table";
+import { revisionNoteIn } from "@/components/format/revision-note";
 import { shortDateTime } from "@/components/ui/dates";
 import { editorPinnedComments } from "@/app/_lib/services/review-comments";
 
@@ -21,7 +22,7 @@ type Props = { params: Promise<{ projectId: string; designId: string }>; searchP
  * The design editor on its latest revision. `?revision=<id>` opens an older revision read-only;
  * `?from=<id>` starts editing from an older revision's values on top of the latest.
  */
-export default async function DesignPage({ params, searchParams }: Props) {
+async function DesignPage({ params, searchParams }: Props) {
   const { projectId, designId } = await params;
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
@@ -47,10 +48,11 @@ export default async function DesignPage({ params, searchParams }: Props) {
   const shown = viewing ?? latest;
   const isOld = shown.id !== latest.id;
   const start = !isOld && from && canWrite ? from : shown;
-  const [revisions, pinnedComments] = await Promise.all([
+  const [revisions, pinnedComments, units] = await Promise.all([
     listRevisions(design.id, listQueryLenient(search, "r_")),
     // Beside the fields: the comments of the latest decision, resolved where the revision shown changed the field.
     editorPinnedComments(user, design.id, shown),
+    readerUnits(),
   ]);
 
   return (
@@ -65,10 +67,10 @@ export default async function DesignPage({ params, searchParams }: Props) {
         <StatusBadge status={shown.status} />
       </div>
       <p className="mt-1 text-sm text-slate-600">
-        Saved {shortDateTime(shown.createdAt, user.timeZone)} by {shown.authorName ?? "someone"}{shown.note ? ` — “${shown.note.replace(/\.$/, "")}”` : ""}.
+        Saved {shortDateTime(shown.createdAt, user.timeZone)} by {shown.authorName ?? "someone"}{shown.note ? ` — “${revisionNoteIn(shown.note, units).replace(/\.$/, "")}”` : ""}.
         <span className="ml-1 font-mono text-xs text-slate-600" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
       </p>
-      <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} />
+      <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} units={units} />
       {isOld ? (
         <div role="status" className="mt-3 flex flex-wrap items-center gap-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">
           <span>You are reading revision {shown.number}, an older revision. It cannot change.</span>
@@ -101,8 +103,11 @@ export default async function DesignPage({ params, searchParams }: Props) {
           <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
           {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
         </div>
-        <RevisionsTable page={revisions} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} units={await readerUnits()} />
+        <RevisionsTable page={{ ...revisions, rows: revisions.rows.map((r) => ({ ...r, note: revisionNoteIn(r.note, units) })) }} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} units={units} />
       </section>
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(DesignPage);

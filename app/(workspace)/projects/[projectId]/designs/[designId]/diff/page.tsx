@@ -2,13 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AccessError, requireUser } from "@/app/_lib/auth";
 import { designFor, projectFor, revisionFor } from "@/app/_lib/designs";
-import { forPage } from "@/app/_lib/page-access";
+import { forPage, refusable } from "@/app/_lib/page-access";
 import { inputChanges, resultChanges, type DiffRow, type DiffValue } from "@/components/design/revision-diff";
 import { inputValueText } from "@/components/design/input-values";
 import { formatBags, formatQuantity, type UnitSystem } from "@/components/format/quantity";
 import { RatioText } from "@/components/format/ratio-text";
 import { parseUnitSystem } from "@/components/format/unit-preference";
 import { readerUnits } from "@/app/_lib/unit-preference";
+import { revisionNoteIn } from "@/components/format/revision-note";
 import { Caution } from "@/components/ui/caution";
 import { revisionNumbers } from "@/db/queries/revisions";
 import { shortDateTime } from "@/components/ui/dates";
@@ -48,7 +49,7 @@ function DiffTable({ rows, units, caption, empty, inputs = false }: { rows: Diff
 }
 
 /** What changed between two revisions, in inputs and in results (`?from=&to=`, defaults: the two latest). */
-export default async function DiffPage({ params, searchParams }: Props) {
+async function DiffPage({ params, searchParams }: Props) {
   const { projectId, designId } = await params;
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
@@ -95,8 +96,8 @@ export default async function DiffPage({ params, searchParams }: Props) {
         <button type="submit" className="rounded-md border border-slate-300 bg-white px-3 py-1.5 hover:bg-slate-50">Compare</button>
       </form>
       <div className="mt-3 grid gap-2 text-sm text-slate-600 sm:grid-cols-2">
-        <p><strong>Rev {from.number}</strong> · {from.authorName} · {shortDateTime(from.createdAt, timeZone)}{from.note ? ` — “${from.note}”` : ""}</p>
-        <p><strong>Rev {to.number}</strong> · {to.authorName} · {shortDateTime(to.createdAt, timeZone)}{to.note ? ` — “${to.note}”` : ""}</p>
+        <p><strong>Rev {from.number}</strong> · {from.authorName} · {shortDateTime(from.createdAt, timeZone)}{from.note ? ` — “${revisionNoteIn(from.note, units)}”` : ""}</p>
+        <p><strong>Rev {to.number}</strong> · {to.authorName} · {shortDateTime(to.createdAt, timeZone)}{to.note ? ` — “${revisionNoteIn(to.note, units)}”` : ""}</p>
       </div>
 
       <section aria-labelledby="inputs-heading" className="mt-6 space-y-2">
@@ -114,3 +115,6 @@ export default async function DiffPage({ params, searchParams }: Props) {
     </>
   );
 }
+
+// Its 404/403 with the words in the server HTML (app/_lib/page-access.tsx).
+export default refusable(DiffPage);
