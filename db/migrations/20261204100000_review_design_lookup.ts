@@ -48,9 +48,6 @@ export async function up(knex: Knex): Promise<void> {
   await knex.raw(`CREATE INDEX reviews_engineer_state_idx ON reviews (engineer_id, (decision IS NOT NULL), submitted_at, id)
     INCLUDE (organisation_id, decision, decided_at, revision_id, design_id)`);
   await knex.raw("DROP INDEX IF EXISTS reviews_engineer_queue_idx");
-  // Statistics for the new expression column now, not at autovacuum's next visit: until then the
-  // planner guesses how many reviews are decided and may skip the index.
-  await knex.raw("ANALYZE reviews");
 }
 
 export async function down(knex: Knex): Promise<void> {

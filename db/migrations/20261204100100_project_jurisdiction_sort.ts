@@ -38,7 +38,6 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.raw("CREATE INDEX projects_org_jurisdiction_id_idx ON projects (organisation_id, criteria_jurisdiction, id)");
   await knex.raw("CREATE INDEX projects_org_jurisdiction_desc_idx ON projects (organisation_id, criteria_jurisdiction DESC NULLS LAST, id DESC)");
-  await knex.raw("ANALYZE projects");
 }
 
 export async function down(knex: Knex): Promise<void> {
