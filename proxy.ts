@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { securityHeaders } from "@/app/_lib/security-headers";
+import { servedOverHttps } from "@/app/_lib/forwarded";
 
 /**
  * Runs before every request (Next.js 16's name for middleware): makes a fresh nonce, hands the
@@ -17,7 +18,8 @@ export function proxy(request: NextRequest) {
   const headers = securityHeaders({
     nonce,
     pathname: request.nextUrl.pathname,
-    https: (process.env.APP_URL ?? "").startsWith("https://"),
+    // The same rule as the session cookie's Secure flag: APP_URL is https, or a trusted proxy says so.
+    https: servedOverHttps(request.headers),
     development: process.env.NODE_ENV === "development",
   });
   const forward = new Headers(request.headers);

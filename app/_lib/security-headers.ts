@@ -33,8 +33,13 @@ export function contentSecurityPolicy({ nonce, development }: Pick<SecurityConte
   ].join("; ");
 }
 
-/** Pages that carry a secret in their URL: their address must never travel as a Referer. */
-const TOKEN_PAGE = /^\/(reset|invite|signup)\/[^/]+\/?$/;
+/**
+ * Pages that carry a secret in their URL (the e-mailed single-use links, and the approval check's
+ * code, the only key to that public page): their address must never travel as a Referer, not even
+ * to the app's own scripts and logs. tests/app/security-headers.test.ts finds every page route
+ * with a dynamic segment that is not a record id and fails when one is missing here.
+ */
+export const TOKEN_PAGE = /^\/(reset|invite|signup|engagements|verify)\/[^/]+\/?$/;
 
 export function securityHeaders(ctx: SecurityContext): Record<string, string> {
   const headers: Record<string, string> = {
@@ -46,7 +51,8 @@ export function securityHeaders(ctx: SecurityContext): Record<string, string> {
   };
   // API answers set their own policy where they serve files (a sandbox); pages get the nonce policy.
   if (!ctx.pathname.startsWith("/api/")) headers["content-security-policy"] = contentSecurityPolicy(ctx);
-  // HSTS only means something over https; over plain http (loopback development) it is ignored anyway.
+  // HSTS only over https (the app's URL, or a trusted proxy's X-Forwarded-Proto: servedOverHttps);
+  // a header from anyone else never turns it on.
   if (ctx.https) headers["strict-transport-security"] = "max-age=31536000; includeSubDomains";
   return headers;
 }

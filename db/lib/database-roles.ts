@@ -12,7 +12,8 @@ import { psql, type Cluster } from "./postgres";
  * Run at every start, before migrations, and idempotent: on a database made before the owner role
  * existed (an earlier `npm start`, where `pierwise` owned everything) it hands every object the app
  * role owns to the owner role and grants back only row access. Default privileges give every table
- * and sequence a later migration creates the same grants.
+ * and sequence a later migration creates the same grants. The migration log (knex_migrations and
+ * its lock) is the exception: the app role holds nothing on it.
  */
 export interface DatabaseRoles {
   /** What the app connects as (DATABASE_URL). */
@@ -61,6 +62,17 @@ export function ensureDatabaseRoles(
       `GRANT SELECT, INSERT, UPDATE, DELETE ON ALL TABLES IN SCHEMA public TO ${appRole}`,
       `REVOKE ALL ON ALL SEQUENCES IN SCHEMA public FROM ${appRole}`,
       `GRANT USAGE, SELECT ON ALL SEQUENCES IN SCHEMA public TO ${appRole}`,
+      // ...but nothing on the migration log (tables and their id sequences): a forged row would make
+      // a migration look applied, a taken lock would stop every later start. On a new database knex
+      // makes these tables during the first migrations (default privileges grant them); migration
+      // 20261204400000 closes them then.
+      `DO $$ DECLARE o regclass; BEGIN
+         FOREACH o IN ARRAY ARRAY[to_regclass('public.knex_migrations'), to_regclass('public.knex_migrations_lock'),
+           to_regclass('public.knex_migrations_id_seq'), to_regclass('public.knex_migrations_lock_index_seq')] LOOP
+           CONTINUE WHEN o IS NULL;
+           EXECUTE format('REVOKE ALL ON %s FROM ${appRole}', o);
+         END LOOP;
+       END $$`,
       `ALTER DEFAULT PRIVILEGES FOR ROLE ${owner} IN SCHEMA public GRANT SELECT, INSERT, UPDATE, DELETE ON TABLES TO ${appRole}`,
       `ALTER DEFAULT PRIVILEGES FOR ROLE ${owner} IN SCHEMA public GRANT USAGE, SELECT ON SEQUENCES TO ${appRole}`,
       "COMMIT",

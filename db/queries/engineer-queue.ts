@@ -30,9 +30,9 @@ export interface EngineerQueueRow {
   failing: string[];
 }
 
-/** A review's state from the review row alone; `held` is the CTE of the approved revisions of designs with an open hold. */
+/** A review's state from the review row alone; `held` is the CTE of the designs with an open hold. */
 const STATE_SQL = `case when v.decision is null then 'waiting'
-  when v.decision = 'approve' and v.revision_id in (select id from held) then 'on_hold'
+  when v.decision = 'approve' and v.design_id in (select id from held) then 'on_hold'
   else 'decided' end`;
 
 /**
@@ -55,16 +55,19 @@ export interface QueueFilter {
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
  *   their designs (a few rows);
- * - `held`: the approved revisions of designs with an open hold, in the organisations they review
- *   for, through the approved-revisions index (open holds are few). Only an approval can be on
- *   hold, and an approval is recorded with its revision's status in one transaction
- *   (app/_lib/review/workflow.ts; 20261203100000 refuses the status without the record), after
- *   which the pin keeps it;
- * - `picked`: the engineer's visible reviews from the reviews table alone (index on engineer_id),
- *   with the state and sort key; a review in another organisation is checked against
- *   `engaged_designs` through its revision (one primary-key probe). Names of contractor, project
- *   and design are joined here only when the search or the sort needs them;
- * - `page`: sorted, counted (a window count over `picked`, so no second statement) and limited;
+ * - `held`: the designs with an open hold, in the organisations they review for (open holds are
+ *   few; read from design_holds alone). An approval is on hold when its design is held: it is
+ *   recorded with its revision's status in one transaction (app/_lib/review/workflow.ts;
+ *   20261203100000 refuses the status without the record), after which the pin keeps both, so an
+ *   approval's revision is always an approved revision of that design;
+ * - a review is visible when it is in the organisation they are signed in to, or its design
+ *   (copied onto the review, 20261204100000) is one of `engaged_designs`: both told from the index;
+ * - the default order (state, no search) reads each state in its order straight from the
+ *   `(engineer_id, decided or not, submitted_at, id)` index and stops at the page: waiting ones,
+ *   the few on hold (by revision), decided ones. The count is an index-only count per state
+ *   (`counts`), apart from the page;
+ * - any other order or a search: `picked` is every visible review with its state and sort key
+ *   (names joined only when the search or sort needs them), sorted and counted by a window count;
  * - only the page's rows are joined to revision, design, project and contractor, and only their
  *   result JSON is read (for the failing checks; the footing figures are columns).
  */
@@ -76,47 +79,88 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const page = Math.max(1, Math.floor(query.page ?? 1));
   const names = Boolean(q) || sort === "projectName" || sort === "designName";
   const contractorName = Boolean(q) || sort === "contractor";
-  const bindings: unknown[] = [user.userId, user.organisationId, user.userId, user.organisationId];
-  const where: string[] = [];
-  // Waiting is told by the review alone: no held revisions to look up. (No "decision IS NULL" here:
-  // the planner would take the open-queue index and its table rows over the index-only scan.)
+  const bindings: unknown[] = [user.userId, user.organisationId];
+  // Waiting is told by the review alone: no held revisions to look up.
   const waitingOnly = filter.state === "waiting";
-  if (filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor)) {
-    where.push("v.organisation_id = ?");
-    bindings.push(filter.contractor);
-  }
-  if (q) {
-    where.push("(pn.name ILIKE ? ESCAPE '\\' OR dn.name ILIKE ? ESCAPE '\\' OR o.name ILIKE ? ESCAPE '\\')");
-    bindings.push(likePattern(q), likePattern(q), likePattern(q));
-  }
-  const stateWhere = filter.state ? "WHERE state = ?" : "";
-  if (filter.state) bindings.push(filter.state);
+  const contractor = filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor) ? filter.contractor : undefined;
+  // The visible reviews' where-clause; its `?`s are bound once per use (`visibleBindings`).
+  const visible = `v.engineer_id = ? AND (v.organisation_id = ? OR v.design_id IN (SELECT id FROM engaged_designs))${contractor ? " AND v.organisation_id = ?" : ""}`;
+  const visibleBindings = [user.userId, user.organisationId, ...(contractor ? [contractor] : [])];
   const order = `${QUEUE_SORTS[sort]} ${dir}${NOT_NULL_SORTS.has(sort) ? "" : " NULLS LAST"}, submitted_at, id`;
-  bindings.push(pageSize, (page - 1) * pageSize);
-  const sql = `
+  const head = `
     WITH engaged AS MATERIALIZED (
       SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
     ), engaged_designs AS MATERIALIZED (
       SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
-      SELECT r.id FROM design_holds h JOIN revisions r ON r.design_id = h.design_id AND r.status = 'approved'
+      SELECT DISTINCT h.design_id AS id FROM design_holds h
       WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
         ${waitingOnly ? "AND false" : ""}
-    ), visible AS (
-      SELECT v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at,
+    )`;
+  const columns = "v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at";
+  let body: string;
+  if (sort === "state" && !q) {
+    // Rows any page up to this one can need from one state: a later page reads further, not more states.
+    const reach = page * pageSize;
+    bindings.push(...visibleBindings); // counts, written before the branches
+    const branches: string[] = [];
+    // `(decision IS NOT NULL) IS FALSE / IS TRUE` match the index's second column as written
+    // (a plain `decision IS NULL` would not: the planner compares expressions, not meanings).
+    if (!filter.state || filter.state === "waiting") {
+      branches.push(`(SELECT ${columns}, 'waiting' AS state FROM reviews v
+        WHERE ${visible} AND (v.decision IS NOT NULL) IS FALSE ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
+      bindings.push(...visibleBindings);
+    }
+    if (!filter.state || filter.state === "on_hold") {
+      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
+        WHERE ${visible} AND v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))`);
+      bindings.push(...visibleBindings);
+    }
+    if (!filter.state || filter.state === "decided") {
+      branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v
+        WHERE ${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))
+        ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
+      bindings.push(...visibleBindings);
+    }
+    const total = { waiting: "waiting", on_hold: "on_hold", decided: "everything - waiting - on_hold" }[filter.state ?? "waiting"];
+    body = `, counts AS (
+      SELECT count(*) FILTER (WHERE v.decision IS NULL) AS waiting,
+             count(*) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)) AS on_hold,
+             count(*) AS everything
+      FROM reviews v WHERE ${visible}
+    ), picked AS (
+      ${branches.join(" UNION ALL ")}
+    ), page AS (
+      SELECT picked.*, (SELECT ${filter.state ? total : "everything"} FROM counts) AS total, row_number() OVER (ORDER BY ${order}) AS ord
+      FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
+    )`;
+  } else {
+    const where: string[] = [];
+    const whereBindings: unknown[] = [];
+    if (q) {
+      where.push("(pn.name ILIKE ? ESCAPE '\\' OR dn.name ILIKE ? ESCAPE '\\' OR o.name ILIKE ? ESCAPE '\\')");
+      whereBindings.push(likePattern(q), likePattern(q), likePattern(q));
+    }
+    const stateWhere = filter.state ? "WHERE state = ?" : "";
+    body = `, visible AS (
+      SELECT ${columns},
              ${contractorName ? "o.name" : "NULL::text"} AS contractor,
              ${names ? "pn.name AS project_name, dn.name AS design_name" : "NULL::text AS project_name, NULL::text AS design_name"},
              ${STATE_SQL} AS state
       FROM reviews v ${contractorName ? "JOIN organisations o ON o.id = v.organisation_id" : ""}
-      ${names ? "JOIN revisions rn ON rn.id = v.revision_id JOIN designs dn ON dn.id = rn.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
-      WHERE v.engineer_id = ?
-        AND (v.organisation_id = ? OR (SELECT er.design_id FROM revisions er WHERE er.id = v.revision_id) IN (SELECT id FROM engaged_designs))
+      ${names ? "JOIN designs dn ON dn.id = v.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
+      WHERE ${visible}
         ${where.map((w) => `AND ${w}`).join(" ")}
     ), picked AS (
       SELECT * FROM visible ${stateWhere}
     ), page AS (
       SELECT picked.*, count(*) OVER () AS total, row_number() OVER (ORDER BY ${order}) AS ord FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
-    )
+    )`;
+    bindings.push(...visibleBindings, ...whereBindings);
+    if (filter.state) bindings.push(filter.state);
+  }
+  bindings.push(pageSize, (page - 1) * pageSize);
+  const sql = `${head}${body}
     SELECT page.id AS "reviewId", r.id AS "revisionId", r.number, d.id AS "designId", d.name AS "designName", p.id AS "projectId",
            p.name AS "projectName", p.state AS "projectState", o.id AS "organisationId", o.name AS contractor, page.state, page.decision,
            page.submitted_at AS "submittedAt", page.decided_at AS "decidedAt", page.total, page.ord,
@@ -153,18 +197,19 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
 /**
  * The contractors that appear in this engineer's queue, for the filter: their own organisation when
  * a review of it was submitted to them, and each organisation that engaged them on a project with
- * a review submitted to them. Each is one index probe, not a pass over the queue.
+ * a review submitted to them. One early-stopping probe per organisation (the engineer's reviews in
+ * it, until one is on a project they are engaged on), not one per engagement.
  */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
   const { rows } = await db.raw(
     `SELECT o.id, o.name FROM organisations o
      WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
-        OR o.id IN (SELECT g.organisation_id FROM engagements g
-                    WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND EXISTS (
-                      SELECT 1 FROM designs d JOIN revisions r ON r.design_id = d.id JOIN reviews v ON v.revision_id = r.id
-                      WHERE d.project_id = g.project_id AND v.engineer_id = ?))
+        OR (o.id IN (SELECT g.organisation_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted')
+            AND EXISTS (SELECT 1 FROM reviews v JOIN designs d ON d.id = v.design_id
+                        JOIN engagements g ON g.project_id = d.project_id AND g.engineer_user_id = ? AND g.status = 'accepted'
+                        WHERE v.engineer_id = ? AND v.organisation_id = o.id))
      ORDER BY o.name`,
-    [user.organisationId, user.userId, user.userId, user.userId],
+    [user.organisationId, user.userId, user.userId, user.userId, user.userId],
   );
   return rows;
 }

@@ -43,7 +43,7 @@ export async function getProject(id: string): Promise<Project | undefined> {
   return db("projects").where({ id }).first(columns);
 }
 
-export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "c.jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
+export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "p.criteria_jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
 const NOT_NULL_SORTS = new Set(["name", "state", "designCount", "updatedAt"]);
 
 /**
@@ -52,9 +52,11 @@ const NOT_NULL_SORTS = new Set(["name", "state", "designCount", "updatedAt"]);
  * serves the sort (index-only: organisation, sort column, id; migration 20261203500000), counted
  * in the same pass by a window count, and only those rows are joined to their card and
  * organisation. A later page steps over index entries only (about 300 to a page of the index),
- * never over joined rows. The design count is a column kept by a trigger; `q` goes through the
+ * never over joined rows. The design count and the card's jurisdiction (its sort) are columns
+ * kept by triggers (20261204100100); `q` goes through the
  * trigram index over name, address and state, and matches a criteria card through its id (the
- * organisation's matching cards are an array computed once in the same statement). With
+ * organisation's matching cards are looked up first, so their ids are known when the page is
+ * planned). With
  * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside
  * engineer): those ids are looked up first, so a person with none gets the organisation's index
  * alone, not an OR the index cannot serve.
@@ -78,13 +80,19 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     .orderByRaw(order)
     .limit(pageSize)
     .offset((page - 1) * pageSize);
-  if (sort === "jurisdiction") picked.leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id");
   if (q) {
     const pattern = likePattern(q);
+    // The organisation's cards whose jurisdiction matches, first (a probe of their trigram index):
+    // as known ids the planner ORs them with the projects' trigram index (a BitmapOr), while an
+    // array computed inside the statement made it read every project of the organisation and test
+    // each; with none (the usual case) there is no OR at all.
+    const cards: string[] = await db("criteria_cards").where("organisation_id", organisationId)
+      .whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [pattern]).pluck("id");
     // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
-    picked.where((w) =>
-      w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern])
-        .orWhereRaw("p.criteria_card_id = ANY(ARRAY(SELECT id FROM criteria_cards WHERE organisation_id = ? AND jurisdiction ILIKE ? ESCAPE '\\'))", [organisationId, pattern]));
+    picked.where((w) => {
+      w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern]);
+      if (cards.length) w.orWhereIn("p.criteria_card_id", cards);
+    });
   }
   const rows: (ProjectRow & { total: string })[] = await db
     .from(picked.as("pg"))

@@ -22,13 +22,15 @@ const json = <T>(v: unknown): T => (typeof v === "string" ? JSON.parse(v) : v) a
  * designer is working on now. Oldest comment first.
  */
 export async function pinnedCommentsOfLatestDecision(designId: string, upToNumber: number, trx: Knex = db): Promise<PinnedCommentRow[]> {
-  const decided = await trx("revisions as r")
-    .join("reviews as v", "v.revision_id", "r.id")
-    .where("r.design_id", designId)
-    .where("r.number", "<=", upToNumber)
+  // One backward probe of reviews (design_id, revision_number), not a review lookup per earlier revision.
+  const latest = trx("reviews as v")
+    .where("v.design_id", designId)
+    .where("v.revision_number", "<=", upToNumber)
     .whereNotNull("v.decision")
-    .orderBy("r.number", "desc")
-    .first("r.id", "r.number", "r.input");
+    .orderBy("v.revision_number", "desc")
+    .limit(1)
+    .select("v.revision_id");
+  const decided = await trx("revisions as r").whereIn("r.id", latest).first("r.id", "r.number", "r.input");
   if (!decided) return [];
   const rows = await trx("review_comments as c")
     .join("reviews as v", "v.id", "c.review_id")

@@ -159,23 +159,29 @@ export async function approvedSpecs(organisationId: string, options: { older?: F
   return Object.assign([...current, ...superseded], { more: false });
 }
 
+/**
+ * The latest decided review of this design before revision `number` (by `engineerId` when given),
+ * read backwards from the reviews index on (design_id, revision_number): one probe however many
+ * revisions the design has (20261204100000). Only that revision's input is read.
+ */
+function lastDecided(designId: string, number: number, engineerId?: string) {
+  const latest = db("reviews as v")
+    .where("v.design_id", designId)
+    .where("v.revision_number", "<", number)
+    .whereNotNull("v.decision")
+    .modify((qb) => { if (engineerId) qb.where("v.decided_by", engineerId); })
+    .orderBy("v.revision_number", "desc")
+    .limit(1)
+    .select("v.revision_id");
+  return db("revisions as r").whereIn("r.id", latest).first("r.id", "r.number", "r.input");
+}
+
 /** The latest revision of this design, before `number`, that this engineer decided (for "changes since your last review"). */
 export async function lastReviewedBy(designId: string, number: number, engineerId: string): Promise<{ id: string; number: number; input: unknown } | undefined> {
-  return db("revisions as r")
-    .join("reviews as v", "v.revision_id", "r.id")
-    .where({ "r.design_id": designId, "v.decided_by": engineerId })
-    .where("r.number", "<", number)
-    .orderBy("r.number", "desc")
-    .first("r.id", "r.number", "r.input");
+  return lastDecided(designId, number, engineerId);
 }
 
 /** The latest earlier revision of this design that anyone decided. */
 export async function lastReviewed(designId: string, number: number): Promise<{ id: string; number: number; input: unknown } | undefined> {
-  return db("revisions as r")
-    .join("reviews as v", "v.revision_id", "r.id")
-    .where({ "r.design_id": designId })
-    .whereNotNull("v.decision")
-    .where("r.number", "<", number)
-    .orderBy("r.number", "desc")
-    .first("r.id", "r.number", "r.input");
+  return lastDecided(designId, number);
 }

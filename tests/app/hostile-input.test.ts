@@ -16,6 +16,7 @@ import { POST as submit } from "@/app/api/revisions/[revisionId]/submit/route";
 import { POST as signIn } from "@/app/api/session/route";
 import { POST as invite } from "@/app/api/invitations/route";
 import { PATCH as patchMember } from "@/app/api/members/[membershipId]/route";
+import { POST as engage } from "@/app/api/projects/[projectId]/engagements/route";
 import { freshMember } from "../support/accounts";
 import { actAs, jsonRequest, params } from "../support/next-context";
 import { DESIGNER, ENGINEER, makeDesign } from "../support/review-fixtures";
@@ -75,6 +76,7 @@ describe("hostile JSON bodies: never a 5xx, every 4xx named", () => {
     ["POST /api/session", DESIGNER, signIn as Route, () => ({}), ["email", "password"]],
     ["POST /api/invitations", "admin@demo.pierwise.test", invite as Route, () => ({}), ["email", "roles"]],
     ["PATCH /api/members/:id", "admin@demo.pierwise.test", patchMember as Route, () => ({ membershipId }), ["roles", "active"]],
+    ["POST /api/projects/:id/engagements", DESIGNER, engage as Route, () => ({ projectId: design.projectId }), ["email", "message"]],
   ];
   for (const [label, who, route, routeParams, keys] of routes) {
     it(label, async () => {

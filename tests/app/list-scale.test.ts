@@ -2,8 +2,10 @@
  * The list behaviours that keep a large organisation's pages cheap (issue 19) still show the right
  * rows: the field list's current-then-superseded order from designs.approved_revision_id, the
  * design count kept by a trigger, the footing columns written with the revision, project search
- * through the criteria card, and the audit log's keyset pages.
+ * through the criteria card, the jurisdiction sort from the project's copy of its card's
+ * jurisdiction, and the audit log's keyset pages.
  */
+import crypto from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
@@ -88,6 +90,56 @@ describe("project and revision lists", () => {
       expected.map((r) => [r.number, r.result.footing.depthIn, r.result.footing.diameterIn, r.result.footing.pass]));
     const designs = await listDesigns(projectId);
     expect(designs.rows[0].depthIn).toBe(stored[1].result.footing.depthIn);
+  });
+
+  it("sorts by the card's jurisdiction (a copy kept on the project) in the card's order, cardless last, through renames, moves and deletions", async () => {
+    // A fresh organisation, so other suites' projects do not share the list.
+    const [org] = await db("organisations").insert({ name: `Jurisdiction sort test ${crypto.randomUUID().slice(0, 6)} (invented)` }).returning("id");
+    const card = async (jurisdiction: string) =>
+      (await db("criteria_cards").insert({ organisation_id: org.id, jurisdiction, state: "CO", values: JSON.stringify({}) }).returning("id"))[0].id as string;
+    const [alder, birch, cedar] = [await card("Alder County"), await card("Birch Township"), await card("Cedar Valley")];
+    const cards = [birch, alder, null, cedar, birch, null, alder, cedar];
+    for (const [i, c] of cards.entries()) await db("projects").insert({ organisation_id: org.id, name: `Sort site ${i}`, address: "", state: "CO", criteria_card_id: c });
+    // The reference reads each card's jurisdiction itself, not the copy.
+    const reference = async (dir: "asc" | "desc") => {
+      const rows = await db("projects as p").leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id").where("p.organisation_id", org.id).select("p.id", "c.jurisdiction");
+      const byId = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+      return rows.sort((a, b) => (a.jurisdiction === null) !== (b.jurisdiction === null) ? (a.jurisdiction === null ? 1 : -1)
+        : (dir === "asc" ? 1 : -1) * (byId(a.jurisdiction ?? "", b.jurisdiction ?? "") || byId(a.id, b.id))).map((r) => [r.id, r.jurisdiction]);
+    };
+    const listed = async (dir: "asc" | "desc") => {
+      const rows: [string, string | null][] = [];
+      for (let page = 1; page <= 10; page++) {
+        const got = await listProjects(org.id, { sort: "jurisdiction", dir, page, pageSize: 2 });
+        expect(got.total).toBe(cards.length);
+        rows.push(...got.rows.map((r) => [r.id, r.jurisdiction] as [string, string | null]));
+        if (got.rows.length < 2) break;
+      }
+      return rows;
+    };
+    const same = async () => {
+      for (const dir of ["asc", "desc"] as const) expect(await listed(dir)).toEqual(await reference(dir));
+    };
+    await same();
+    await db("criteria_cards").where({ id: birch }).update({ jurisdiction: "Aspen Borough" });
+    await same();
+    const moved = (await db("projects").where({ organisation_id: org.id, criteria_card_id: null }).first("id")).id;
+    await db("projects").where({ id: moved }).update({ criteria_card_id: alder });
+    await db("criteria_cards").where({ id: cedar }).delete();
+    await same();
+    // A value written to the copy does not stick: it is the card's.
+    await db("projects").where({ id: moved }).update({ criteria_jurisdiction: "Zebra County" });
+    expect((await db("projects").where({ id: moved }).first("criteria_jurisdiction")).criteria_jurisdiction).toBe("Alder County");
+    await same();
+  });
+
+  it("finds projects by a card's jurisdiction and by their own words in one search", async () => {
+    const [card] = await db("criteria_cards").insert({ organisation_id: DEMO_ORG_ID, jurisdiction: "Yarrowfield County (test)", state: "CO", values: JSON.stringify({}), created_by: await userId(DESIGNER) }).returning("id");
+    await makeDesign({ projectName: "Card-only site", criteriaCardId: card.id });
+    await makeDesign({ projectName: "Yarrowfield ranch site" });
+    const found = await listProjects(DEMO_ORG_ID, { q: "yarrowfield", sort: "name", dir: "asc" });
+    expect([found.rows.map((r) => r.name), found.total]).toEqual([["Card-only site", "Yarrowfield ranch site"], 2]);
+    expect((await listProjects(DEMO_ORG_ID, { q: "yarrowfield county" })).rows.map((r) => r.name)).toEqual(["Card-only site"]);
   });
 });
 

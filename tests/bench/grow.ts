@@ -79,7 +79,7 @@ export interface GrowOptions {
    * For the benchmark's own throwaway cluster, as the superuser: triggers (foreign-key checks
    * included) are off while the rows go in, and the secondary indexes of the grown tables are
    * dropped first and rebuilt after (what a bulk load does); the columns the triggers keep
-   * (projects.design_count, designs.approved_revision_id / approved_at) are then set in one
+   * (projects.design_count, designs.approved_revision_id / approved_at, projects.criteria_jurisdiction) are then set in one
    * statement each. The rows are the same as without it. `extra` connections take a share of the
    * units each, so the load uses every core.
    */
@@ -87,8 +87,12 @@ export interface GrowOptions {
 }
 
 /** The INSERT statements of units [from, to), in dependency order. */
-function statements(from: number, to: number, verifiable: boolean, engaging: boolean): string[] {
+function statements(from: number, to: number, verifiable: boolean, engaging: boolean, reviewDesign: boolean): string[] {
   const units = `generate_series(${from}, ${to - 1}) u`;
+  // Reviews carry their revision's design and number once 20261204100000 ran (a trigger fills them,
+  // and a bulk load has triggers off, so the rows name them; the trigger would write the same).
+  const designColumns = reviewDesign ? ", design_id, revision_number" : "";
+  const designValues = reviewDesign ? ", md5('d' || u || '-' || k || '-' || j)::uuid, CASE WHEN j = 0 THEN 5 ELSE 10 END" : "";
   // Approvals carry a verify code and a facts snapshot once the approval-signature migration ran.
   const verifyColumns = verifiable ? ", verify_code, facts_snapshot" : "";
   const verifyValues = verifiable
@@ -130,13 +134,13 @@ function statements(from: number, to: number, verifiable: boolean, engaging: boo
       SELECT o.id, md5('p' || u || '-0')::uuid, 'engineer@outside.pierwise.test', 'accepted', o.outside, md5('eh' || u) || md5('eg' || u), o.designer, now()
       FROM ${units} ${org} WHERE o.outside IS NOT NULL`] : []),
     `INSERT INTO reviews (id, revision_id, organisation_id, engineer_id, submitted_by, submitted_at, decision, decided_by, decided_at,
-                          engineer_name, licence_number, licence_state, licence_expires_on${verifyColumns})
+                          engineer_name, licence_number, licence_state, licence_expires_on${verifyColumns}${designColumns})
       SELECT md5('v' || u || '-' || k || '-' || j)::uuid, md5('r' || u || '-' || k || '-' || j || '-' || (CASE WHEN j = 0 THEN 5 ELSE 10 END))::uuid,
              o.id, coalesce(CASE WHEN k = 0 THEN o.outside END, o.engineer), o.designer, now() - (u * 22 + k) * interval '7 minutes' + interval '2 minutes',
              (CASE j WHEN 0 THEN 'approve' WHEN 1 THEN 'request_changes' END)::review_decision,
              CASE WHEN j < 2 THEN coalesce(CASE WHEN k = 0 THEN o.outside END, o.engineer) END, CASE WHEN j < 2 THEN now() - (u * 22 + k) * interval '7 minutes' + interval '4 minutes' END,
              CASE WHEN j < 2 THEN 'Generated Engineer, P.E.' END, CASE WHEN j = 0 THEN 'PE-BENCH' END, CASE WHEN j = 0 THEN 'CO' END,
-             CASE WHEN j = 0 THEN date '2030-12-31' END${verifyValues}
+             CASE WHEN j = 0 THEN date '2030-12-31' END${verifyValues}${designValues}
       FROM ${units} CROSS JOIN generate_series(0, 21) k CROSS JOIN generate_series(0, 2) j ${org}`,
     `INSERT INTO review_comments (review_id, field_path, body, author_id)
       SELECT md5('v' || u || '-' || k || '-1')::uuid, 'site.windSpeedMph', 'Confirm the wind speed against the county table.', o.engineer
@@ -163,6 +167,7 @@ export async function grow(client: pg.Client, from: number, to: number, options:
   const verifiable = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'verify_code'")).rowCount === 1;
   // Once engagements exist, the seeded outside engineer is engaged on one project of each demo unit.
   const engaging = (await client.query("SELECT 1 FROM bench.orgs WHERE outside IS NOT NULL")).rowCount === 1;
+  const reviewDesign = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'design_id'")).rowCount === 1;
   const started = Date.now();
   const seconds = (since: number) => `${((Date.now() - since) / 1000).toFixed(1)} s`;
   const notes: string[] = [];
@@ -187,7 +192,7 @@ export async function grow(client: pg.Client, from: number, to: number, options:
     // One transaction per share: an approved revision needs its approval record by commit
     // (20261203100000), and the reviews are inserted after the revisions they refer to.
     await c.query("BEGIN");
-    for (const sql of statements(a, b, verifiable, engaging)) {
+    for (const sql of statements(a, b, verifiable, engaging, reviewDesign)) {
       const t = Date.now();
       await c.query(sql);
       const table = /INSERT INTO (\w+)/.exec(sql)![1];
@@ -198,8 +203,8 @@ export async function grow(client: pg.Client, from: number, to: number, options:
   notes.push(...[...took].map(([table, ms]) => `${table} ${(ms / 1000).toFixed(1)} s`));
   if (options.bulk) {
     for (const c of clients) await c.query("RESET session_replication_role");
-    // What the triggers would have kept: design counts, and each design's newest approved revision
-    // (approved when its approval was decided).
+    // What the triggers would have kept: design counts, each design's newest approved revision
+    // (approved when its approval was decided), each project's card jurisdiction.
     const t = Date.now();
     await client.query(`UPDATE projects p SET design_count = n.n FROM (SELECT project_id, count(*)::int AS n FROM designs GROUP BY project_id) n
       WHERE n.project_id = p.id AND p.design_count <> n.n`);
@@ -208,6 +213,11 @@ export async function grow(client: pg.Client, from: number, to: number, options:
         FROM revisions r LEFT JOIN reviews v ON v.revision_id = r.id AND v.decision = 'approve'
         WHERE r.status = 'approved' ORDER BY r.design_id, r.number DESC, v.decided_at DESC) a
       WHERE a.design_id = d.id AND d.approved_revision_id IS DISTINCT FROM a.id`);
+    // Each project's copy of its card's jurisdiction, once 20261204100100 ran (the new rows only).
+    if ((await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'projects' AND column_name = 'criteria_jurisdiction'")).rowCount === 1) {
+      await client.query(`UPDATE projects p SET criteria_jurisdiction = c.jurisdiction FROM criteria_cards c
+        WHERE c.id = p.criteria_card_id AND p.criteria_jurisdiction IS DISTINCT FROM c.jurisdiction`);
+    }
     notes.push(`trigger-kept columns ${seconds(t)}`);
     const ti = Date.now();
     await Promise.all(clients.map(async (c, i) => {

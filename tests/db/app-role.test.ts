@@ -3,7 +3,9 @@
  * it cannot empty a table, switch off, drop or rewrite a trigger, or make tables; and no role can
  * mark a revision approved without the engineer's approval record. Also: a database made before
  * the owner role existed (the app role owned everything, as an earlier `npm start` left it) is
- * handed over by db/lib/database-roles.ts, and doing so twice changes nothing.
+ * handed over by db/lib/database-roles.ts, and doing so twice changes nothing. The app role cannot
+ * write the migration log, and a column a trigger keeps cannot be forged by any role (migration
+ * 20261204400000): every column a trigger function writes has a BEFORE trigger that works it out again.
  */
 import { execFileSync } from "node:child_process";
 import crypto from "node:crypto";
@@ -15,7 +17,7 @@ import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { ensureDatabaseRoles } from "@/db/lib/database-roles";
 import { psql, type Cluster } from "@/db/lib/postgres";
 import { ownerDb } from "../support/owner-db";
-import { DESIGNER, ENGINEER, makeDesign, userId } from "../support/review-fixtures";
+import { DESIGNER, ENGINEER, freshApproved, makeDesign, userId } from "../support/review-fixtures";
 
 const appRole = decodeURIComponent(new URL(process.env.DATABASE_URL!).username);
 const cluster = JSON.parse(process.env.PIERWISE_TEST_CLUSTER ?? "null") as Cluster | null;
@@ -111,6 +113,122 @@ describe("approved needs an approval record (trigger)", () => {
   });
 });
 
+describe("the migration log is closed to the app's role", () => {
+  it("holds no privilege on knex_migrations, its lock or their sequences, and every write is refused", async () => {
+    for (const table of ["knex_migrations", "knex_migrations_lock"]) {
+      const granted = (await db.raw(`SELECT array(SELECT p FROM unnest(ARRAY['SELECT', 'INSERT', 'UPDATE', 'DELETE', 'TRUNCATE', 'REFERENCES', 'TRIGGER']) p
+        WHERE has_table_privilege(?, ?::regclass, p)) AS granted`, [appRole, table])).rows[0].granted;
+      expect(granted, table).toEqual([]);
+    }
+    for (const sequence of ["knex_migrations_id_seq", "knex_migrations_lock_index_seq"]) {
+      expect((await db.raw("SELECT has_sequence_privilege(?, ?, 'USAGE') AS ok", [appRole, sequence])).rows[0].ok, sequence).toBe(false);
+    }
+    await expect(db.raw("INSERT INTO knex_migrations (name, batch, migration_time) VALUES ('29991231000000_forged.ts', 99, now())")).rejects.toThrow(/permission denied/);
+    await expect(db.raw("DELETE FROM knex_migrations WHERE name LIKE '20261204400000%'")).rejects.toThrow(/permission denied/);
+    await expect(db.raw("UPDATE knex_migrations_lock SET is_locked = 1")).rejects.toThrow(/permission denied/);
+    // The owner still reads and writes it (migrations run as the owner).
+    expect(Number((await ownerDb.raw("SELECT count(*) AS n FROM knex_migrations")).rows[0].n)).toBeGreaterThan(10);
+  });
+});
+
+interface TriggerRow { table: string; name: string; type: number; columns: string[]; prosrc: string }
+
+async function triggers(conn: typeof db): Promise<TriggerRow[]> {
+  return (await conn.raw(`SELECT t.tgrelid::regclass::text AS "table", t.tgname AS name, t.tgtype AS type, p.prosrc,
+      array(SELECT a.attname::text FROM pg_attribute a WHERE a.attrelid = t.tgrelid AND a.attnum = ANY (t.tgattr)) AS columns
+    FROM pg_trigger t JOIN pg_proc p ON p.oid = t.tgfoid
+    WHERE NOT t.tgisinternal AND t.tgrelid IN (SELECT oid FROM pg_class WHERE relnamespace = 'public'::regnamespace)`)).rows;
+}
+
+// pg_trigger.tgtype bits (src/include/catalog/pg_trigger.h): ROW 1, BEFORE 2, INSERT 4, UPDATE 16.
+const ROW = 1, BEFORE = 2, INSERT = 4, UPDATE = 16;
+const code = (prosrc: string) => prosrc.replace(/--[^\n]*/g, "");
+/** The NEW.<column>s a trigger function sets: `NEW.c := …` or `SELECT … INTO NEW.a, NEW.b`. */
+function assigned(prosrc: string): string[] {
+  const src = code(prosrc);
+  const direct = [...src.matchAll(/\bNEW\.(\w+)\s*:=/g)].map((m) => m[1]);
+  const into = [...src.matchAll(/\bINTO\s+((?:NEW\.\w+\s*,\s*)*NEW\.\w+)/gi)].flatMap((m) => [...m[1].matchAll(/NEW\.(\w+)/g)].map((c) => c[1]));
+  return [...direct, ...into];
+}
+
+/**
+ * Columns triggers keep, as "table.column": those a trigger function writes into another row
+ * (`UPDATE t SET c = …`) and those a BEFORE row trigger sets on the row being written.
+ */
+function keptColumns(rows: TriggerRow[]): string[] {
+  const kept = new Set<string>();
+  for (const { prosrc } of rows) {
+    for (const m of code(prosrc).matchAll(/\bUPDATE\s+(?:public\.)?(\w+)(?:\s+(?:AS\s+)?(?!SET\b)\w+)?\s+SET\s+([\s\S]+?)\s+(?:WHERE|FROM|RETURNING)\b/gi)) {
+      for (const c of m[2].matchAll(/(?:^|,)\s*(\w+)\s*=/g)) kept.add(`${m[1]}.${c[1]}`);
+    }
+  }
+  for (const t of rows) if ((t.type & (ROW | BEFORE)) === (ROW | BEFORE)) for (const c of assigned(t.prosrc)) kept.add(`${t.table}.${c}`);
+  return [...kept].sort();
+}
+
+/**
+ * Whether a write to table.column is always worked out again: a BEFORE row trigger on that table,
+ * fired on INSERT and on UPDATE (of every column, or of a list naming this one), that sets NEW.column.
+ */
+function recomputed(rows: TriggerRow[], table: string, column: string): boolean {
+  return rows.some((t) => t.table === table && (t.type & (ROW | BEFORE | INSERT | UPDATE)) === (ROW | BEFORE | INSERT | UPDATE)
+    && (t.columns.length === 0 || t.columns.includes(column)) && assigned(t.prosrc).includes(column));
+}
+
+describe("columns a trigger keeps cannot be forged", () => {
+  it("every column a trigger function writes has a BEFORE INSERT OR UPDATE trigger on its table that works it out again", async () => {
+    const rows = await triggers(db);
+    const kept = keptColumns(rows);
+    // The reader finds the known ones (a broken pattern would find nothing and pass).
+    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at"]));
+    const unguarded = kept.filter((tc) => !recomputed(rows, ...(tc.split(".") as [string, string])));
+    expect(unguarded, "kept columns with no BEFORE INSERT OR UPDATE trigger assigning NEW.<column> (DEVELOPERS.md, Columns a trigger keeps)").toEqual([]);
+  });
+
+  it("projects.design_count: a direct write, from the app role or the owner, is the real count again", async () => {
+    const { projectId } = await makeDesign();
+    const real = async () => Number((await db("designs").where({ project_id: projectId }).count({ n: "*" }))[0].n);
+    const stored = async () => (await db("projects").where({ id: projectId }).first("design_count")).design_count;
+    expect(await stored()).toBe(1);
+    await db("projects").where({ id: projectId }).update({ design_count: 500 });
+    expect(await stored()).toBe(await real());
+    await ownerDb("projects").where({ id: projectId }).update({ design_count: 0, notes: "owner edit" });
+    expect(await stored()).toBe(1);
+    // The keeping trigger still counts: a second design, then one deleted.
+    const [second] = await db("designs").insert({ project_id: projectId, organisation_id: DEMO_ORG_ID, name: "Array B", created_by: await userId(DESIGNER) }).returning("id");
+    expect(await stored()).toBe(2);
+    await db("designs").where({ id: second.id }).delete();
+    expect(await stored()).toBe(1);
+    // A new project cannot start with designs it does not have.
+    const [forged] = await db("projects").insert({ organisation_id: DEMO_ORG_ID, name: "Forged count", state: "CO", design_count: 40 }).returning("design_count");
+    expect(forged.design_count).toBe(0);
+  });
+
+  it("designs.approved_revision_id and approved_at: a direct write keeps the newest approved revision and its time", async () => {
+    const draft = await makeDesign();
+    const approvalOf = async (id: string) => db("designs").where({ id }).first("approved_revision_id", "approved_at");
+    // A draft cannot be made to look approved.
+    await db("designs").where({ id: draft.designId }).update({ approved_revision_id: draft.revisionId, approved_at: new Date("2020-01-01T00:00:00Z") });
+    expect(await approvalOf(draft.designId)).toEqual({ approved_revision_id: null, approved_at: null });
+    // An approved design keeps its approval, whatever is written.
+    const approved = await freshApproved();
+    const truth = await approvalOf(approved.designId);
+    expect(truth.approved_revision_id).toBe(approved.revisionId);
+    expect(truth.approved_at).toBeInstanceOf(Date);
+    await db("designs").where({ id: approved.designId }).update({ approved_revision_id: null });
+    expect(await approvalOf(approved.designId)).toEqual(truth);
+    await db("designs").where({ id: approved.designId }).update({ approved_at: new Date("2001-01-01T00:00:00Z") });
+    expect(await approvalOf(approved.designId)).toEqual(truth);
+    await ownerDb("designs").where({ id: approved.designId }).update({ approved_revision_id: draft.revisionId, name: "Renamed by owner" });
+    expect(await approvalOf(approved.designId)).toEqual(truth);
+    // A new design cannot claim another design's approval.
+    const [forged] = await db("designs")
+      .insert({ project_id: draft.projectId, organisation_id: DEMO_ORG_ID, name: "Forged", created_by: await userId(DESIGNER), approved_revision_id: approved.revisionId, approved_at: new Date() })
+      .returning(["approved_revision_id", "approved_at"]);
+    expect(forged).toEqual({ approved_revision_id: null, approved_at: null });
+  });
+});
+
 describe("handing over a database the app role owned (an earlier npm start)", () => {
   it("moves every object to the owner role, leaves rows intact, and is idempotent", { timeout: 240_000 }, async () => {
     expect(cluster, "npm test passes its cluster in PIERWISE_TEST_CLUSTER").toBeTruthy();
@@ -144,8 +262,10 @@ describe("handing over a database the app role owned (an earlier npm start)", ()
           const owned = await app.query(`SELECT count(*) AS n FROM pg_class c JOIN pg_namespace n ON n.oid = c.relnamespace
             WHERE n.nspname = 'public' AND c.relowner = current_user::regrole`);
           expect(Number(owned.rows[0].n)).toBe(0);
-          // Rows still move as the app needs.
+          // Rows still move as the app needs; the migration log does not (round 0: before this branch's migrations ran).
           await app.query("UPDATE organisations SET name = name");
+          await expect(app.query("INSERT INTO knex_migrations (name, batch, migration_time) VALUES ('29991231000000_forged.ts', 99, now())")).rejects.toThrow(/permission denied/);
+          await expect(app.query("UPDATE knex_migrations_lock SET is_locked = 1")).rejects.toThrow(/permission denied/);
         } finally {
           await app.end();
         }

@@ -1,6 +1,8 @@
 /**
- * The list-index migrations (20261202500000, and 20261203500000 with the queue and project-page
- * indexes) run forward on a database that already holds data,
+ * The list-index migrations (20261202500000, 20261203500000 with the queue and project-page
+ * indexes, 20261204100000 with each review's design and number, 20261204100100 with each
+ * project's card jurisdiction) and the triggers that keep their columns unforgeable
+ * (20261204400000) run forward on a database that already holds data,
  * without losing a row: a copy of a grown database (every other migration, the demo seed and three
  * generated units of tests/bench/grow.ts) is migrated to the latest schema, then every table is
  * counted again and the new columns are checked against what they are derived from.
@@ -14,7 +16,7 @@ import pg from "pg";
 import { psql, type Cluster } from "@/db/lib/postgres";
 import { grow, prepare, tableCounts } from "../bench/grow";
 
-const MINE = /^20261202500000_|^2026120350\d{4}_/;
+const MINE = /^20261202500000_|^2026120350\d{4}_|^2026120410\d{4}_|^20261204400000_/;
 const cluster = JSON.parse(process.env.PIERWISE_TEST_CLUSTER ?? "null") as Cluster | null;
 const appUrl = new URL(process.env.DATABASE_URL ?? "postgres://x@127.0.0.1/x");
 const suffix = crypto.randomBytes(4).toString("hex");
@@ -80,6 +82,22 @@ describe("migrating a grown database", () => {
       expect(await one(`SELECT count(*) AS n FROM designs d WHERE approved_revision_id IS DISTINCT FROM
         (SELECT r.id FROM revisions r WHERE r.design_id = d.id AND r.status = 'approved' ORDER BY r.number DESC LIMIT 1)`)).toBe(0);
       expect(await one("SELECT count(*) AS n FROM designs WHERE approved_revision_id IS NOT NULL")).toBeGreaterThan(60);
+      // The kept columns cannot be written past their triggers (here the database's owner writes).
+      await check.query("UPDATE projects SET design_count = design_count + 7");
+      await check.query("UPDATE designs SET approved_revision_id = NULL, approved_at = now() - interval '9 years'");
+      expect(await one("SELECT count(*) AS n FROM projects p WHERE design_count <> (SELECT count(*) FROM designs d WHERE d.project_id = p.id)")).toBe(0);
+      expect(await one(`SELECT count(*) AS n FROM designs d WHERE approved_revision_id IS DISTINCT FROM
+        (SELECT r.id FROM revisions r WHERE r.design_id = d.id AND r.status = 'approved' ORDER BY r.number DESC LIMIT 1)`)).toBe(0);
+      expect(await one("SELECT count(*) AS n FROM designs WHERE approved_at < now() - interval '8 years'")).toBe(0);
+      // Each project carries its card's jurisdiction.
+      expect(await one(`SELECT count(*) AS n FROM projects p LEFT JOIN criteria_cards c ON c.id = p.criteria_card_id
+        WHERE p.criteria_jurisdiction IS DISTINCT FROM c.jurisdiction`)).toBe(0);
+      expect(await one("SELECT count(*) AS n FROM projects WHERE criteria_jurisdiction IS NOT NULL")).toBeGreaterThan(60);
+      // Each review carries its revision's design and number, approval records included.
+      expect(await one(`SELECT count(*) AS n FROM reviews v JOIN revisions r ON r.id = v.revision_id
+        WHERE v.design_id IS DISTINCT FROM r.design_id OR v.revision_number IS DISTINCT FROM r.number`)).toBe(0);
+      expect(await one("SELECT count(*) AS n FROM reviews WHERE decision = 'approve'")).toBeGreaterThan(60);
+      await expect(check.query("UPDATE reviews SET engineer_name = 'edited' WHERE decision = 'approve'")).rejects.toThrow(/approval record/);
       // The approval pin still holds on the migrated rows.
       await expect(check.query("UPDATE revisions SET note = 'edited' WHERE status = 'approved'")).rejects.toThrow(/approved and pinned/);
     } finally {

@@ -3,6 +3,7 @@ import { getProjectFile, insertProjectFile } from "@/db/queries/project-files";
 import type { CurrentUser } from "../auth";
 import { assertCanWrite, projectFor } from "../designs";
 import { ValidationError } from "../errors";
+import { CONTROL_CHARACTERS_MESSAGE, hasControlCharacters } from "../request-guards";
 import { deleteObject, putObject } from "../storage";
 import { acceptUpload, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, objectKeys, photoThumbnail } from "../uploads";
 
@@ -34,6 +35,8 @@ export async function uploadProjectFile(user: CurrentUser, projectId: string, up
   if (!(file instanceof File) || file.size === 0) throw refuse("file", "Choose a file to upload (JPEG, PNG, WebP or PDF)");
   const description = String(form.get("description") ?? "").trim();
   if (description.length > 300) throw refuse("description", "Description must be at most 300 characters");
+  // A form field is not run through the JSON body's check; NUL cannot be stored (was a 500).
+  if (hasControlCharacters(description)) throw refuse("description", CONTROL_CHARACTERS_MESSAGE);
 
   // The one upload policy (app/_lib/uploads.ts): type by content against the allow-list, size per kind.
   const { bytes, type, name } = await acceptUpload(file, "projectFile", "file");

@@ -10,7 +10,7 @@ import { Brand } from "@/components/ui/brand";
 import { approvalByCode, type VerifiedApproval } from "@/db/queries/verify";
 
 export const dynamic = "force-dynamic";
-export const metadata: Metadata = { title: "Approval check", robots: { index: false, follow: false } };
+export const metadata: Metadata = { title: "Approval check", robots: { index: false, follow: false }, referrer: "no-referrer" };
 
 /** Checks per address per minute: plenty for an inspector, too few to walk the code space. */
 const LIMIT = { requests: 30, windowMs: 60_000 };
