@@ -108,4 +108,21 @@ describe("review page layout", () => {
       expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth), units).toBe(true);
     }
   });
+
+  it("keeps the \"over 1.00, fails\" mark in one box on a phone", async () => {
+    // A hole given 24 in deep: short of the frost depth and laterally (IBC §1809.5; IBC §1807.3.2.1 Eq. 18-1), so checks fail.
+    const base = structuredClone(defaultDesignInput) as unknown as DesignInputDraft & { posts: Record<string, unknown> };
+    const { revisionId } = await makeDesign({ input: { ...base, posts: { ...base.posts, fixedDepthIn: 24 } } as DesignInputDraft });
+    const page = await (suite.keep(await signedInContext(suite.browser, DESIGNER, PHONE))).newPage();
+    await page.goto(`${baseUrl()}/reviews/${revisionId}`);
+    const marks = page.locator('[data-ratio-over="true"] > span');
+    await marks.first().waitFor();
+    // Phone widths from 330 to 420 px: wherever a line ends, the mark moves whole.
+    for (let width = 330; width <= 420; width += 6) {
+      await page.setViewportSize({ width, height: PHONE.height });
+      const boxes = await marks.evaluateAll((spans) => spans.filter((s) => s.getClientRects().length > 0).map((s) => s.getClientRects().length));
+      expect(boxes.length).toBeGreaterThan(0);
+      for (const n of boxes) expect(n, `at ${width} px`).toBe(1);
+    }
+  });
 });
