@@ -28,7 +28,8 @@ export function FootingPerPost({ posts, diameterIn, units = "imperial" }: { post
           <th scope="col" className="py-1 pl-1 text-right font-medium">Post length</th>
         </tr>
       </thead>
-      <tbody className="tabular-nums">
+      {/* A value never breaks between its number and its unit ("30 / in" at 390 px). */}
+      <tbody className="tabular-nums whitespace-nowrap">
         {posts.map((p) => (
           <tr key={p.id} className="border-b border-current/10 last:border-0">
             <th scope="row" className="py-1 pr-2 text-left font-medium">{p.id}</th>

@@ -8,7 +8,7 @@ import ProjectPage from "@/app/(workspace)/projects/[projectId]/page";
 import { db } from "@/db/client";
 import { twoPostDesignInput } from "@/engine";
 import { actAs } from "../support/next-context";
-import { DESIGNER, addRevision, freshApproved, freshAsBuilt } from "../support/review-fixtures";
+import { DESIGNER, addRevision, freshApproved, freshAsBuilt, freshInReview } from "../support/review-fixtures";
 
 // The table's client hooks need the app router, which a server render has not mounted: give them a fixed URL.
 vi.mock("next/navigation", async (original) => ({
@@ -41,8 +41,9 @@ describe("project design table", () => {
   });
 
   it("says none yet when no revision was approved", async () => {
-    const d = await freshApproved();
-    await db("designs").where({ id: d.designId }).update({ approved_revision_id: null });
+    // A design whose only revision is waiting for review (approved_revision_id is kept by triggers
+    // and cannot be cleared by hand, migration 20261204400000).
+    const d = await freshInReview();
     expect(text(await projectPage(d.designId))).toMatch(/Rev 1\s+None yet/);
   });
 });

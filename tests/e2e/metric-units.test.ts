@@ -169,6 +169,15 @@ describe("metric mode", () => {
       expect(imperialWords(await visibleText(p)), `${name} with the hold`).toEqual([]);
     }
 
+    // The project page: its criteria card and its designs table.
+    for (const [width, viewport] of [["desktop", DESKTOP], ["phone", PHONE]] as const) {
+      const p = await metricPage(DESIGNER, viewport);
+      await p.goto(`${baseUrl()}/projects/${DEMO_PROJECT_ID}`);
+      await p.getByRole("heading", { name: /Design criteria: Juniper Flats County/ }).waitFor();
+      expect(imperialWords(await visibleText(p)), `project page at ${width}`).toEqual([]);
+      await shot(p, `metric-project-${width}`);
+    }
+
     // The landing page's site cautions follow the cookie (the concrete strengths in MPa).
     const landing = await metricPage(DESIGNER);
     await landing.goto(baseUrl());

@@ -10,7 +10,8 @@ import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { FIELD_SPEC_LIMIT, REVIEW_LIST_LIMIT } from "@/db/queries/review-queue";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
-import { ENGINEER, INSTALLER, freshApproved, freshInReview, userId } from "../support/review-fixtures";
+import { DESIGNER, ENGINEER, INSTALLER, freshApproved, freshInReview, userId } from "../support/review-fixtures";
+import { DEMO_PROJECT_ID } from "@/db/seeds/02_demo_projects";
 
 const suite = browserSuite();
 
@@ -53,5 +54,45 @@ describe("lists that show a page", () => {
       expect(secondPage.filter((href) => firstPage.includes(href))).toEqual([]);
       expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
     }
+  });
+
+  it("tables read on a phone without sideways scrolling: each row a card, each value beside its column name, a sort list", async () => {
+    await freshInReview();
+    const pages: [string, string, string][] = [
+      [ENGINEER, "/queue", "Footing and failing checks"],
+      [DESIGNER, "/projects", "Criteria card"],
+      [DESIGNER, `/projects/${DEMO_PROJECT_ID}`, "Last saved"],
+    ];
+    for (const [who, path, column] of pages) {
+      const context = suite.keep(await signedInContext(suite.browser, who, PHONE));
+      const page = await context.newPage();
+      await page.goto(`${baseUrl()}${path}`);
+      const table = page.getByRole("table").first();
+      await table.waitFor();
+      // Nothing hidden past the right edge of the table's box (it used to need a sideways swipe nobody could see).
+      const fits = await table.evaluate((t) => {
+        const box = t.parentElement!;
+        const cells = Array.from(t.querySelectorAll("td")).filter((c) => c.getBoundingClientRect().width > 0);
+        return { box: box.scrollWidth <= box.clientWidth + 1, cells: cells.every((c) => c.getBoundingClientRect().right <= window.innerWidth + 1) };
+      });
+      expect(fits, path).toEqual({ box: true, cells: true });
+      // Each value with its column's name beside it; the table is still a table of rows and cells.
+      expect(await table.locator(`td[data-label="${column}"]`).first().evaluate((c) => getComputedStyle(c, "::before").content), path).toBe(`"${column}"`);
+      expect(await table.getByRole("row").count(), path).toBeGreaterThan(1);
+      await shot(page, `cards-${path.split("/")[1]}-390`);
+      // The header row is hidden on a phone: sorting is a list.
+      const sortBy = page.getByLabel("Sort by").first();
+      expect(await sortBy.isVisible(), path).toBe(true);
+      // At 1280 px it is a table with its header row, and the list is gone.
+      await page.setViewportSize(DESKTOP);
+      expect(await page.getByRole("columnheader", { name: new RegExp(column) }).first().isVisible(), path).toBe(true);
+      expect(await sortBy.isVisible(), path).toBe(false);
+    }
+    // Sorting from the list goes to the server like a header click.
+    const context = suite.keep(await signedInContext(suite.browser, DESIGNER, PHONE));
+    const page = await context.newPage();
+    await page.goto(`${baseUrl()}/projects`);
+    await page.getByLabel("Sort by").selectOption({ label: "Project" });
+    await page.waitForURL(/sort=name|sort=project/);
   });
 });

@@ -12,7 +12,7 @@ import { defaultDesignInput, type DesignInputDraft } from "@/engine";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
 import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
-import { DESIGNER, ENGINEER, makeDesign, userId } from "../support/review-fixtures";
+import { DESIGNER, ENGINEER, freshInReview, makeDesign, userId } from "../support/review-fixtures";
 
 const suite = browserSuite();
 
@@ -86,5 +86,43 @@ describe("review page layout", () => {
     const desktop = await page.evaluate(() => document.documentElement.scrollHeight);
     console.log(`review page at 1280 px: ${desktop} px tall`);
     await shot(page, "review-layout-desktop");
+  });
+
+  it("never breaks a size between its number and its unit in the footing-per-post table on a phone", async () => {
+    const { revisionId } = await freshInReview();
+    for (const units of ["imperial", "metric"]) {
+      const context = suite.keep(await signedInContext(suite.browser, ENGINEER, PHONE));
+      await context.addCookies([{ name: "pierwise-units", value: units, url: baseUrl() }]);
+      const page = await context.newPage();
+      await page.goto(`${baseUrl()}/reviews/${revisionId}`);
+      const table = page.locator("section", { has: page.locator("#per-post-h") }).locator("table");
+      await table.waitFor();
+      // Each value on one line: its text's boxes share one top ("30 in", not "30" over "in").
+      const lines = await table.locator("tbody td").evaluateAll((cells) => cells.map((c) => {
+        const range = document.createRange();
+        range.selectNodeContents(c);
+        return { text: c.textContent, lines: new Set(Array.from(range.getClientRects()).map((r) => Math.round(r.top))).size };
+      }));
+      expect(lines.length).toBeGreaterThan(0);
+      for (const l of lines) expect(l.lines, `${units}: ${l.text}`).toBe(1);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth), units).toBe(true);
+    }
+  });
+
+  it("keeps the \"over 1.00, fails\" mark in one box on a phone", async () => {
+    // A hole given 24 in deep: short of the frost depth and laterally (IBC §1809.5; IBC §1807.3.2.1 Eq. 18-1), so checks fail.
+    const base = structuredClone(defaultDesignInput) as unknown as DesignInputDraft & { posts: Record<string, unknown> };
+    const { revisionId } = await makeDesign({ input: { ...base, posts: { ...base.posts, fixedDepthIn: 24 } } as DesignInputDraft });
+    const page = await (suite.keep(await signedInContext(suite.browser, DESIGNER, PHONE))).newPage();
+    await page.goto(`${baseUrl()}/reviews/${revisionId}`);
+    const marks = page.locator('[data-ratio-over="true"] > span');
+    await marks.first().waitFor();
+    // Phone widths from 330 to 420 px: wherever a line ends, the mark moves whole.
+    for (let width = 330; width <= 420; width += 6) {
+      await page.setViewportSize({ width, height: PHONE.height });
+      const boxes = await marks.evaluateAll((spans) => spans.filter((s) => s.getClientRects().length > 0).map((s) => s.getClientRects().length));
+      expect(boxes.length).toBeGreaterThan(0);
+      for (const n of boxes) expect(n, `at ${width} px`).toBe(1);
+    }
   });
 });

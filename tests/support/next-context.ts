@@ -6,6 +6,8 @@
  */
 import { sealData } from "iron-session";
 import { vi } from "vitest";
+import { isValidElement } from "react";
+import { AccessRefused } from "@/components/ui/access-refused";
 
 type Cookie = { name: string; value: string; options?: { secure?: boolean; httpOnly?: boolean; sameSite?: string } };
 const jar = new Map<string, Cookie>();
@@ -85,7 +87,10 @@ export type Outcome<T> =
 /** What a server action or page loader ended in: a value, a redirect, or a 401/403/404 interrupt. */
 export async function outcomeOf<T>(run: () => Promise<T>): Promise<Outcome<T>> {
   try {
-    return { kind: "value", value: await run() };
+    const value = await run();
+    // A page's 404/403 is the <AccessRefused> it renders (app/_lib/page-access.tsx `refusable`), which Next turns into the status.
+    if (isValidElement(value) && value.type === AccessRefused) return { kind: "status", status: (value.props as { status: number }).status };
+    return { kind: "value", value };
   } catch (error) {
     const digest = (error as { digest?: string }).digest ?? "";
     if (digest.startsWith("NEXT_REDIRECT")) return { kind: "redirect", location: digest.split(";")[2] ?? "" };

@@ -68,7 +68,7 @@ export async function freshApproved(options: { letterKey?: string } = {}): Promi
   const d = await freshInReview();
   await db("reviews").where({ id: d.reviewId }).update({
     decision: "approve", decided_by: await userId(ENGINEER), decided_at: db.fn.now(), engineer_name: "Eli Engineer, P.E.",
-    licence_number: "PE-000000-DEMO", licence_state: "CO", letter_file_key: options.letterKey ?? null,
+    licence_number: "PE-000000-DEMO", licence_state: "CO", licence_expires_on: "2030-12-31", letter_file_key: options.letterKey ?? null,
     verify_code: crypto.randomBytes(16).toString("base64url"), facts_snapshot: JSON.stringify({ projectName: "Review test site", projectAddress: "1 Test Lane (invented), Testville, CO", projectState: "CO", criteria: null }),
   });
   await db("revisions").where({ id: d.revisionId }).update({ status: "approved" });

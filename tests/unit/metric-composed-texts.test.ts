@@ -85,6 +85,8 @@ describe("the report's method steps in metric", () => {
         for (const text of [s.title, s.source, ...s.lines]) expect(IMPERIAL.test(text), `${name}: ${text}`).toBe(false);
       }
       expect(steps[0].lines[0]).toMatch(/^qz = 0\.613 · Kz/);
+      // Millimetres whole, as on every other metric screen (components/format/quantity.ts).
+      expect(steps.flatMap((s) => [s.title, ...s.lines]).join(" "), name).not.toMatch(/\d\.\d+ mm\b/);
       expect(steps[0].lines.join(" ")).toContain("(qz in N/m², V in m/s)");
     }
   });

@@ -6,12 +6,14 @@ import { US_STATES } from "@/app/_lib/schemas/project";
 import { CriteriaCardView } from "@/components/design/criteria-card-view";
 import { listCriteriaCards } from "@/db/queries/criteria-cards";
 import { CriteriaCardForm } from "./_components/criteria-card-form";
+import { readerUnits } from "@/app/_lib/unit-preference";
 
 export const metadata: Metadata = { title: "Design criteria cards" };
 
 /** The organisation's criteria cards, one per jurisdiction, entered once and applied to projects. */
 async function CriteriaPage() {
   const user = await forPage(() => requireUser(), "/criteria");
+  const units = await readerUnits();
   const cards = await listCriteriaCards(user.organisationId);
   const canWrite = hasRole(user, "designer", "admin");
   return (
@@ -28,7 +30,7 @@ async function CriteriaPage() {
               <h2 id={`card-${card.id}`} className="text-lg font-semibold">{card.jurisdiction}, {card.state}</h2>
               {canWrite ? <Link href={`/criteria/${card.id}`} className="text-sm text-accent-800 hover:underline">Edit card</Link> : null}
             </div>
-            <CriteriaCardView card={card} />
+            <CriteriaCardView card={card} units={units} />
           </section>
         ))}
       </div>

@@ -125,7 +125,7 @@ export function methodSteps(r: DesignResult, system: UnitSystem = "imperial"): M
         source: userText(checkSourceIn(lateral, system)),
         lines: [
           "d² = 4.25 · P · h / (S3 · b), S3 = S · d",
-          `M = P·h = ${n(M, Pd)} ${u.moment}, b = ${n(b, u.si ? 3 : 2)} ${u.length}, S = ${n(S, Sd)} ${u.gradient} → d = ${n(dReq, 2)} ${u.length} (${u.q(r.footing.requiredDepthIn.lateral, "in", 1)})`,
+          `M = P·h = ${n(M, Pd)} ${u.moment}, b = ${n(b, u.si ? 3 : 2)} ${u.length}, S = ${n(S, Sd)} ${u.gradient} → d = ${n(dReq, 2)} ${u.length} (${u.q(r.footing.requiredDepthIn.lateral, "in", u.si ? 0 : 1)})`,
         ],
       });
     } else if (P > 0) {
@@ -141,8 +141,8 @@ export function methodSteps(r: DesignResult, system: UnitSystem = "imperial"): M
           `d = 0.5 · A · {1 + [1 + 4.36 · h / A]^½},  A = 2.34 · P / (S1 · b),  S1 = S · d / 3${u.si ? "   (P in kN, lengths in m, pressures in kPa)" : ""}`,
           `P = ${n(P, Pd)} ${u.force}, h = M / P = ${n(M, Pd)} / ${n(P, Pd)} = ${n(h, 2)} ${u.length}, b = ${n(b, u.si ? 3 : 2)} ${u.length}, S = ${n(S, Sd)} ${u.gradient}`,
           `S1 = ${n(S, Sd)} × ${n(Math.min(dReq, dCap), 2)} / 3 = ${n(s1, u.si ? 2 : 1)} ${u.pressure};  A = 2.34 × ${n(P, Pd)} / (${n(s1, u.si ? 2 : 1)} × ${n(b, u.si ? 3 : 2)}) = ${n(A, 3)} ${u.length}`,
-          `d = 0.5 × ${n(A, 3)} × {1 + [1 + 4.36 × ${n(h, 2)} / ${n(A, 3)}]^½} = ${n(d, u.si ? 3 : 2)} ${u.length} = ${u.q(dIn, "in", 1)} required`,
-          `provided ${u.q(r.footing.depthIn, "in", 1)}: ratio ${n(lateral.ratio, 2)} ${lateral.pass ? "≤ 1.00, passes" : "> 1.00, FAILS"}`,
+          `d = 0.5 × ${n(A, 3)} × {1 + [1 + 4.36 × ${n(h, 2)} / ${n(A, 3)}]^½} = ${n(d, u.si ? 3 : 2)} ${u.length} = ${u.q(dIn, "in", u.si ? 0 : 1)} required`,
+          `provided ${u.q(r.footing.depthIn, "in", u.si ? 0 : 1)}: ratio ${n(lateral.ratio, 2)} ${lateral.pass ? "≤ 1.00, passes" : "> 1.00, FAILS"}`,
         ],
       });
     }
@@ -151,10 +151,12 @@ export function methodSteps(r: DesignResult, system: UnitSystem = "imperial"): M
   const others = r.footing.checks.filter((c) => c.id !== "lateral");
   const checkQ = (c: (typeof others)[number], value: number) => {
     const kind = CHECK_UNIT_KINDS[c.unit] as UnitKind | undefined;
-    return kind ? u.q(value, kind, 2) : `${n(value, 2)} ${c.unit}`;
+    // Customary to 2 decimals as before; metric by each unit's own rounding (mm whole, kN to 0.1).
+    if (!kind) return `${n(value, 2)} ${c.unit}`;
+    return u.si ? formatQuantity(value, kind, "metric") : u.q(value, kind, 2);
   };
   steps.push({
-    title: `5. Other footing checks at ${u.q(r.footing.diameterIn, "in", 1)} × ${u.q(r.footing.depthIn, "in", 1)}`,
+    title: `5. Other footing checks at ${u.q(r.footing.diameterIn, "in", u.si ? 0 : 1)} × ${u.q(r.footing.depthIn, "in", u.si ? 0 : 1)}`,
     source: "each check's source as listed",
     lines: others.map((c) => `${checkTitleIn(c, system)}: demand ${checkQ(c, c.demand)} / capacity ${checkQ(c, c.capacity)} = ratio ${n(c.ratio, 2)} ${c.pass ? "≤ 1.00" : "> 1.00, FAILS"} (${userText(checkSourceIn(c, system))})`),
   });

@@ -60,7 +60,7 @@ async function ProjectPage({ params, searchParams }: Props) {
           <h2 id="card-heading" className="text-lg font-semibold">Design criteria{card ? `: ${card.jurisdiction}, ${card.state}` : ""}</h2>
           {outsider ? null : <Link href="/criteria" className="text-sm text-accent-800 hover:underline">All criteria cards</Link>}
         </div>
-        {card ? <div className="mt-3"><CriteriaCardView card={card} /></div> : (
+        {card ? <div className="mt-3"><CriteriaCardView card={card} units={await readerUnits()} /></div> : (
           <p className="mt-2 text-sm text-amber-900">No criteria card applied. {canWrite ? <Link href={`/projects/${project.id}/edit`} className="underline">Choose one</Link> : null} so designs start from the jurisdiction&apos;s wind, snow, frost and soil values.</p>
         )}
       </section>

@@ -95,8 +95,8 @@ async function ReviewPage({ params }: { params: Promise<{ revisionId: string }> 
           lead={outcome.failing.length && ctx.status !== "approved" ? "A failing check can still be submitted and approved, but only with the engineer's written reason for each one." : undefined} />
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <span>Status:</span> <StatusBadge status={standing.status} onHold={standing.holds.length > 0} />
-          <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {dateInWords(ctx.createdAt, ctx.timeZone)}</span>
-          {ctx.factsPinned ? <span className="text-slate-600">· project facts as approved</span> : null}
+          {/* One sentence, so a phone never starts a line with a lone "·". */}
+          <span className="text-slate-600">saved by {ctx.authorName ?? "unknown"} on {dateInWords(ctx.createdAt, ctx.timeZone)}{ctx.factsPinned ? "; the project name and address are shown as they were at approval" : ""}</span>
         </div>
         <div className="no-print flex flex-wrap items-center gap-2 text-sm">
           <UnitsSwitch units={units} />
