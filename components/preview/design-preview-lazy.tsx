@@ -6,10 +6,10 @@ import { preloadScene } from "./scene-loader";
 import { useLoadable } from "./use-loadable";
 
 /**
- * Keeps three.js and the scene out of the host page's first load. Where WebGL is there, the
- * preview shell and the scene chunk are both requested as soon as the host page's scripts run (on
- * the editor, before that: instrumentation-client.ts), while the page is still hydrating; without
- * WebGL the scene is never fetched.
+ * Keeps React Three Fiber, three.js and the scene out of the host page's first load. Where WebGL
+ * is there, the preview shell and the scene chunk are both requested as soon as this module is
+ * evaluated: the page's client modules are evaluated before it hydrates, so both load while the
+ * page's own scripts start. Without WebGL the scene is never fetched.
  */
 const previewShell = loadable<{ default: ComponentType<DesignPreviewProps> }>(() => import("./design-preview"));
 if (typeof window !== "undefined") {

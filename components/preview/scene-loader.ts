@@ -1,10 +1,9 @@
 /**
- * The 3D scene's code (three.js), loaded once per page and shared by every preview on it, and
- * only where WebGL is there (a browser that gets the 2D elevation never downloads it). Started as
- * early as the page allows: on the design editor by instrumentation-client.ts before the page
- * hydrates, elsewhere when a preview's host module runs. The scene's chunk shares no module with
- * the page (its labels are plain text, its figures come in as props), so loading it from the
- * instrumentation hook duplicates nothing. No React here: the hook imports this module.
+ * The 3D scene's code (React Three Fiber and three.js), loaded once per page and shared by every
+ * preview on it, and only where WebGL is there (a browser that gets the 2D elevation never
+ * downloads it). Started as early as the page allows: when the module of the preview's host
+ * (design-preview-lazy.tsx, imported by the editor and the review page) is evaluated, which is
+ * before the page hydrates.
  */
 import type { ComponentType } from "react";
 import type { SceneProps } from "./scene";

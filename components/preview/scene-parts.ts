@@ -1,8 +1,9 @@
 /**
- * The scene's parts for one design, as plain three.js objects (no React): grade, footings, posts,
- * beam, rails, modules, the two dimension lines, the wind arrow and the north marker. Every solid is
- * an instanced draw of a shared unit shape with a shared material (shared-resources.ts), so a
- * whole design draws with three shader programs (instanced matte parts, the part-transparent
+ * The scene's parts for one design, as three.js objects built in one pass (scene.tsx mounts them
+ * in the React Three Fiber canvas as one primitive, so a design is not a React tree of meshes):
+ * grade, footings, posts, beam, rails, modules, the two dimension lines, the wind arrow and the
+ * north marker. Every solid is an instanced draw of a shared unit shape with a shared material
+ * (shared-resources.ts), so a whole design draws with three shader programs (instanced matte parts, the part-transparent
  * grade, screen-width lines) and a new design compiles none: only its small per-design buffers
  * (instance matrices, the grade's four corners, the lines' points) are new, and `dispose` frees them.
  */

@@ -1,11 +1,15 @@
 "use client";
-import { memo, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { Canvas } from "@react-three/fiber";
+import { memo, useEffect, useMemo, useRef, useState } from "react";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
-import { sceneBounds, type ViewName } from "./camera-framing";
+import { CameraRig } from "./camera-rig";
+import { sceneBounds, type Bounds, type ViewName } from "./camera-framing";
 import type { PreviewFigures } from "./preview-labels";
 import { sceneLabels } from "./scene-annotations";
-import { LabelLayer, placeLabelElements, type LabelSizes } from "./scene-labels";
-import { SceneView } from "./scene-view";
+import { SceneDraw } from "./scene-draw";
+import { LabelLayer } from "./scene-labels";
+import { buildParts } from "./scene-parts";
+import { COLOURS } from "./scene-style";
 import { windSceneLabel } from "./wind-label";
 import { softwareRendering } from "./webgl-support";
 
@@ -18,49 +22,66 @@ export interface SceneProps {
   onContextLost: () => void;
 }
 
+const DPR: [number, number] = [1, 2];
+const GL = { antialias: true, alpha: false, powerPreference: "high-performance" } as const;
+// Without a GPU every pixel and every sample is the CPU's work: one pixel per CSS pixel, no multisampling.
+const SOFTWARE_DPR = 1;
+const SOFTWARE_GL = { ...GL, antialias: false };
+const CAMERA = { fov: 35, near: 0.1, far: 1000 };
+
 /**
- * The 3D canvas (scene-view.ts draws it). Renders on demand only (a changed geometry, a camera
- * move), never on a re-render of the page with the same geometry: the parts share their shapes
- * and materials, so a new design rewrites a few buffers but compiles no shader program. Nothing
- * is drawn until every program is compiled, so the first frame is complete and nothing compiles
- * after it.
+ * One design's parts (scene-parts.ts: instanced unit shapes with shared materials), mounted as a
+ * primitive. A new design swaps in new parts — the same shapes and materials, new small buffers —
+ * and frees the old parts' buffers; the shared shapes and materials are never disposed.
+ */
+function DesignParts({ geometry, bounds }: { geometry: PreviewGeometry; bounds: Bounds }) {
+  const parts = useMemo(() => buildParts(geometry, bounds), [geometry, bounds]);
+  useEffect(() => () => parts.dispose(), [parts]);
+  return <primitive object={parts.group} dispose={null} />;
+}
+
+/**
+ * The 3D canvas: a React Three Fiber canvas that draws on demand only (a changed design, a camera
+ * move, a resize), never on a re-render of the page with the same design. The parts share their
+ * shapes and materials, so a new design rewrites a few buffers but compiles no shader program;
+ * nothing is drawn until every program is compiled (scene-draw.tsx), so the first frame is
+ * complete and nothing compiles after it.
  */
 export const Scene = memo(function Scene({ geometry, figures, view, readOnly, label, onContextLost }: SceneProps) {
   const bounds = useMemo(() => sceneBounds(geometry), [geometry]);
   const labels = useMemo(() => sceneLabels(geometry, figures, bounds.radiusFt, geometry.wind ? windSceneLabel(geometry.wind) : null), [geometry, figures, bounds.radiusFt]);
   const [ready, setReady] = useState(false);
-  const host = useRef<HTMLDivElement>(null);
-  const sceneView = useRef<SceneView | null>(null);
+  const [software] = useState(softwareRendering);
+  const onReady = useMemo(() => () => setReady(true), []);
   const labelElements = useRef(new Map<string, HTMLElement>());
-  // Read by each frame: the labels of the latest render, and the callback of the latest props.
-  const latest = useRef({ labels, onContextLost });
-  latest.current = { labels, onContextLost };
-
-  useLayoutEffect(() => {
-    const sizes: LabelSizes = new Map();
-    const v = new SceneView({
-      host: host.current!,
-      software: softwareRendering(),
-      onFrame: (camera, size) => placeLabelElements(latest.current.labels, labelElements.current, sizes, camera, size),
-      onReady: () => setReady(true),
-      onContextLost: () => latest.current.onContextLost(),
-    });
-    sceneView.current = v;
-    return () => {
-      sceneView.current = null;
-      v.dispose();
-    };
-  }, []);
-  // In this order after the view is made: the view to frame, then the design (which starts the compile).
-  useLayoutEffect(() => sceneView.current?.setView(view), [view]);
-  useLayoutEffect(() => sceneView.current?.setZoom(!readOnly), [readOnly]);
-  useLayoutEffect(() => sceneView.current?.setGeometry(geometry, bounds), [geometry, bounds]);
-  // New label text (a changed unit system) needs a frame to be placed even when nothing else moved.
-  useLayoutEffect(() => sceneView.current?.invalidate(), [labels]);
+  // The latest callback, read when the context is lost (the listener stays the same).
+  const latestLost = useRef(onContextLost);
+  latestLost.current = onContextLost;
+  const lost = useMemo(() => () => latestLost.current(), []);
+  const c = bounds.centre, r = bounds.radiusFt;
 
   return (
     <div className="relative h-full">
-      <div ref={host} aria-label={label} role="img" className="relative h-full w-full overflow-hidden" />
+      <Canvas
+        frameloop="demand"
+        dpr={software ? SOFTWARE_DPR : DPR}
+        gl={software ? SOFTWARE_GL : GL}
+        camera={CAMERA}
+        aria-label={label}
+        role="img"
+        onCreated={({ gl }) => {
+          // Each check is a round trip to the GPU process that waits for the compile; three.js
+          // advises turning it off in production (a failed program still draws nothing).
+          gl.debug.checkShaderErrors = process.env.NODE_ENV !== "production";
+        }}
+      >
+        <color attach="background" args={[COLOURS.background]} />
+        <hemisphereLight args={[0xffffff, 0x6b705c, 1.4]} />
+        <directionalLight position={[c[0] + r, c[1] + 2 * r, c[2] + 1.5 * r]} intensity={1.8} />
+        <DesignParts geometry={geometry} bounds={bounds} />
+        <CameraRig bounds={bounds} view={view} enableZoom={!readOnly} />
+        <SceneDraw labels={labels} elements={labelElements} onReady={onReady} onContextLost={lost} />
+      </Canvas>
       <LabelLayer labels={labels} elements={labelElements} />
       {ready ? null : (
         <div role="status" className="pointer-events-none absolute inset-0 flex items-center justify-center bg-slate-50 text-sm text-slate-500">
