@@ -15,7 +15,8 @@ import { cameraForView, type Bounds, type ViewName } from "./camera-framing";
 export function CameraRig({ bounds, view, enableZoom }: { bounds: Bounds; view: { name: ViewName; seq: number }; enableZoom: boolean }) {
   const camera = useThree((s) => s.camera) as PerspectiveCamera;
   const domElement = useThree((s) => s.gl.domElement);
-  const size = useThree((s) => s.size);
+  const width = useThree((s) => s.size.width);
+  const height = useThree((s) => s.size.height);
   const invalidate = useThree((s) => s.invalidate);
   const controls = useMemo(() => new OrbitControls(camera), [camera]);
   const goal = useRef<{ position: Vector3; target: Vector3 } | null>(null);
@@ -51,7 +52,7 @@ export function CameraRig({ bounds, view, enableZoom }: { bounds: Bounds; view: 
     if (!resized && !asked) return;
     const first = framedRadius.current === null;
     framedRadius.current = bounds.radiusFt;
-    const fit = cameraForView(view.name, bounds, camera.fov, size.width / Math.max(size.height, 1));
+    const fit = cameraForView(view.name, bounds, camera.fov, width / Math.max(height, 1));
     camera.near = Math.max(0.05, fit.distanceFt / 200);
     camera.far = fit.distanceFt * 10;
     camera.updateProjectionMatrix();
@@ -66,7 +67,7 @@ export function CameraRig({ bounds, view, enableZoom }: { bounds: Bounds; view: 
       goal.current = null;
     }
     invalidate();
-  }, [bounds, view, camera, controls, size.width, size.height, invalidate]);
+  }, [bounds, view, camera, controls, width, height, invalidate]);
 
   // Before the draw (priority 0 runs ahead of the scene's draw at priority 1).
   useFrame(() => {

@@ -18,7 +18,8 @@ export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
-  const size = useThree((s) => s.size);
+  const width = useThree((s) => s.size.width);
+  const height = useThree((s) => s.size.height);
   const invalidate = useThree((s) => s.invalidate);
   const ready = useRef(false);
   const shown = useRef(false);
@@ -46,7 +47,7 @@ export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels
   }, [gl, scene, camera, invalidate]);
 
   // A resize clears the canvas; new label text (a changed unit system) needs placing.
-  useLayoutEffect(() => invalidate(), [labels, size, invalidate]);
+  useLayoutEffect(() => invalidate(), [labels, width, height, invalidate]);
 
   // Removed before R3F gives the context back on unmount (that loss is not the browser's).
   useEffect(() => {

@@ -28,6 +28,9 @@ const GL = { antialias: true, alpha: false, powerPreference: "high-performance" 
 const SOFTWARE_DPR = 1;
 const SOFTWARE_GL = { ...GL, antialias: false };
 const CAMERA = { fov: 35, near: 0.1, far: 1000 };
+// The canvas follows its box's size only: nothing here needs its place on the page (pointer
+// events use offsets within the canvas), so scrolling the page measures and draws nothing.
+const RESIZE = { scroll: false, debounce: { scroll: 0, resize: 0 } };
 
 /**
  * One design's parts (scene-parts.ts: instanced unit shapes with shared materials), mounted as a
@@ -64,6 +67,7 @@ export const Scene = memo(function Scene({ geometry, figures, view, readOnly, la
     <div className="relative h-full">
       <Canvas
         frameloop="demand"
+        resize={RESIZE}
         dpr={software ? SOFTWARE_DPR : DPR}
         gl={software ? SOFTWARE_GL : GL}
         camera={CAMERA}
