@@ -20,7 +20,8 @@ import { tiltEnvelope } from "./options/tilt-envelope";
 import { parseDesignInput } from "./parse";
 import { governingLoads, postLoadTable, windCaseRows } from "./result-sections";
 import type { DesignInput } from "./schema";
-import type { DesignResult } from "./types";
+import type { DesignResult, LateralRequirementWind } from "./types";
+import type { DesignContext } from "./design-context";
 import { collectWarnings, warningOf, type DesignWarning } from "./warnings";
 import { qty, says } from "./quantity-text";
 import { ENGINE_VERSION } from "./version";
@@ -29,6 +30,14 @@ import { ENGINE_VERSION } from "./version";
 function checkById(checks: FootingCheck[], id: CheckId): FootingCheck {
   for (let i = 0; i < checks.length; i++) if (checks[i].id === id) return checks[i];
   throw new Error(`No ${id} check`);
+}
+
+/** The wind case behind a row (its own tilt setting's state), for the printed method. */
+function windAt(ctx: DesignContext, tiltDeg: number, windCase: number): LateralRequirementWind | null {
+  const i = ctx.tilts.indexOf(tiltDeg);
+  if (i < 0 || windCase < 0) return null;
+  const st = ctx.states[i];
+  return { tiltDeg, heightFt: st.heights.meanHeightFt, velocity: st.velocity, surfaceAreaFt2: st.dims.surfaceAreaFt2, case: windCaseRows(st)[windCase] };
 }
 
 export function sizeDesign(raw: unknown): DesignResult {
@@ -94,6 +103,9 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       depthMode: posts.fixedDepthIn !== undefined ? "given" : "sized", controllingCheck: ev.controllingCheck,
       requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
       suggestedPipeSize: smallestPipeFor(checkById(ev.checks, "postBending").demand, posts.yieldKsi),
+      lateralRequirement: ev.lateralRequirement
+        ? { ...ev.lateralRequirement, wind: windAt(ctx, ev.lateralRequirement.governing.tiltDeg, ev.lateralRequirement.governing.windCase) }
+        : null,
     },
     concrete: {
       perHole: hole, job,
