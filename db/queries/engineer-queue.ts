@@ -64,8 +64,9 @@ export interface QueueFilter {
  *   (copied onto the review, 20261204100000) is one of `engaged_designs`: both told from the index;
  * - the default order (state, no search) reads each state in its order straight from the
  *   `(engineer_id, decided or not, submitted_at, id)` index and stops at the page: waiting ones,
- *   the few on hold (by revision), decided ones. The count is an index-only count per state
- *   (`counts`), apart from the page;
+ *   then on hold, then decided. The count is one index-only pass per state over that index
+ *   (`counts`, no joins, no sort), which also collects the first on-hold ids in order, so the
+ *   on-hold rows are read by id (at most a page's worth), not by probing each held design;
  * - any other order or a search: `picked` is every visible review with its state and sort key
  *   (names joined only when the search or sort needs them), sorted and counted by a window count;
  * - only the page's rows are joined to revision, design, project and contractor, and only their
@@ -112,9 +113,8 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       bindings.push(...visibleBindings);
     }
     if (!filter.state || filter.state === "on_hold") {
-      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
-        WHERE ${visible} AND v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))`);
-      bindings.push(...visibleBindings);
+      // The counting pass already tells which are on hold; it hands over the first ones' ids.
+      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v WHERE v.id IN (SELECT unnest(on_hold_ids) FROM counts))`);
     }
     if (!filter.state || filter.state === "decided") {
       branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v
@@ -123,11 +123,14 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       bindings.push(...visibleBindings);
     }
     const total = { waiting: "waiting", on_hold: "on_hold", decided: "everything - waiting - on_hold" }[filter.state ?? "waiting"];
-    body = `, counts AS (
+    // A state filter counts only its part of the index (waiting, or decided for on hold and decided).
+    const section = !filter.state ? "" : filter.state === "waiting" ? " AND (v.decision IS NOT NULL) IS FALSE" : " AND (v.decision IS NOT NULL) IS TRUE";
+    body = `, counts AS MATERIALIZED (
       SELECT count(*) FILTER (WHERE v.decision IS NULL) AS waiting,
              count(*) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)) AS on_hold,
-             count(*) AS everything
-      FROM reviews v WHERE ${visible}
+             count(*) AS everything,
+             (array_agg(v.id ORDER BY v.submitted_at, v.id) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)))[1:${reach}] AS on_hold_ids
+      FROM reviews v WHERE ${visible}${section}
     ), picked AS (
       ${branches.join(" UNION ALL ")}
     ), page AS (

@@ -227,6 +227,34 @@ describe("columns a trigger keeps cannot be forged", () => {
       .returning(["approved_revision_id", "approved_at"]);
     expect(forged).toEqual({ approved_revision_id: null, approved_at: null });
   });
+
+  it("reviews.design_id and revision_number: a direct write, from the app role or the owner, is the reviewed revision's again", async () => {
+    const { revisionId, designId } = await makeDesign();
+    const other = await makeDesign();
+    const kept = async (id: string) => db("reviews").where({ id }).first("design_id", "revision_number");
+    const [review] = await db("reviews").insert({
+      revision_id: revisionId, organisation_id: DEMO_ORG_ID, engineer_id: await userId(ENGINEER), submitted_by: await userId(DESIGNER),
+      design_id: other.designId, revision_number: 12,
+    }).returning("id");
+    expect(await kept(review.id)).toEqual({ design_id: designId, revision_number: 1 });
+    await db("reviews").where({ id: review.id }).update({ design_id: other.designId });
+    expect(await kept(review.id)).toEqual({ design_id: designId, revision_number: 1 });
+    await ownerDb("reviews").where({ id: review.id }).update({ revision_number: 7, engineer_name: "owner edit" });
+    expect(await kept(review.id)).toEqual({ design_id: designId, revision_number: 1 });
+  });
+
+  it("projects.criteria_jurisdiction: a direct write, from the app role or the owner, is the card's jurisdiction again", async () => {
+    const [card] = await db("criteria_cards").insert({ organisation_id: DEMO_ORG_ID, jurisdiction: `Kept Copy County ${crypto.randomUUID().slice(0, 6)} (test)`, state: "CO", values: JSON.stringify({}) }).returning(["id", "jurisdiction"]);
+    const { projectId } = await makeDesign({ criteriaCardId: card.id });
+    const kept = async () => (await db("projects").where({ id: projectId }).first("criteria_jurisdiction")).criteria_jurisdiction;
+    expect(await kept()).toBe(card.jurisdiction);
+    await db("projects").where({ id: projectId }).update({ criteria_jurisdiction: "Forged County" });
+    expect(await kept()).toBe(card.jurisdiction);
+    await ownerDb("projects").where({ id: projectId }).update({ criteria_jurisdiction: null, notes: "owner edit" });
+    expect(await kept()).toBe(card.jurisdiction);
+    const [forged] = await db("projects").insert({ organisation_id: DEMO_ORG_ID, name: "Forged copy", state: "CO", criteria_jurisdiction: "Forged County" }).returning("criteria_jurisdiction");
+    expect(forged.criteria_jurisdiction).toBeNull();
+  });
 });
 
 describe("handing over a database the app role owned (an earlier npm start)", () => {
