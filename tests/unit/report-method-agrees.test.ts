@@ -38,7 +38,7 @@ function stepText(r: DesignResult, system: UnitSystem, n: number): string {
   return [s.title, ...s.lines].join("\n");
 }
 
-/** Every value step 3 and step 4 print, against the engine's own. */
+/** Every value steps 1–5 print for the lateral chain, against the engine's own. */
 function expectMethodAgrees(r: DesignResult, system: UnitSystem) {
   const si = system === "metric";
   const req = r.footing.lateralRequirement!;
@@ -80,6 +80,24 @@ function expectMethodAgrees(r: DesignResult, system: UnitSystem) {
   expectPrinted(s4, /frost and minimum/, r.footing.requiredDepthIn.frost, "in", system, si ? 0 : 1);
   expectPrinted(s4, /provided/, r.footing.depthIn, "in", system, si ? 0 : 1);
   expectPrinted(s4, /lateral ratio/, lateral.ratio, null, system, 2);
+  // Step 1: the design tilt's velocity pressure; step 2: the wind case behind that row, at its tilt.
+  const s1 = stepText(r, system, 1);
+  expectPrinted(s1, si ? /N\/m² =/ : /\d² =/, r.wind.velocity.qzPsf, "psf", system, si ? 3 : 2);
+  if (req.wind) {
+    const s2 = stepText(r, system, 2), wc = req.wind.case, pd = si ? 3 : 2;
+    expect(s2).toContain(wc.label);
+    expectPrinted(s2, /windward half: p =/, req.wind.velocity.qzWithKdPsf, "psf", system, pd);
+    expectPrinted(s2, /windward half: p = [-\d.,]+ × [-\d.,]+ × [-\d.,]+ =/, wc.windwardPressurePsf, "psf", system, pd);
+    expectPrinted(s2, /leeward half: p = [-\d.,]+ × [-\d.,]+ × [-\d.,]+ =/, wc.leewardPressurePsf, "psf", system, pd);
+    expectPrinted(s2, /normal force F =/, wc.normalForceLb, "lb", system, forceD);
+    expectPrinted(s2, /horizontal/, wc.horizontalLb, "lb", system, forceD);
+    expectPrinted(s2, /, downward/, wc.downwardLb, "lb", system, forceD);
+  }
+  // Step 5: every other check's ratio as the engine computed it.
+  const s5Lines = methodSteps(r, system).find((x) => x.title.startsWith("5."))!.lines;
+  const others = r.footing.checks.filter((x) => x.id !== "lateral");
+  expect(s5Lines).toHaveLength(others.length);
+  others.forEach((c, i) => { if (Number.isFinite(c.ratio)) expectPrinted(s5Lines[i], /= ratio/, c.ratio, null, system, 2); });
   if (r.footing.depthMode === "sized") expect(s4).toMatch(new RegExp(`the largest, ${{ lateral: "lateral embedment", uplift: "uplift", frost: "frost and minimum depth" }[r.footing.controllingCheck]} \\(`));
 }
 
