@@ -62,7 +62,8 @@ export interface FootingEvaluation {
   checks: FootingCheck[];
   pass: boolean;
   lateralConverged: boolean;
-  lateralRequirement: LateralRequirement | null;
+  /** The row that sets `requiredDepthIn.lateral` (see `lateralRequirement`). */
+  lateralRow: FactoredPostLoad | null;
 }
 
 /** Bearing: gross pressure, or net with the soil removed credited (its unit weight named in the source). */
@@ -181,14 +182,19 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   ];
   let pass = true;
   for (let i = 0; i < checks.length; i++) if (!checks[i].pass) { pass = false; break; }
-  // Worked from the same row and the same solver as `need.lateral`, so its depth is that need exactly.
-  const lateralRequirement: LateralRequirement | null = lateralRow
-    ? {
-        governing: gov(lateralRow), downwardLb: lateralRow.downwardLb, windUpliftLb: lateralRow.windUpliftLb,
-        ...lateralWorking({ shearLb: lateralRow.shearLb, momentLbFt: lateralRow.momentAtGradeLbFt, diameterFt: b, sPsfPerFt: S, constrained: ctx.constrained }),
-      }
-    : null;
-  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass, lateralConverged, lateralRequirement };
+  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass, lateralConverged, lateralRow };
+}
+
+/**
+ * The lateral requirement of an evaluation worked through, from the same row and the same solver as
+ * `requiredDepthIn.lateral`, so its depth is that need exactly. Built once per design (not in the
+ * sizing loops).
+ */
+export function lateralRequirement(ctx: FootingContext, ev: FootingEvaluation): LateralRequirement | null {
+  const row = ev.lateralRow;
+  if (!row) return null;
+  const w = lateralWorking({ shearLb: row.shearLb, momentLbFt: row.momentAtGradeLbFt, diameterFt: ev.diameterIn / 12, sPsfPerFt: ctx.soil.lateralPsfPerFt, constrained: ctx.constrained });
+  return { governing: gov(row), downwardLb: row.downwardLb, windUpliftLb: row.windUpliftLb, ...w };
 }
 
 /** Worst bearing ratio at a hole and depth (for sweeps and automatic sizing). */

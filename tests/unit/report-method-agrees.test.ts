@@ -161,7 +161,7 @@ describe("the printed lateral step agrees with the engine", () => {
       fc.integer({ min: 2, max: 6 }), fc.constantFrom(12, 18, 24, 30, 36, "auto"), fc.constantFrom(1, 2, 3, 4, 5),
       fc.boolean(), fc.boolean(), fc.option(fc.integer({ min: 24, max: 120 }), { nil: undefined }), fc.constantFrom(0, 12, 36, 60),
     ],
-    { numRuns: 120 },
+    { numRuns: 100 },
   )("over many designs every number of steps 3 and 4 is the engine's, US and metric", (v, exposure, edition, tilt, settings, count, hole, soilClass, constrained, isolated, fixedDepthIn, frostDepthIn) => {
     const d = structuredClone(base) as DesignInput;
     d.site.windSpeedMph = v; d.site.exposure = exposure as "C"; d.site.edition = edition as "7-16"; d.site.frostDepthIn = frostDepthIn;
@@ -174,5 +174,5 @@ describe("the printed lateral step agrees with the engine", () => {
     try { r = sizeParsedDesign(d); } catch { fc.pre(false); return; }
     expectMethodAgrees(r, "imperial");
     expectMethodAgrees(r, "metric");
-  });
+  }, 120_000); // a generous limit on a shared machine, not a speed check
 });
