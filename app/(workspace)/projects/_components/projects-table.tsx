@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo } from "react";
-import { createColumnHelper } from "@/components/design/column-helper";
+import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
 import type { ProjectRow } from "@/db/queries/projects";

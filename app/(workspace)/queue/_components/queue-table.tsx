@@ -1,6 +1,6 @@
 "use client";
 
-import { createColumnHelper } from "@/components/design/column-helper";
+import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
 import type { EngineerQueueRow } from "@/db/queries/engineer-queue";

@@ -1,6 +1,6 @@
 "use client";
 
-import { createColumnHelper } from "@/components/design/column-helper";
+import { createColumnHelper } from "@tanstack/react-table";
 import { DataTable, type ServerPage } from "@/components/design/data-table";
 import { shortDate } from "@/components/ui/dates";
 
