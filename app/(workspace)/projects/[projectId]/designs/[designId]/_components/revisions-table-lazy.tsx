@@ -1,6 +1,6 @@
 "use client";
 
-import { useRef, useState, type ComponentProps, type ComponentType, type ReactNode } from "react";
+import { useLayoutEffect, useRef, useState, type ComponentProps, type ComponentType, type ReactNode } from "react";
 import type { RevisionsTable } from "./revisions-table";
 
 type Props = ComponentProps<typeof RevisionsTable>;
@@ -16,15 +16,22 @@ export function RevisionsTableLazy({ children, ...props }: Props & { children: R
   const [Loaded, setLoaded] = useState<ComponentType<Props> | null>(null);
   const started = useRef(false);
   const box = useRef<HTMLDivElement>(null);
+  // The id of the control that had the keyboard when the swap started, focused again once the
+  // browser's table is in the page (after React commits it: a timer or frame could run before).
+  const refocus = useRef<string | undefined>(undefined);
+  useLayoutEffect(() => {
+    if (!Loaded || !refocus.current) return;
+    document.getElementById(refocus.current)?.focus();
+    refocus.current = undefined;
+  }, [Loaded]);
   const load = () => {
     if (started.current) return;
     started.current = true;
     import("./revisions-table").then(
       (m) => {
         // Keep the keyboard where it was: the two tables give their controls the same ids.
-        const focused = box.current?.contains(document.activeElement) ? document.activeElement?.id : undefined;
+        refocus.current = box.current?.contains(document.activeElement) ? document.activeElement?.id || undefined : undefined;
         setLoaded(() => m.RevisionsTable);
-        if (focused) requestAnimationFrame(() => document.getElementById(focused)?.focus());
       },
       () => { started.current = false; }, // the server's table keeps working; try again on the next reach
     );
