@@ -92,7 +92,7 @@ export function DataTable<T>({ page, columns, caption, prefix = "", filterLabel 
           <label htmlFor={id} className="block text-xs font-medium text-slate-600">{filterLabel}</label>
           <input id={id} type="search" value={filter} onChange={(e) => setFilter(e.target.value)} className="mt-1 block w-full rounded-md border border-slate-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-accent-600 focus:ring-2 focus:ring-accent-100 focus:outline-none" />
         </div>
-        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.total}`}</p>
+        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.capped ? `${page.total.toLocaleString("en-US")}+` : page.total}`}</p>
       </div>
       {sortable.length > 1 ? (
         <div className="flex items-end gap-2 sm:hidden">
@@ -151,7 +151,7 @@ export function DataTable<T>({ page, columns, caption, prefix = "", filterLabel 
       {pageCount > 1 ? (
         <nav aria-label={`${caption} pages`} className="flex items-center justify-end gap-2 text-sm">
           <button type="button" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()} className="rounded-md border border-slate-300 bg-white px-3 py-1 disabled:opacity-40">Previous</button>
-          <span className="text-slate-600">Page {page.page} of {pageCount}</span>
+          <span className="text-slate-600">Page {page.page} of {pageCount}{page.capped ? "+" : ""}</span>
           <button type="button" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()} className="rounded-md border border-slate-300 bg-white px-3 py-1 disabled:opacity-40">Next</button>
         </nav>
       ) : null}

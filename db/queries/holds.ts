@@ -72,9 +72,19 @@ export async function countOpenHolds(organisationId: string): Promise<number> {
   return Number(n);
 }
 
+/**
+ * `openHoldsOfOrganisation` and `countOpenHolds` in one statement (the count an uncorrelated
+ * subquery over the open-holds index, run once); no row means no open hold, a count of 0.
+ */
+export async function openHoldsWithCount(organisationId: string, limit = 25): Promise<{ rows: Awaited<ReturnType<typeof openHoldsOfOrganisation>>; total: number }> {
+  const rows = await openHoldsOfOrganisation(organisationId, limit, db.raw("(select count(*) from design_holds c where c.organisation_id = ? and c.cleared_at is null) as total", [organisationId]));
+  return { rows: rows.map(({ total: _total, ...r }) => r), total: rows.length ? Number(rows[0].total) : 0 };
+}
+
 /** Open holds of the organisation with the revision each was raised on, oldest first (at most `limit`): the engineer's list opens with them. */
-export async function openHoldsOfOrganisation(organisationId: string, limit = 25): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null })[]> {
+export async function openHoldsOfOrganisation(organisationId: string, limit = 25, extra?: Knex.Raw): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null; total?: string })[]> {
   return holdsQuery()
+    .modify((qb) => { if (extra) qb.select(extra); })
     .join("designs as d", "d.id", "h.design_id")
     .join("projects as p", "p.id", "d.project_id")
     .leftJoin("revisions as rv", "rv.id", "h.revision_id")

@@ -55,6 +55,17 @@ export async function waitingFor(organisationId: string, engineerId: string, lim
   return queue(organisationId, (v) => v.where("engineer_id", engineerId).whereNull("decision").orderBy("submitted_at", "asc").limit(limit), { column: "submitted_at", order: "asc" });
 }
 
+/**
+ * The first `limit` revisions waiting for this engineer and how many wait in all, in one statement
+ * (the count an uncorrelated subquery, run once: an index-only count of the open-queue index).
+ * No row means none waits, so an empty list is a count of 0.
+ */
+export async function waitingForWithCount(organisationId: string, engineerId: string, limit = REVIEW_LIST_LIMIT): Promise<{ rows: QueueRow[]; total: number }> {
+  const rows: (QueueRow & { total: string })[] = await queue(organisationId, (v) => v.where("engineer_id", engineerId).whereNull("decision").orderBy("submitted_at", "asc").limit(limit), { column: "submitted_at", order: "asc" })
+    .select(db.raw("(select count(*) from reviews c where c.organisation_id = ? and c.engineer_id = ? and c.decision is null) as total", [organisationId, engineerId]));
+  return { rows: rows.map(({ total: _total, ...r }) => r), total: rows.length ? Number(rows[0].total) : 0 };
+}
+
 /** How many reviews wait for this engineer in the organisation (an index-only count of the open-queue index). */
 export async function countWaitingFor(organisationId: string, engineerId: string): Promise<number> {
   const [{ n }] = await db("reviews").where({ organisation_id: organisationId, engineer_id: engineerId }).whereNull("decision").count<{ n: string }[]>({ n: "*" });

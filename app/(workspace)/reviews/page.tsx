@@ -8,8 +8,8 @@ import { Caution } from "@/components/ui/caution";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { composedIn } from "@/components/format/quantity-text";
 import { dateInWords, shortDate } from "@/components/ui/dates";
-import { countOpenHolds, openHoldsOfOrganisation } from "@/db/queries/holds";
-import { countWaitingFor, recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
+import { openHoldsWithCount } from "@/db/queries/holds";
+import { recentlyDecided, submittedBy, waitingForWithCount, type QueueRow } from "@/db/queries/review-queue";
 
 export const metadata: Metadata = { title: "Reviews" };
 
@@ -17,15 +17,16 @@ async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
   const units = await readerUnits();
   const engineer = hasRole(user, "engineer");
-  // Each list shows its first rows; the counts say how many there are in all.
-  const [holds, holdCount, waiting, waitingCount, mine, decided] = await Promise.all([
-    engineer ? openHoldsOfOrganisation(user.organisationId) : Promise.resolve([]),
-    engineer ? countOpenHolds(user.organisationId) : Promise.resolve(0),
-    engineer ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
-    engineer ? countWaitingFor(user.organisationId, user.userId) : Promise.resolve(0),
+  // Each list shows its first rows; the counts say how many there are in all (read with the rows, one statement a list).
+  const [openHolds, waitingList, mine, decided] = await Promise.all([
+    engineer ? openHoldsWithCount(user.organisationId) : Promise.resolve({ rows: [], total: 0 }),
+    engineer ? waitingForWithCount(user.organisationId, user.userId) : Promise.resolve(null),
     hasRole(user, "designer") ? submittedBy(user.organisationId, user.userId) : Promise.resolve(null),
     recentlyDecided(user.organisationId),
   ]);
+  const { rows: holds, total: holdCount } = openHolds;
+  const waiting = waitingList?.rows ?? null;
+  const waitingCount = waitingList?.total ?? 0;
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-semibold">Reviews</h1>
