@@ -6,6 +6,17 @@ import type { ArrayLoadState } from "./loads/array-loads";
 import type { FactoredPostLoad } from "./loads/factored";
 import type { CombinationRow, WindCaseResult } from "./types";
 
+/** One wind case of a load state as the result reports it. */
+export function windCaseRow(st: ArrayLoadState, i: number): WindCaseResult {
+  const c = st.windCases[i];
+  return {
+    label: c.label, windDirectionDeg: c.windDirectionDeg, loadCase: c.loadCase, cnWindward: c.cn.windward, cnLeeward: c.cn.leeward,
+    windwardPressurePsf: c.force.windwardPressurePsf, leewardPressurePsf: c.force.leewardPressurePsf, normalForceLb: c.force.normalForceLb,
+    centreOfPressureFromWindwardEdgeFt: c.force.centreOfPressureFromWindwardEdgeFt, horizontalLb: c.force.horizontalLb,
+    downwardLb: c.force.downwardLb, momentAtPostTopLbFt: c.force.momentAtPostTopLbFt,
+  };
+}
+
 export function windCaseRows(st: ArrayLoadState): WindCaseResult[] {
   return st.windCases.map((c) => ({
     label: c.label, windDirectionDeg: c.windDirectionDeg, loadCase: c.loadCase, cnWindward: c.cn.windward, cnLeeward: c.cn.leeward,

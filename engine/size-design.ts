@@ -10,7 +10,7 @@ import { concreteOrder } from "./concrete/concrete-order";
 import { concreteSpecification } from "./concrete/concrete-spec";
 import { designContext } from "./design-context";
 import type { CheckId, FootingCheck } from "./footing/checks";
-import { evaluateFooting, type FootingEvaluation } from "./footing/evaluate-footing";
+import { evaluateFooting, lateralRequirement, type FootingEvaluation } from "./footing/evaluate-footing";
 import { smallestPipeFor } from "./footing/pipe";
 import { previewGeometry } from "./geometry/preview";
 import { BEAM_SHARING_CONTINUOUS, BEAM_SHARING_TWO_POSTS, DEFER_TO_CODE, SITE_CAUTIONS, WIND_METHOD_NOTE, sectionsUsed } from "./notices";
@@ -18,9 +18,11 @@ import { autoDiameter } from "./options/auto-diameter";
 import { diameterSweep } from "./options/diameter-sweep";
 import { tiltEnvelope } from "./options/tilt-envelope";
 import { parseDesignInput } from "./parse";
-import { governingLoads, postLoadTable, windCaseRows } from "./result-sections";
+import { governingLoads, postLoadTable, windCaseRow, windCaseRows } from "./result-sections";
 import type { DesignInput } from "./schema";
-import type { DesignResult } from "./types";
+import type { DesignResult, LateralRequirementWind } from "./types";
+import type { DesignContext } from "./design-context";
+import type { LateralRequirement } from "./footing/evaluate-footing";
 import { collectWarnings, warningOf, type DesignWarning } from "./warnings";
 import { qty, says } from "./quantity-text";
 import { ENGINE_VERSION } from "./version";
@@ -29,6 +31,21 @@ import { ENGINE_VERSION } from "./version";
 function checkById(checks: FootingCheck[], id: CheckId): FootingCheck {
   for (let i = 0; i < checks.length; i++) if (checks[i].id === id) return checks[i];
   throw new Error(`No ${id} check`);
+}
+
+/** The wind case behind a row (its own tilt setting's state), for the printed method. */
+function windAt(ctx: DesignContext, tiltDeg: number, windCase: number): LateralRequirementWind | null {
+  const i = ctx.tilts.indexOf(tiltDeg);
+  if (i < 0 || windCase < 0) return null;
+  const st = ctx.states[i];
+  return { tiltDeg, heightFt: st.heights.meanHeightFt, velocity: st.velocity, surfaceAreaFt2: st.dims.surfaceAreaFt2, case: windCaseRow(st, windCase) };
+}
+
+function withWind(ctx: DesignContext, req: LateralRequirement | null): DesignResult["footing"]["lateralRequirement"] {
+  if (!req) return null;
+  const out = req as LateralRequirement & { wind: LateralRequirementWind | null };
+  out.wind = windAt(ctx, req.governing.tiltDeg, req.governing.windCase);
+  return out;
 }
 
 export function sizeDesign(raw: unknown): DesignResult {
@@ -94,6 +111,7 @@ export function sizeParsedDesign(input: DesignInput): DesignResult {
       depthMode: posts.fixedDepthIn !== undefined ? "given" : "sized", controllingCheck: ev.controllingCheck,
       requiredDepthIn: ev.requiredDepthIn, checks: ev.checks, pass: ev.pass, post: pipe, soil: fctx.soil,
       suggestedPipeSize: smallestPipeFor(checkById(ev.checks, "postBending").demand, posts.yieldKsi),
+      lateralRequirement: withWind(ctx, lateralRequirement(fctx, ev)),
     },
     concrete: {
       perHole: hole, job,

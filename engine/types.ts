@@ -5,6 +5,7 @@ import type { ConcreteOrder } from "./concrete/concrete-order";
 import type { ConcreteSpecification } from "./concrete/concrete-spec";
 import type { HoleConcrete } from "./concrete/concrete-for-hole";
 import type { DepthCheckId, FootingCheck, Governing } from "./footing/checks";
+import type { LateralRequirement } from "./footing/evaluate-footing";
 import type { PipeMoment } from "./footing/pipe";
 import type { SoilValues } from "./footing/soil";
 import type { PreviewGeometry } from "./geometry/preview";
@@ -36,6 +37,15 @@ export interface CombinationRow {
 export interface GoverningLoad extends Governing {
   valueLb?: number;
   valueLbFt?: number;
+}
+
+/** The wind behind the lateral requirement, at that row's tilt setting. */
+export interface LateralRequirementWind {
+  tiltDeg: number;
+  heightFt: number;
+  velocity: VelocityPressure;
+  surfaceAreaFt2: number;
+  case: WindCaseResult;
 }
 
 export interface DesignResult {
@@ -90,6 +100,12 @@ export interface DesignResult {
     soil: SoilValues;
     /** Smallest standard pipe whose allowable moment covers the bending demand (null: none listed does). */
     suggestedPipeSize: PipeMoment["size"] | null;
+    /**
+     * The lateral requirement worked through (the row needing the deepest embedment, at its own
+     * tilt; its depthFt × 12 is requiredDepthIn.lateral) with the wind at that row's tilt. Absent
+     * in results saved before it was added (the report then works from the post-load table).
+     */
+    lateralRequirement?: (LateralRequirement & { wind: LateralRequirementWind | null }) | null;
   };
   concrete: { perHole: HoleConcrete; job: ConcreteOrder; specification: ConcreteSpecification };
   options: { diameterSweep: SweepRow[]; tiltEnvelope: { rows: TiltEnvelopeRow[]; governingTiltDeg: number } | null };

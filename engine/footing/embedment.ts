@@ -72,6 +72,58 @@ export function requiredLateralDepthFt(a: LateralArgs): { depthFt: number; conve
   return { depthFt: d, converged: true };
 }
 
+/**
+ * The lateral requirement worked through, from the same solution `requiredLateralDepthFt` finds:
+ * every value a printed substitution needs, so a report shows the engine's own numbers instead of
+ * re-deriving them. At the solved depth Eq. 18-1 is a fixed point: 0.5 A {1 + [1 + 4.36 h/A]^½}
+ * with A = 2.34 P/(S1 b) and S1 = S·min(d, 12)/3 gives d back (IBC §1807.3.2.1); Eq. 18-2 likewise
+ * gives d² = 4.25 P h/(S3 b) with S3 = S·min(d, 12) (§1807.3.2.2).
+ */
+export interface LateralWorking {
+  constrained: boolean;
+  /** |P|, lb. */
+  shearLb: number;
+  /** |M| at grade, lb-ft. */
+  momentAtGradeLbFt: number;
+  /** h = M/P, ft; null for a pure moment (P = 0). */
+  loadHeightFt: number | null;
+  diameterFt: number;
+  /** S used (doubled when §1806.3.4 is chosen), psf/ft. */
+  sPsfPerFt: number;
+  /** Depth S1 or S3 is taken at: min(d, 12 ft). */
+  bearingDepthFt: number;
+  /** S1 = S·min(d, 12)/3 (nonconstrained) or S3 = S·min(d, 12) (constrained), psf. */
+  bearingAtDepthPsf: number;
+  /** A = 2.34 P/(S1 b), ft (nonconstrained with P > 0; else null). */
+  aFt: number | null;
+  /** The required depth, ft (the search limit of 60 ft when not converged). */
+  depthFt: number;
+  /** False when no depth up to 60 ft satisfies the equation: depthFt is then that limit. */
+  converged: boolean;
+}
+
+export function lateralWorking(a: LateralArgs): LateralWorking {
+  const P = Math.abs(a.shearLb);
+  const M = Math.abs(a.momentLbFt);
+  const r = requiredLateralDepthFt(a);
+  const dS = Math.min(r.depthFt, S_DEPTH_CAP_FT);
+  const bearing = a.constrained ? a.sPsfPerFt * dS : (a.sPsfPerFt * dS) / 3;
+  const byMoment = P < 1e-9;
+  return {
+    constrained: a.constrained,
+    shearLb: P,
+    momentAtGradeLbFt: M,
+    loadHeightFt: byMoment ? null : M / P,
+    diameterFt: a.diameterFt,
+    sPsfPerFt: a.sPsfPerFt,
+    bearingDepthFt: dS,
+    bearingAtDepthPsf: bearing,
+    aFt: a.constrained || byMoment || bearing <= 0 ? null : (2.34 * P) / (bearing * a.diameterFt),
+    depthFt: r.depthFt,
+    converged: r.converged,
+  };
+}
+
 export interface EmbedmentDepth {
   depthFt: number;
   /** S1 (nonconstrained, at d/3) or S3 (constrained, at d), psf. */

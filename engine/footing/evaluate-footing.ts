@@ -10,7 +10,7 @@ import { imperialText, qty, says } from "../quantity-text";
 import type { FactoredPostLoad } from "../loads/factored";
 import { bearingPressurePsf } from "./bearing";
 import { FROST_CHECK_SOURCE, makeCheck, type DepthCheckId, type FootingCheck, type Governing } from "./checks";
-import { lateralRatio, requiredLateralDepthFt } from "./embedment";
+import { lateralRatio, lateralWorking, requiredLateralDepthFt, type LateralWorking } from "./embedment";
 import type { PipeMoment } from "./pipe";
 import { roundUpIn } from "./solve-depth";
 import { pierConcreteWeightLb } from "./uplift";
@@ -38,6 +38,20 @@ export interface FootingDepth {
   need: Record<"lateral" | "uplift" | "frost", number>;
   controllingCheck: DepthCheckId;
   lateralConverged: boolean;
+  /** The row whose lateral requirement is deepest (sets `need.lateral`); null without lateral rows. */
+  lateralRow: FactoredPostLoad | null;
+}
+
+/**
+ * The lateral requirement as the engine solved it: the row that needs the deepest embedment (which
+ * can differ from the row with the largest ratio at the design depth, and can sit at another tilt
+ * setting than the design tilt) and the equation worked through with its values.
+ */
+export interface LateralRequirement extends LateralWorking {
+  governing: Governing;
+  /** The row's factored loads (signed as in the post-load table). */
+  downwardLb: number;
+  windUpliftLb: number;
 }
 
 export interface FootingEvaluation {
@@ -48,6 +62,8 @@ export interface FootingEvaluation {
   checks: FootingCheck[];
   pass: boolean;
   lateralConverged: boolean;
+  /** The row that sets `requiredDepthIn.lateral` (see `lateralRequirement`). */
+  lateralRow: FactoredPostLoad | null;
 }
 
 /** Bearing: gross pressure, or net with the soil removed credited (its unit weight named in the source). */
@@ -118,12 +134,12 @@ export function footingDepth(ctx: FootingContext, diameterIn: number, useFixed =
   if (need.uplift > need[controllingCheck]) controllingCheck = "uplift";
   const fixed = useFixed ? ctx.fixedDepthIn : undefined;
   const depthIn = fixed ?? roundUpIn(need[controllingCheck], ctx.depthIncrementIn);
-  return { depthIn, need, controllingCheck, lateralConverged: latConverged };
+  return { depthIn, need, controllingCheck, lateralConverged: latConverged, lateralRow: latRow };
 }
 
 
 export function evaluateFooting(ctx: FootingContext, diameterIn: number): FootingEvaluation {
-  const { depthIn, need, controllingCheck, lateralConverged } = footingDepth(ctx, diameterIn);
+  const { depthIn, need, controllingCheck, lateralConverged, lateralRow } = footingDepth(ctx, diameterIn);
   const b = diameterIn / 12;
   const S = ctx.soil.lateralPsfPerFt;
   const wp = ctx.pipe.weightLbPerFt;
@@ -166,7 +182,19 @@ export function evaluateFooting(ctx: FootingContext, diameterIn: number): Footin
   ];
   let pass = true;
   for (let i = 0; i < checks.length; i++) if (!checks[i].pass) { pass = false; break; }
-  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass, lateralConverged };
+  return { diameterIn, depthIn, controllingCheck, requiredDepthIn: need, checks, pass, lateralConverged, lateralRow };
+}
+
+/**
+ * The lateral requirement of an evaluation worked through, from the same row and the same solver as
+ * `requiredDepthIn.lateral`, so its depth is that need exactly. Built once per design (not in the
+ * sizing loops).
+ */
+export function lateralRequirement(ctx: FootingContext, ev: FootingEvaluation): LateralRequirement | null {
+  const row = ev.lateralRow;
+  if (!row) return null;
+  const w = lateralWorking({ shearLb: row.shearLb, momentLbFt: row.momentAtGradeLbFt, diameterFt: ev.diameterIn / 12, sPsfPerFt: ctx.soil.lateralPsfPerFt, constrained: ctx.constrained });
+  return { governing: gov(row), downwardLb: row.downwardLb, windUpliftLb: row.windUpliftLb, ...w };
 }
 
 /** Worst bearing ratio at a hole and depth (for sweeps and automatic sizing). */

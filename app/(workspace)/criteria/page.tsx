@@ -37,7 +37,7 @@ async function CriteriaPage() {
       {canWrite ? (
         <section aria-labelledby="new-card" className="mt-8">
           <h2 id="new-card" className="mb-2 text-lg font-semibold">Add a card</h2>
-          <CriteriaCardForm states={US_STATES} timeZone={user.timeZone} />
+          <CriteriaCardForm states={US_STATES} timeZone={user.timeZone} units={units} />
         </section>
       ) : null}
     </>

@@ -1,8 +1,9 @@
 /**
  * The method as an engineer checks it: each step's formula, then the same formula with the
  * governing case's numbers put in, then the result. Every number is read from the saved result;
- * nothing here recomputes the design (the lateral step re-derives d from the engine's own inputs
- * to show the substitution, and states the engine's value beside it).
+ * nothing here recomputes the design. Steps 2–4 follow the row that sets the lateral depth
+ * (`footing.lateralRequirement`, the engine's own working, possibly at another tilt setting than the
+ * design tilt), and step 4 says which check governs the design depth and how it was rounded.
  *
  * In metric every step is written in SI units. The IBC embedment equations (§1807.3.2.1 Eq. 18-1,
  * §1807.3.2.2 Eq. 18-2) and the AISC moment are dimensionally consistent, so they take kN, m and kPa
@@ -15,6 +16,7 @@ import type { DesignResult } from "@/engine";
 import { formatPipeSize, formatQuantity, toDisplay, type UnitKind, type UnitSystem } from "@/components/format/quantity";
 import { checkSourceIn, checkTitleIn } from "@/components/format/quantity-text";
 import { CHECK_UNIT_KINDS } from "@/engine/footing/checks";
+import { lateralWorking } from "@/engine/footing/embedment";
 import { toMetric } from "@/engine/units";
 import { fmt } from "./report-model";
 import { userText } from "./report-text";
@@ -37,6 +39,52 @@ function unitsOf(system: UnitSystem) {
     q: (value: number, kind: UnitKind, d: number) => formatQuantity(value, kind, system, si ? { metricDecimals: d } : { decimals: d }),
     force: si ? "kN" : "lb", moment: si ? "kN·m" : "lb·ft", length: si ? "m" : "ft", pressure: si ? "kPa" : "psf", gradient: si ? "kPa/m" : "psf/ft",
   };
+}
+
+type Requirement = NonNullable<DesignResult["footing"]["lateralRequirement"]>;
+type RowRef = { postId: string; tiltDeg: number; combination: string };
+const sameRow = (a: RowRef, b: RowRef) => a.postId === b.postId && a.tiltDeg === b.tiltDeg && a.combination === b.combination;
+
+/**
+ * The engine's lateral working: stored in the result, or (for a result saved before it was) worked
+ * by the engine's own function from the lateral check's row, only when that row is in the saved
+ * post-load table (design tilt) and gives exactly the engine's required depth.
+ */
+export function lateralRequirementOf(r: DesignResult): Requirement | null {
+  if (r.footing.lateralRequirement) return r.footing.lateralRequirement;
+  if (r.footing.lateralRequirement === null) return null;
+  const g = r.footing.checks.find((c) => c.id === "lateral")?.governing;
+  if (!g || g.tiltDeg !== r.geometry.tiltDeg) return null;
+  const row = r.postLoads.find((p) => p.postId === g.postId && p.tiltDeg === g.tiltDeg)?.combinations.find((c) => c.combination === g.combination);
+  if (!row) return null;
+  const w = lateralWorking({ shearLb: row.shearLb, momentLbFt: row.momentAtGradeLbFt, diameterFt: r.footing.diameterIn / 12, sPsfPerFt: r.footing.soil.lateralPsfPerFt, constrained: r.input.posts.constrainedAtGrade });
+  if (Math.abs(w.depthFt * 12 - r.footing.requiredDepthIn.lateral) > 1e-6) return null;
+  const wc = g.windCase >= 0 ? r.wind.cases[g.windCase] : undefined;
+  return {
+    ...w, governing: g, downwardLb: row.downwardLb, windUpliftLb: row.windUpliftLb,
+    wind: wc ? { tiltDeg: g.tiltDeg, heightFt: r.wind.heightFt, velocity: r.wind.velocity, surfaceAreaFt2: r.geometry.surfaceAreaFt2, case: wc } : null,
+  };
+}
+
+/** Old results: the largest moment's wind case, only when it is at the design tilt (the saved cases' tilt). */
+function legacyWind(r: DesignResult): Requirement["wind"] {
+  const gm = r.governingLoads.moment;
+  const wc = gm.windCase >= 0 && gm.tiltDeg === r.geometry.tiltDeg ? r.wind.cases[gm.windCase] : undefined;
+  return wc ? { tiltDeg: gm.tiltDeg, heightFt: r.wind.heightFt, velocity: r.wind.velocity, surfaceAreaFt2: r.geometry.surfaceAreaFt2, case: wc } : null;
+}
+
+const DEPTH_CHECK_WORDS: Record<string, string> = { lateral: "lateral embedment", uplift: "uplift", frost: "frost and minimum depth" };
+
+/** Which check sets the design depth, every check's need, and how the depth was reached. */
+function depthLines(r: DesignResult, system: UnitSystem, inQ: (inches: number) => string): string[] {
+  const need = r.footing.requiredDepthIn;
+  const needs = `needs: lateral ${inQ(need.lateral)}, uplift ${inQ(need.uplift)}, frost and minimum ${inQ(need.frost)}`;
+  if (r.footing.depthMode === "given") return [`${needs}; the depth is given as ${inQ(r.footing.depthIn)}, not sized`];
+  const inc = r.input.posts.depthIncrementIn;
+  return [
+    `${needs}; the largest, ${DEPTH_CHECK_WORDS[r.footing.controllingCheck] ?? r.footing.controllingCheck} (${inQ(need[r.footing.controllingCheck])}), governs the depth`,
+    `design depth: ${inQ(need[r.footing.controllingCheck])} rounded up by the depth increment of ${formatQuantity(inc, "in", system, system === "metric" ? { metricDecimals: 0 } : { decimals: 2 })} = ${inQ(r.footing.depthIn)}`,
+  ];
 }
 
 export function methodSteps(r: DesignResult, system: UnitSystem = "imperial"): MethodStep[] {
@@ -84,68 +132,105 @@ export function methodSteps(r: DesignResult, system: UnitSystem = "imperial"): M
   const pq = (psf: number) => n(u.v(psf, "psf"), u.si ? 3 : 2);
   const fq = (lb: number) => u.q(lb, "lb", u.si ? 2 : 0);
   const mq = (lbFt: number) => u.q(lbFt, "lbFt", u.si ? 2 : 0);
-  const gm = r.governingLoads.moment;
-  const wc = gm.windCase >= 0 ? r.wind.cases[gm.windCase] : undefined;
-  if (wc) {
+  const inQ = (inches: number) => u.q(inches, "in", u.si ? 0 : 1);
+  const designTilt = r.geometry.tiltDeg;
+
+  // Steps 2–4 follow the one row that sets the lateral depth, as the engine solved it. Its tilt can
+  // be another of the rack's settings than the design tilt, so the wind and loads are that tilt's.
+  const req = lateralRequirementOf(r);
+  const rowName = (g: { postId: string; tiltDeg: number; combination: string }) =>
+    `post ${g.postId}, combination ${g.combination}${g.tiltDeg !== designTilt ? `, at the rack's ${n(g.tiltDeg, 1)}° setting (design tilt ${n(designTilt, 1)}°)` : ""}`;
+  const windStep = req?.wind ?? legacyWind(r);
+  if (windStep) {
+    const wc = windStep.case;
+    const q = windStep.velocity.qzWithKdPsf;
+    const otherTilt = windStep.tiltDeg !== designTilt;
     steps.push({
-      title: `2. Net pressure and force on the array, governing wind case: ${wc.label}`,
+      title: `2. Net pressure and force on the array, wind case ${wc.label}${otherTilt ? `, tilt ${n(windStep.tiltDeg, 1)}°` : ""}`,
       source: "ASCE 7 §27.3.2, Fig. 27.3-4 (free roofs, monoslope): p = qh · G · CN",
       lines: [
+        ...(otherTilt
+          ? [`at the ${n(windStep.tiltDeg, 1)}° setting the mean height is h = ${u.q(windStep.heightFt, "ft", 2)}: Kz = ${n(windStep.velocity.kz, 3)}, qz · Kd = ${pq(q)} ${u.pressure} by the equation of step 1`]
+          : []),
         "p = qz · Kd · G · CN on each half of the surface; F = Σ p · A",
-        `windward half: p = ${pq(v.qzWithKdPsf)} × ${n(r.wind.gustFactor, 2)} × ${n(wc.cnWindward, 2)} = ${pq(wc.windwardPressurePsf)} ${u.pressure}`,
-        `leeward half: p = ${pq(v.qzWithKdPsf)} × ${n(r.wind.gustFactor, 2)} × ${n(wc.cnLeeward, 2)} = ${pq(wc.leewardPressurePsf)} ${u.pressure}`,
-        `surface A = ${u.q(r.geometry.surfaceAreaFt2, "ft2", u.si ? 2 : 1)}: normal force F = ${fq(wc.normalForceLb)}; horizontal ${fq(wc.horizontalLb)}, downward ${fq(wc.downwardLb)} at tilt ${n(r.geometry.tiltDeg, 1)}°`,
+        `windward half: p = ${pq(q)} × ${n(r.wind.gustFactor, 2)} × ${n(wc.cnWindward, 2)} = ${pq(wc.windwardPressurePsf)} ${u.pressure}`,
+        `leeward half: p = ${pq(q)} × ${n(r.wind.gustFactor, 2)} × ${n(wc.cnLeeward, 2)} = ${pq(wc.leewardPressurePsf)} ${u.pressure}`,
+        `surface A = ${u.q(windStep.surfaceAreaFt2, "ft2", u.si ? 2 : 1)}: normal force F = ${fq(wc.normalForceLb)}; horizontal ${fq(wc.horizontalLb)}, downward ${fq(wc.downwardLb)} at tilt ${n(windStep.tiltDeg, 1)}°`,
       ],
     });
   }
 
-  const post = r.postLoads.find((p) => p.postId === gm.postId);
-  const row = post?.combinations.find((c) => c.combination === gm.combination);
-  steps.push({
-    title: `3. Loads at grade, post ${gm.postId}, combination ${gm.combination}`,
-    source: "ASCE 7 §2.4.1 (allowable stress design load combinations)",
-    lines: row
-      ? [`shear P = ${fq(row.shearLb)}, moment at grade M = ${mq(row.momentAtGradeLbFt)}, downward ${fq(row.downwardLb)}, wind uplift ${fq(row.windUpliftLb)}`]
-      : [`moment at grade M = ${mq(gm.valueLbFt ?? 0)}`],
-  });
-
   const lateral = r.footing.checks.find((c) => c.id === "lateral");
-  const lrow = lateral?.governing ? r.postLoads.find((p) => p.postId === lateral.governing!.postId)?.combinations.find((c) => c.combination === lateral.governing!.combination) : undefined;
-  if (lateral && lrow) {
-    // The same substitution in the reader's system: Eq. 18-1 and 18-2 are dimensionless in form.
-    const P = u.v(Math.abs(lrow.shearLb), "lb"), M = u.v(Math.abs(lrow.momentAtGradeLbFt), "lbFt");
-    const b = u.v(r.footing.diameterIn / 12, "ft");
-    const S = u.v(r.footing.soil.lateralPsfPerFt, "psfPerFt");
-    const dReq = u.v(r.footing.requiredDepthIn.lateral / 12, "ft");
-    const dCap = u.v(12, "ft"); // S1 taken at no more than 12 ft (3.66 m) deep, as the engine does
-    const Pd = u.si ? 2 : 0, Sd = u.si ? 1 : 0;
-    if (r.input.posts.constrainedAtGrade) {
-      steps.push({
-        title: "4. Lateral embedment, constrained at grade",
-        source: userText(checkSourceIn(lateral, system)),
-        lines: [
-          "d² = 4.25 · P · h / (S3 · b), S3 = S · d",
-          `M = P·h = ${n(M, Pd)} ${u.moment}, b = ${n(b, u.si ? 3 : 2)} ${u.length}, S = ${n(S, Sd)} ${u.gradient} → d = ${n(dReq, 2)} ${u.length} (${u.q(r.footing.requiredDepthIn.lateral, "in", u.si ? 0 : 1)})`,
-        ],
-      });
-    } else if (P > 0) {
-      const h = M / P;
-      const s1 = (S * Math.min(dReq, dCap)) / 3;
-      const A = (2.34 * P) / (s1 * b);
-      const d = 0.5 * A * (1 + Math.sqrt(1 + (4.36 * h) / A));
-      const dIn = u.si ? d / toMetric(1, "ft") * 12 : d * 12;
-      steps.push({
-        title: "4. Lateral embedment, not constrained at grade",
-        source: userText(checkSourceIn(lateral, system)),
-        lines: [
+  if (req) {
+    steps.push({
+      title: `3. Loads at grade, ${rowName(req.governing)}`,
+      source: "ASCE 7 §2.4.1 (allowable stress design load combinations)",
+      lines: [
+        `shear P = ${fq(req.shearLb)}, moment at grade M = ${mq(req.momentAtGradeLbFt)}, downward ${fq(req.downwardLb)}, wind uplift ${fq(req.windUpliftLb)}`,
+        "the row of the post-load table that needs the deepest lateral embedment",
+      ],
+    });
+  } else {
+    const gm = r.governingLoads.moment;
+    steps.push({
+      title: `3. Loads at grade, largest moment: ${rowName(gm)}`,
+      source: "ASCE 7 §2.4.1 (allowable stress design load combinations)",
+      lines: [`moment at grade M = ${mq(gm.valueLbFt ?? 0)}`],
+    });
+  }
+
+  if (lateral) {
+    const lines: string[] = [];
+    const constrained = r.input.posts.constrainedAtGrade;
+    if (req) {
+      // Every value below is the engine's own (converted); Eq. 18-1/18-2 are dimensionally consistent.
+      const P = u.v(req.shearLb, "lb"), M = u.v(req.momentAtGradeLbFt, "lbFt");
+      const b = u.v(req.diameterFt, "ft"), S = u.v(req.sPsfPerFt, "psfPerFt");
+      const sAt = u.v(req.bearingAtDepthPsf, "psf"), dAt = u.v(req.bearingDepthFt, "ft");
+      const d = u.v(req.depthFt, "ft"), dIn = req.depthFt * 12;
+      const Pd = u.si ? 2 : 0, Sd = u.si ? 1 : 0, bd = u.si ? 3 : 2, sd = u.si ? 2 : 1, dd = u.si ? 3 : 2;
+      const atDepth = req.bearingDepthFt < req.depthFt ? ` (S taken at no more than ${u.q(12, "ft", u.si ? 2 : 0)})` : "";
+      if (constrained) {
+        lines.push(
+          `d² = 4.25 · P · h / (S3 · b) = 4.25 · M / (S3 · b),  S3 = S · d${u.si ? "   (P in kN, lengths in m, pressures in kPa)" : ""}`,
+          `M = ${n(M, Pd)} ${u.moment}, b = ${n(b, bd)} ${u.length}, S = ${n(S, Sd)} ${u.gradient}`,
+          `S3 = ${n(S, Sd)} × ${n(dAt, 2)} = ${n(sAt, sd)} ${u.pressure}${atDepth}`,
+        );
+        lines.push(req.converged
+          ? `d = [4.25 × ${n(M, Pd)} / (${n(sAt, sd)} × ${n(b, bd)})]^½ = ${n(d, dd)} ${u.length} = ${inQ(dIn)} required`
+          : `no depth up to ${u.q(60, "ft", u.si ? 2 : 0)} satisfies Eq. 18-2 with these loads; the engine reports that limit, ${inQ(dIn)}, as required`);
+      } else if (req.loadHeightFt === null || req.aFt === null) {
+        lines.push(
+          `pure moment at grade (P = 0): Eq. 18-1 as 4.36 · M ≤ 4 · d² · S1 · b / 2.34,  S1 = S · d / 3`,
+          `M = ${n(M, Pd)} ${u.moment}, b = ${n(b, bd)} ${u.length}, S = ${n(S, Sd)} ${u.gradient}; S1 = ${n(S, Sd)} × ${n(dAt, 2)} / 3 = ${n(sAt, sd)} ${u.pressure}${atDepth}`,
+          `d = ${n(d, dd)} ${u.length} = ${inQ(dIn)} required`,
+        );
+      } else {
+        const h = u.v(req.loadHeightFt, "ft"), A = u.v(req.aFt, "ft");
+        lines.push(
           `d = 0.5 · A · {1 + [1 + 4.36 · h / A]^½},  A = 2.34 · P / (S1 · b),  S1 = S · d / 3${u.si ? "   (P in kN, lengths in m, pressures in kPa)" : ""}`,
-          `P = ${n(P, Pd)} ${u.force}, h = M / P = ${n(M, Pd)} / ${n(P, Pd)} = ${n(h, 2)} ${u.length}, b = ${n(b, u.si ? 3 : 2)} ${u.length}, S = ${n(S, Sd)} ${u.gradient}`,
-          `S1 = ${n(S, Sd)} × ${n(Math.min(dReq, dCap), 2)} / 3 = ${n(s1, u.si ? 2 : 1)} ${u.pressure};  A = 2.34 × ${n(P, Pd)} / (${n(s1, u.si ? 2 : 1)} × ${n(b, u.si ? 3 : 2)}) = ${n(A, 3)} ${u.length}`,
-          `d = 0.5 × ${n(A, 3)} × {1 + [1 + 4.36 × ${n(h, 2)} / ${n(A, 3)}]^½} = ${n(d, u.si ? 3 : 2)} ${u.length} = ${u.q(dIn, "in", u.si ? 0 : 1)} required`,
-          `provided ${u.q(r.footing.depthIn, "in", u.si ? 0 : 1)}: ratio ${n(lateral.ratio, 2)} ${lateral.pass ? "≤ 1.00, passes" : "> 1.00, FAILS"}`,
-        ],
-      });
+          `P = ${n(P, Pd)} ${u.force}, h = M / P = ${n(M, Pd)} / ${n(P, Pd)} = ${n(h, 2)} ${u.length}, b = ${n(b, bd)} ${u.length}, S = ${n(S, Sd)} ${u.gradient}`,
+          `S1 = ${n(S, Sd)} × ${n(dAt, 2)} / 3 = ${n(sAt, sd)} ${u.pressure}${atDepth};  A = 2.34 × ${n(P, Pd)} / (${n(sAt, sd)} × ${n(b, bd)}) = ${n(A, 3)} ${u.length}`,
+        );
+        lines.push(req.converged
+          ? `d = 0.5 × ${n(A, 3)} × {1 + [1 + 4.36 × ${n(h, 2)} / ${n(A, 3)}]^½} = ${n(d, dd)} ${u.length} = ${inQ(dIn)} required`
+          : `no depth up to ${u.q(60, "ft", u.si ? 2 : 0)} satisfies Eq. 18-1 with these loads; the engine reports that limit, ${inQ(dIn)}, as required`);
+      }
+    } else {
+      // A result saved before the engine stored its lateral working: its rows at other tilts are not
+      // in the result, so no substitution is printed; the engine's values are stated as they stand.
+      lines.push(
+        constrained ? "d² = 4.25 · P · h / (S3 · b), S3 = S · d" : "d = 0.5 · A · {1 + [1 + 4.36 · h / A]^½},  A = 2.34 · P / (S1 · b),  S1 = S · d / 3",
+        `${inQ(r.footing.requiredDepthIn.lateral)} required (engine); the worked substitution is not stored with this saved result: save the revision again to print it`,
+      );
     }
+    lines.push(...depthLines(r, system, inQ));
+    lines.push(`provided ${inQ(r.footing.depthIn)}: lateral ratio ${n(lateral.ratio, 2)} ${lateral.pass ? "≤ 1.00, passes" : "> 1.00, FAILS"}${lateral.governing && req && !sameRow(lateral.governing, req.governing) ? ` (the worst row at this depth is ${rowName(lateral.governing)})` : ""}`);
+    steps.push({
+      title: `4. Lateral embedment, ${constrained ? "constrained" : "not constrained"} at grade${req ? `: ${rowName(req.governing)}` : ""}`,
+      source: userText(checkSourceIn(lateral, system)),
+      lines,
+    });
   }
 
   const others = r.footing.checks.filter((c) => c.id !== "lateral");

@@ -5,22 +5,36 @@ import { FormStatus, SubmitButton } from "@/components/ui/form";
 import type { CriteriaCard } from "@/db/queries/criteria-cards";
 import { saveCriteriaCardAction } from "../actions";
 import { todayInZone } from "@/components/ui/dates";
+import { roundFor, toDisplay, unitLabel, type UnitKind, type UnitSystem } from "@/components/format/quantity";
+import { CRITERIA_NUMBER_KINDS, CRITERIA_NUMBER_RANGES } from "./criteria-units";
 
 const ROWS = [
   { key: "buildingCode", label: "Building code in force", unit: "", kind: "text", hint: "e.g. IBC 2021" },
   { key: "asceEdition", label: "ASCE 7 edition", unit: "", kind: "select", options: [["7-16", "ASCE 7-16"], ["7-22", "ASCE 7-22"]] },
   { key: "riskCategory", label: "Risk category", unit: "", kind: "select", options: [["I", "I"], ["II", "II"], ["III", "III"], ["IV", "IV"]] },
-  { key: "windSpeedMph", label: "Design wind speed", unit: "mph", kind: "number", hint: "85–200" },
+  { key: "windSpeedMph", label: "Design wind speed", unit: "mph", kind: "number" },
   { key: "exposure", label: "Exposure category", unit: "", kind: "select", options: [["B", "B"], ["C", "C"], ["D", "D"]] },
-  { key: "groundSnowPsf", label: "Ground snow load", unit: "psf", kind: "number", hint: "0–300" },
-  { key: "frostDepthIn", label: "Frost depth", unit: "in", kind: "number", hint: "0–120" },
+  { key: "groundSnowPsf", label: "Ground snow load", unit: "psf", kind: "number" },
+  { key: "frostDepthIn", label: "Frost depth", unit: "in", kind: "number" },
   { key: "soilClass", label: "Presumed soil class", unit: "", kind: "select", options: [["1", "1"], ["2", "2"], ["3", "3"], ["4", "4"], ["5", "5"]] },
 ] as const;
 
 const box = "block w-full rounded-md border border-slate-300 bg-white px-2 py-1.5 text-sm aria-[invalid]:border-red-600";
 
 /** A jurisdiction's criteria: each value with where it comes from and when it was checked. */
-export function CriteriaCardForm({ card, states, timeZone }: { card?: CriteriaCard; states: readonly string[]; timeZone?: string }) {
+/** A stored (customary) value as the reader types it: converted and rounded as every screen shows it. */
+function shownValue(stored: unknown, kind: UnitKind, units: UnitSystem): string {
+  const n = Number(stored);
+  if (stored === undefined || stored === null || stored === "" || !Number.isFinite(n)) return "";
+  return String(roundFor(toDisplay(n, kind, units), kind, units));
+}
+
+/**
+ * The numbers show and are typed in the reader's units (`units`, the `pierwise-units` cookie); the
+ * card keeps mph, psf and in. The action converts back (actions.ts); a value left as shown keeps
+ * its stored number exactly, so saving an unchanged card in metric does not drift by rounding.
+ */
+export function CriteriaCardForm({ card, states, timeZone, units = "imperial" }: { card?: CriteriaCard; states: readonly string[]; timeZone?: string; units?: UnitSystem }) {
   const { state, formProps } = useKeptForm(saveCriteriaCardAction);
   const today = todayInZone(timeZone);
   const v = (name: string, fallback: string) => state.values?.[name] ?? fallback;
@@ -29,6 +43,7 @@ export function CriteriaCardForm({ card, states, timeZone }: { card?: CriteriaCa
   return (
     <form {...formProps} className="space-y-4 rounded-lg border border-slate-200 bg-white p-4">
       {card ? <input type="hidden" name="cardId" value={card.id} /> : null}
+      <input type="hidden" name="units" value={units} />
       <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
         <div className="space-y-1">
           <label htmlFor="cc-jurisdiction" className="block text-sm font-medium">Jurisdiction</label>
@@ -46,19 +61,29 @@ export function CriteriaCardForm({ card, states, timeZone }: { card?: CriteriaCa
           <thead><tr className="text-left text-xs text-slate-600"><th className="py-1 pr-2">Criterion</th><th className="py-1 pr-2">Value</th><th className="py-1 pr-2">Source</th><th className="py-1">Date checked</th></tr></thead>
           <tbody className="align-top">
             {ROWS.map((r) => {
-              const current = card ? String(card.values[r.key]) : "";
+              const numberKind = r.kind === "number" ? CRITERIA_NUMBER_KINDS[r.key as keyof typeof CRITERIA_NUMBER_KINDS] : undefined;
+              const current = card ? (numberKind ? shownValue(card.values[r.key], numberKind, units) : String(card.values[r.key])) : "";
+              const unit = numberKind ? unitLabel(numberKind, units) : r.unit;
+              const range = numberKind ? CRITERIA_NUMBER_RANGES[r.key as keyof typeof CRITERIA_NUMBER_RANGES] : undefined;
+              const hint = range && numberKind ? `${shownValue(range[0], numberKind, units)}–${shownValue(range[1], numberKind, units)}` : "hint" in r ? r.hint : undefined;
               const src = card?.sources[r.key];
               return (
                 <tr key={r.key} className="border-t border-slate-100">
-                  <th scope="row" className="py-2 pr-2 text-left font-medium whitespace-nowrap"><label htmlFor={`cc-${r.key}`}>{r.label}</label>{r.unit ? <span className="ml-1 font-normal text-slate-500">({r.unit})</span> : null}</th>
+                  <th scope="row" className="py-2 pr-2 text-left font-medium whitespace-nowrap"><label htmlFor={`cc-${r.key}`}>{r.label}</label>{unit ? <span className="ml-1 font-normal text-slate-500">({unit})</span> : null}</th>
                   <td className="py-2 pr-2 min-w-28">
                     {r.kind === "select" ? (
                       <select id={`cc-${r.key}`} name={`values.${r.key}`} defaultValue={v(`values.${r.key}`, current || (r.key === "riskCategory" ? "II" : r.key === "soilClass" ? "4" : r.key === "exposure" ? "C" : "7-16"))} className={box}>
                         {r.options.map(([val, label]) => <option key={val} value={val}>{label}</option>)}
                       </select>
                     ) : (
-                      <input id={`cc-${r.key}`} name={`values.${r.key}`} inputMode={r.kind === "number" ? "decimal" : undefined} defaultValue={v(`values.${r.key}`, current)} placeholder={r.hint} aria-invalid={err(`values.${r.key}`) ? true : undefined} className={box} />
+                      <input id={`cc-${r.key}`} name={`values.${r.key}`} inputMode={r.kind === "number" ? "decimal" : undefined} defaultValue={v(`values.${r.key}`, current)} placeholder={hint} aria-invalid={err(`values.${r.key}`) ? true : undefined} className={box} />
                     )}
+                    {numberKind && card ? (
+                      <>
+                        <input type="hidden" name={`shown.${r.key}`} value={current} />
+                        <input type="hidden" name={`stored.${r.key}`} value={String(card.values[r.key])} />
+                      </>
+                    ) : null}
                     <E name={`values.${r.key}`} />
                   </td>
                   <td className="py-2 pr-2 min-w-56">
