@@ -218,7 +218,9 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
  * The contractors that appear in this engineer's queue, for the filter: their own organisation when
  * a review of it was submitted to them, and each organisation that engaged them on a project with
  * a review submitted to them. One early-stopping probe per organisation (the engineer's reviews in
- * it, until one is on a project they are engaged on), not one per engagement.
+ * it, until one is on a project they are engaged on), not one per engagement. The `OFFSET 0` keeps
+ * the planner from turning that EXISTS into a hash of every engaged project's designs (one designs
+ * probe per engagement: 530 buffers for 100 engagements, against 26).
  */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
   const { rows } = await db.raw(
@@ -226,8 +228,9 @@ export async function queueContractors(user: { userId: string; organisationId: s
      WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
         OR (o.id IN (SELECT g.organisation_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted')
             AND EXISTS (SELECT 1 FROM reviews v JOIN designs d ON d.id = v.design_id
-                        JOIN engagements g ON g.project_id = d.project_id AND g.engineer_user_id = ? AND g.status = 'accepted'
-                        WHERE v.engineer_id = ? AND v.organisation_id = o.id))
+                        WHERE v.engineer_id = ? AND v.organisation_id = o.id
+                          AND d.project_id IN (SELECT g.project_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND g.organisation_id = o.id)
+                        OFFSET 0))
      ORDER BY o.name`,
     [user.organisationId, user.userId, user.userId, user.userId, user.userId],
   );
