@@ -58,8 +58,9 @@ export interface QueueFilter {
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
  *   their designs (a few rows);
- * - `held`: the designs with an open hold, in the organisations they review for (open holds are
- *   few; read from design_holds alone). An approval is on hold when its design is held: it is
+ * - `held`: the designs with an open hold that a visible review can be on: in the organisation they
+ *   are signed in to, or engaged designs (open holds are few; read from design_holds alone; an
+ *   engaging contractor's other holds would only cost a probe each in `on_hold`). An approval is on hold when its design is held: it is
  *   recorded with its revision's status in one transaction (app/_lib/review/workflow.ts;
  *   20261203100000 refuses the status without the record), after which the pin keeps both, so an
  *   approval's revision is always an approved revision of that design;
@@ -99,7 +100,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
       SELECT DISTINCT h.design_id AS id FROM design_holds h
-      WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
+      WHERE h.cleared_at IS NULL AND (h.organisation_id = ? OR h.design_id IN (SELECT id FROM engaged_designs))
         ${waitingOnly ? "AND false" : ""}
     )`;
   const columns = "v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at";
