@@ -49,15 +49,17 @@ export function isQuantity(part: unknown): part is Quantity {
 
 /** Tagged template: strings and plain numbers stay words, quantities stay quantities, nested texts are spliced in. */
 export function says(strings: TemplateStringsArray, ...values: (TextPart | number | QuantityText)[]): QuantityText {
+  // Plain loops (no callback, no spread): a sentence is built per design on the sizing path.
   const out: QuantityText = [];
-  strings.forEach((s, i) => {
+  for (let i = 0; i < strings.length; i++) {
+    const s = strings[i];
     if (s) out.push(s);
     if (i < values.length) {
       const v = values[i];
-      if (Array.isArray(v)) out.push(...v);
+      if (Array.isArray(v)) for (let j = 0; j < v.length; j++) out.push(v[j]);
       else out.push(typeof v === "number" ? String(v) : v);
     }
-  });
+  }
   return out;
 }
 
@@ -70,14 +72,41 @@ export const IMPERIAL_WORDS: Record<QuantityUnit, string> = {
 /** 2000 → "2,000"; 0.75 → "0.75"; 1.25 with 1 decimal → "1.3" (no toLocaleString: runs per design). */
 function customaryNumber(q: Quantity): string {
   const rounded = Number.isInteger(q.value) ? q.value : Number(q.value.toFixed(q.decimals ?? 1));
-  const [whole, frac] = String(Math.abs(rounded)).split(".");
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-  return `${rounded < 0 ? "−" : ""}${grouped}${frac ? `.${frac}` : ""}`;
+  const abs = Math.abs(rounded);
+  const sign = rounded < 0 ? "−" : "";
+  // Under 1,000 there is nothing to group: the usual case, and the only one per design (no split, no regex).
+  if (abs < 1000) return sign + String(abs);
+  const [whole, frac] = String(abs).split(".");
+  return `${sign}${groupThousands(whole)}${frac ? `.${frac}` : ""}`;
+}
+
+/**
+ * The whole part of `String(n)` grouped: "1234567" → "1,234,567", "-4000" → "-4,000" (a number
+ * written otherwise, "1e+21" or "Infinity", comes back as it is). A loop, not a regular expression
+ * with look-ahead: this runs per design.
+ */
+export function groupThousands(digits: string): string {
+  const start = digits.charCodeAt(0) === 45 ? 1 : 0; // "-"
+  const n = digits.length - start;
+  if (n <= 3) return digits;
+  for (let i = start; i < digits.length; i++) {
+    const c = digits.charCodeAt(i);
+    if (c < 48 || c > 57) return digits;
+  }
+  const head = start + ((n - 1) % 3) + 1;
+  let out = digits.slice(0, head);
+  for (let i = head; i < digits.length; i += 3) out += "," + digits.slice(i, i + 3);
+  return out;
 }
 
 /** The sentence in US customary words: "Hole at least 4 in larger than the post". */
 export function imperialText(text: QuantityText): string {
-  return text.map((p) => (typeof p === "string" ? p : isPipeName(p) ? imperialPipe(p.pipe) : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`)).join("");
+  let out = "";
+  for (let i = 0; i < text.length; i++) {
+    const p = text[i];
+    out += typeof p === "string" ? p : isPipeName(p) ? imperialPipe(p.pipe) : `${customaryNumber(p)} ${IMPERIAL_WORDS[p.unit]}`;
+  }
+  return out;
 }
 
 /** "3-1/2" → "3 1/2 in standard pipe" (ASME B36.10 nominal size, as the trade says it). */

@@ -1,5 +1,4 @@
 "use client";
-import dynamic from "next/dynamic";
 import { useCallback, useMemo, useRef, useState } from "react";
 import type { DesignInput } from "@/engine/schema";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
@@ -11,6 +10,9 @@ import { ElevationFallback } from "./elevation-fallback";
 import { PreviewErrorBoundary } from "./preview-error-boundary";
 import { northCaption, previewFigures, type UnitSystem } from "./preview-labels";
 import { PreviewToolbar } from "./preview-toolbar";
+import { previewScene } from "./scene-loader";
+import type { SceneProps } from "./scene";
+import { useLoadable } from "./use-loadable";
 import { webglAvailable } from "./webgl-support";
 
 export interface DesignPreviewProps {
@@ -38,16 +40,23 @@ function geometryAtTilt(input: DesignInput, result: DesignResult, tiltDeg: numbe
 
 const SCENE_FAILED = "The 3D preview could not start in this browser.";
 
-// three.js and the scene load in a chunk of their own, only once WebGL is known to be there, so a
-// browser that gets the 2D elevation never downloads them.
-const Scene = dynamic(() => import("./scene").then((m) => m.Scene), {
-  ssr: false,
-  loading: () => (
-    <div role="status" className="flex h-full items-center justify-center bg-slate-50 text-sm text-slate-500">
-      Loading the 3D scene…
-    </div>
-  ),
-});
+/**
+ * The scene, once its chunk is there. three.js and the scene load in a chunk of their own, only
+ * once WebGL is known to be there (scene-loader.ts), so a browser that gets the 2D elevation
+ * never downloads them. Inside the preview's error boundary: a chunk that fails to load shows the
+ * elevation like a scene that fails to start.
+ */
+function SceneSlot(props: SceneProps) {
+  const scene = useLoadable(previewScene);
+  if (!scene) {
+    return (
+      <div role="status" className="flex h-full items-center justify-center bg-slate-50 text-sm text-slate-500">
+        Loading the 3D scene…
+      </div>
+    );
+  }
+  return <scene.Scene {...props} />;
+}
 
 /**
  * The same geometry object for as long as its contents are equal: a new result whose drawing did
@@ -97,7 +106,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
       <div className="relative" style={{ height }}>
         {noScene === null ? (
           <PreviewErrorBoundary fallback={fallback(SCENE_FAILED)} onError={() => setNoScene(SCENE_FAILED)}>
-            <Scene geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={onContextLost} />
+            <SceneSlot geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={onContextLost} />
           </PreviewErrorBoundary>
         ) : (
           fallback(noScene)

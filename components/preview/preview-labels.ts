@@ -50,10 +50,9 @@ export function previewFigures(g: PreviewGeometry, units: UnitSystem): PreviewFi
   };
 }
 
-/** A short wind label for the scene: "Wind onto the face, case A". */
-export function windSceneLabel(wind: NonNullable<PreviewGeometry["wind"]>): string {
-  return `Wind ${wind.windDirectionDeg === 180 ? "onto the face" : "from behind"}, case ${wind.loadCase}`;
-}
+// The scene's short wind label has a module of its own (wind-label.ts: no unit formatting, so the
+// scene's chunk carries none of the formatter); kept importable from here for the 2D elevation.
+export { windSceneLabel } from "./wind-label";
 
 /** Where the north marker comes from; revisions saved before the azimuth input were drawn facing south. */
 export function northCaption(azimuthDeg: number | undefined): string {

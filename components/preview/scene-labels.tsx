@@ -1,7 +1,6 @@
 "use client";
-import { useFrame, useThree } from "@react-three/fiber";
-import { useEffect, useMemo, type RefObject } from "react";
-import { Vector3 } from "three";
+import type { RefObject } from "react";
+import { Vector3, type Camera } from "three";
 import { placeLabels, type LabelRequest } from "./label-placement";
 import type { SceneLabel } from "./scene-annotations";
 import { COLOURS } from "./scene-style";
@@ -44,46 +43,41 @@ export function LabelLayer({ labels, elements }: { labels: SceneLabel[]; element
   );
 }
 
-/**
- * Inside the canvas: at every frame the scene draws (a changed design, a camera move, a resize),
- * projects each label's point to the screen, places the labels by priority and moves the
- * elements. Reads each label's size only when its text changed, so a frame writes styles and
- * forces no layout.
- */
-export function LabelTracker({ labels, elements }: { labels: SceneLabel[]; elements: LabelElements }) {
-  const invalidate = useThree((s) => s.invalidate);
-  const sizes = useMemo(() => new Map<string, { text: string; width: number; height: number }>(), []);
-  const probe = useMemo(() => new Vector3(), []);
-  // New text (a changed design or unit system) needs a frame to be placed even when nothing else moved.
-  useEffect(() => invalidate(), [labels, invalidate]);
+/** Each label's measured box, read again only when its text changed (so a frame forces no layout). */
+export type LabelSizes = Map<string, { text: string; width: number; height: number }>;
 
-  useFrame(({ camera, size }) => {
-    const requests: LabelRequest[] = [];
-    for (const l of labels) {
-      const el = elements.current.get(l.id);
-      if (!el) continue;
-      let measured = sizes.get(l.id);
-      if (!measured || measured.text !== l.text) {
-        measured = { text: l.text, width: el.offsetWidth, height: el.offsetHeight };
-        sizes.set(l.id, measured);
-      }
-      probe.set(l.at[0], l.at[1], l.at[2]).project(camera);
-      // Beyond the far plane or behind the camera: no place on screen.
-      const anchor = probe.z > 1 || probe.z < -1 ? null : { x: ((probe.x + 1) / 2) * size.width, y: ((1 - probe.y) / 2) * size.height };
-      requests.push({ id: l.id, priority: l.priority, anchor, width: measured.width, height: measured.height, fit: l.fit });
+const probe = new Vector3();
+
+/**
+ * At every frame the scene draws (a changed design, a camera move, a resize): projects each
+ * label's point to the screen, places the labels by priority and moves the elements. Writes
+ * styles only.
+ */
+export function placeLabelElements(labels: SceneLabel[], elements: Map<string, HTMLElement>, sizes: LabelSizes, camera: Camera, size: { width: number; height: number }): void {
+  const requests: LabelRequest[] = [];
+  for (const l of labels) {
+    const el = elements.get(l.id);
+    if (!el) continue;
+    let measured = sizes.get(l.id);
+    if (!measured || measured.text !== l.text) {
+      measured = { text: l.text, width: el.offsetWidth, height: el.offsetHeight };
+      sizes.set(l.id, measured);
     }
-    for (const p of placeLabels(requests, size)) {
-      const el = elements.current.get(p.id);
-      if (!el) continue;
-      if (p.visible && p.rect) {
-        el.style.transform = `translate(${Math.round(p.rect.x)}px, ${Math.round(p.rect.y)}px)`;
-        el.style.visibility = "visible";
-        el.dataset.spot = p.spot ?? "";
-      } else {
-        el.style.visibility = "hidden";
-        el.dataset.spot = "";
-      }
+    probe.set(l.at[0], l.at[1], l.at[2]).project(camera);
+    // Beyond the far plane or behind the camera: no place on screen.
+    const anchor = probe.z > 1 || probe.z < -1 ? null : { x: ((probe.x + 1) / 2) * size.width, y: ((1 - probe.y) / 2) * size.height };
+    requests.push({ id: l.id, priority: l.priority, anchor, width: measured.width, height: measured.height, fit: l.fit });
+  }
+  for (const p of placeLabels(requests, size)) {
+    const el = elements.get(p.id);
+    if (!el) continue;
+    if (p.visible && p.rect) {
+      el.style.transform = `translate(${Math.round(p.rect.x)}px, ${Math.round(p.rect.y)}px)`;
+      el.style.visibility = "visible";
+      el.dataset.spot = p.spot ?? "";
+    } else {
+      el.style.visibility = "hidden";
+      el.dataset.spot = "";
     }
-  });
-  return null;
+  }
 }

@@ -1,17 +1,17 @@
 "use client";
-import { Canvas, useThree } from "@react-three/fiber";
-import { memo, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { Canvas } from "@react-three/fiber";
+import { memo, useEffect, useMemo, useRef, useState } from "react";
 import type { PreviewGeometry } from "@/engine/geometry/preview";
-import { sceneBounds, type ViewName } from "./camera-framing";
 import { CameraRig } from "./camera-rig";
-import { windSceneLabel, type PreviewFigures } from "./preview-labels";
-import { Annotations } from "./scene-annotation-parts";
+import { sceneBounds, type Bounds, type ViewName } from "./camera-framing";
+import type { PreviewFigures } from "./preview-labels";
 import { sceneLabels } from "./scene-annotations";
-import { SceneControls } from "./scene-controls";
-import { LabelLayer, LabelTracker } from "./scene-labels";
+import { SceneDraw } from "./scene-draw";
+import { LabelLayer } from "./scene-labels";
+import { buildParts } from "./scene-parts";
 import { COLOURS } from "./scene-style";
+import { windSceneLabel } from "./wind-label";
 import { softwareRendering } from "./webgl-support";
-import { Footings, Ground, Modules, Posts, Racking } from "./scene-structure";
 
 export interface SceneProps {
   geometry: PreviewGeometry;
@@ -23,90 +23,68 @@ export interface SceneProps {
 }
 
 const DPR: [number, number] = [1, 2];
-const GL = { antialias: true };
+const GL = { antialias: true, alpha: false, powerPreference: "high-performance" } as const;
 // Without a GPU every pixel and every sample is the CPU's work: one pixel per CSS pixel, no multisampling.
 const SOFTWARE_DPR = 1;
-const SOFTWARE_GL = { antialias: false };
+const SOFTWARE_GL = { ...GL, antialias: false };
+const CAMERA = { fov: 35, near: 0.1, far: 1000 };
+// The canvas follows its box's size only: nothing here needs its place on the page (pointer
+// events use offsets within the canvas), so scrolling the page measures and draws nothing.
+const RESIZE = { scroll: false, debounce: { scroll: 0, resize: 0 } };
 
 /**
- * Compiles every shader program the scene needs without blocking the page (the renderer polls the
- * driver's parallel compile), then lets the canvas draw its first frame. Mounted after the parts,
- * so its layout effect runs once they are all in the scene. (The labels are page text over the
- * canvas: nothing waits for a font.)
+ * One design's parts (scene-parts.ts: instanced unit shapes with shared materials), mounted as a
+ * primitive. A new design swaps in new parts — the same shapes and materials, new small buffers —
+ * and frees the old parts' buffers; the shared shapes and materials are never disposed.
  */
-function CompileThenDraw({ onReady }: { onReady: () => void }) {
-  const gl = useThree((s) => s.gl);
-  const scene = useThree((s) => s.scene);
-  const camera = useThree((s) => s.camera);
-  useLayoutEffect(() => {
-    let live = true;
-    gl.compileAsync(scene, camera).then(
-      () => live && onReady(),
-      () => live && onReady(),
-    );
-    return () => {
-      live = false;
-    };
-  }, [gl, scene, camera, onReady]);
-  return null;
-}
-
-/** Draws the first frame once `frameloop` leaves "never" (and once more on the next frame, in case the switch lands after this effect). */
-function FirstFrame() {
-  const invalidate = useThree((s) => s.invalidate);
-  useLayoutEffect(() => {
-    invalidate();
-    const next = requestAnimationFrame(() => invalidate());
-    return () => cancelAnimationFrame(next);
-  }, [invalidate]);
-  return null;
+function DesignParts({ geometry, bounds }: { geometry: PreviewGeometry; bounds: Bounds }) {
+  const parts = useMemo(() => buildParts(geometry, bounds), [geometry, bounds]);
+  useEffect(() => () => parts.dispose(), [parts]);
+  return <primitive object={parts.group} dispose={null} />;
 }
 
 /**
- * The 3D canvas. Renders on demand only (a changed geometry, a camera move), never on a re-render
- * of the page with the same geometry: the parts keep their meshes and shared materials, so a new
- * design rewrites transforms and buffers but compiles no shader program. Nothing is drawn until
- * every program is compiled, so the first frame is complete and nothing compiles after it.
+ * The 3D canvas: a React Three Fiber canvas that draws on demand only (a changed design, a camera
+ * move, a resize), never on a re-render of the page with the same design. The parts share their
+ * shapes and materials, so a new design rewrites a few buffers but compiles no shader program;
+ * nothing is drawn until every program is compiled (scene-draw.tsx), so the first frame is
+ * complete and nothing compiles after it.
  */
 export const Scene = memo(function Scene({ geometry, figures, view, readOnly, label, onContextLost }: SceneProps) {
   const bounds = useMemo(() => sceneBounds(geometry), [geometry]);
+  const labels = useMemo(() => sceneLabels(geometry, figures, bounds.radiusFt, geometry.wind ? windSceneLabel(geometry.wind) : null), [geometry, figures, bounds.radiusFt]);
   const [ready, setReady] = useState(false);
   const [software] = useState(softwareRendering);
   const onReady = useMemo(() => () => setReady(true), []);
-  const r = bounds.radiusFt;
-  const c = bounds.centre;
-  const labels = useMemo(() => sceneLabels(geometry, figures, bounds.radiusFt, geometry.wind ? windSceneLabel(geometry.wind) : null), [geometry, figures, bounds.radiusFt]);
   const labelElements = useRef(new Map<string, HTMLElement>());
-  const [camera] = useState(() => ({ fov: 35, position: [c[0] + r, c[1] + r, c[2] + 2 * r] as [number, number, number] }));
+  // The latest callback, read when the context is lost (the listener stays the same).
+  const latestLost = useRef(onContextLost);
+  latestLost.current = onContextLost;
+  const lost = useMemo(() => () => latestLost.current(), []);
+  const c = bounds.centre, r = bounds.radiusFt;
+
   return (
     <div className="relative h-full">
       <Canvas
-        frameloop={ready ? "demand" : "never"}
+        frameloop="demand"
+        resize={RESIZE}
         dpr={software ? SOFTWARE_DPR : DPR}
-        camera={camera}
         gl={software ? SOFTWARE_GL : GL}
+        camera={CAMERA}
         aria-label={label}
         role="img"
         onCreated={({ gl }) => {
-          gl.domElement.addEventListener("webglcontextlost", onContextLost, { once: true });
           // Each check is a round trip to the GPU process that waits for the compile; three.js
           // advises turning it off in production (a failed program still draws nothing).
           gl.debug.checkShaderErrors = process.env.NODE_ENV !== "production";
         }}
       >
         <color attach="background" args={[COLOURS.background]} />
-        <hemisphereLight args={["#ffffff", "#6b705c", 1.4]} />
+        <hemisphereLight args={[0xffffff, 0x6b705c, 1.4]} />
         <directionalLight position={[c[0] + r, c[1] + 2 * r, c[2] + 1.5 * r]} intensity={1.8} />
-        <Footings g={geometry} />
-        <Posts g={geometry} />
-        <Racking g={geometry} />
-        <Modules g={geometry} />
-        <Ground g={geometry} />
-        <Annotations g={geometry} bounds={bounds} />
-        <SceneControls enableZoom={!readOnly} />
-        <CameraRig bounds={bounds} view={view} />
-        <LabelTracker labels={labels} elements={labelElements} />
-        {ready ? <FirstFrame /> : <CompileThenDraw onReady={onReady} />}
+        <DesignParts geometry={geometry} bounds={bounds} />
+        <CameraRig bounds={bounds} view={view} enableZoom={!readOnly} />
+        <SceneDraw labels={labels} elements={labelElements} onReady={onReady} onContextLost={lost} />
       </Canvas>
       <LabelLayer labels={labels} elements={labelElements} />
       {ready ? null : (

@@ -8,7 +8,7 @@
  * @example concreteSpecification({ strengthPsi: 4000, maxAggregateIn: 0.75, slumpIn: 4, frostDepthIn: 36 }).coldSite // true
  */
 import { requireInput } from "../input-ranges";
-import { imperialText, qty, says, type QuantityText } from "../quantity-text";
+import { groupThousands, imperialText, qty, says, type QuantityText } from "../quantity-text";
 
 export const CODE_MINIMUM_STRENGTH_PSI = 2000;
 export const CODE_MINIMUM_SOURCE = "IBC §1807.3.3 backfill: concrete of at least 2,000 psi";
@@ -44,10 +44,10 @@ export interface ConcreteSpecification {
   summary: string;
 }
 
-/** 4000 → "4,000" (toLocaleString is slow on this per-design path). */
+/** 4000 → "4,000" (toLocaleString, and a regular expression per call, are slow on this per-design path). */
 function thousands(n: number): string {
   const [whole, frac] = String(n).split(".");
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  const grouped = groupThousands(whole);
   return frac ? `${grouped}.${frac}` : grouped;
 }
 

@@ -46,6 +46,10 @@ export async function routeWeights(
     const context = await contextFor(browser, r.as);
     const sizes = await scriptsWhileLoading(context, r.path);
     await context.close();
+    // BENCH_SCRIPTS=editor (a route's name, or part of it): list that route's scripts, largest first.
+    if (process.env.BENCH_SCRIPTS && r.name.includes(process.env.BENCH_SCRIPTS)) {
+      for (const [url, kb] of [...sizes].sort((a, b) => b[1] - a[1])) console.log(`  ${r.name}: ${kb.toFixed(1).padStart(6)} kB  ${url.replace(/^.*\/_next\//, "")}`);
+    }
     out.push({ name: r.name, path: r.path, scripts: sizes.size, gzipKb: [...sizes.values()].reduce((a, b) => a + b, 0) });
   }
   return out;

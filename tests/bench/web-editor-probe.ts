@@ -6,7 +6,7 @@
  */
 export const EDITOR_PROBE = String.raw`
 (() => {
-  const b = (window.__bench = { programs: [], offscreenPrograms: 0, draws: [], firstDraw: null, longTasks: [], events: [], keys: [] });
+  const b = (window.__bench = { programs: [], offscreenPrograms: 0, draws: [], firstDraw: null, syncGlMs: 0, longTasks: [], events: [], keys: [] });
   for (const C of [window.WebGLRenderingContext, window.WebGL2RenderingContext]) {
     if (!C) continue;
     const p = C.prototype;
@@ -18,6 +18,17 @@ export const EDITOR_PROBE = String.raw`
       else b.offscreenPrograms += 1;
       return createProgram.apply(this, arguments);
     };
+    // Calls that wait for the GPU process (a shader's compile, a program's link) before the first
+    // draw: time the page's main thread spends blocked on the renderer while the scene starts.
+    for (const name of ["getProgramParameter", "getShaderParameter", "getActiveUniform", "getUniformLocation", "getActiveAttrib", "getAttribLocation", "getParameter", "getExtension", "getSupportedExtensions", "getContextAttributes"]) {
+      const f = p[name];
+      if (!f) continue;
+      p[name] = function () {
+        if (b.firstDraw !== null || !(this.canvas && this.canvas.isConnected)) return f.apply(this, arguments);
+        const t = performance.now();
+        try { return f.apply(this, arguments); } finally { b.syncGlMs += performance.now() - t; }
+      };
+    }
     for (const name of ["drawElements", "drawArrays", "drawElementsInstanced", "drawArraysInstanced"]) {
       const f = p[name];
       if (!f) continue;
@@ -68,6 +79,8 @@ export interface ProbeState {
   offscreenPrograms: number;
   draws: number[];
   firstDraw: number | null;
+  /** Time in WebGL calls that wait on the GPU process (compile status, uniforms, parameters) before the first draw. */
+  syncGlMs: number;
   longTasks: { start: number; duration: number }[];
   events: { id: number; name: string; start: number; duration: number }[];
   keys: { t: number; before: string; resultAt: number | null; paintAt: number | null }[];

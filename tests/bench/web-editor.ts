@@ -12,6 +12,9 @@ import { median } from "./web-http";
 export interface EditorFigures {
   jsWith3dKb: number;
   firstDrawMs: number | null;
+  syncGlMs: number;
+  sceneChunkAtMs: number | null;
+  htmlAtMs: number | null;
   loadBlockingMs: number;
   loadLongestTaskMs: number;
   programsAtFirstDraw: number;
@@ -43,6 +46,13 @@ export async function measureEditor(context: BrowserContext, url: string, keystr
   await page.waitForTimeout(3000);
   const loaded = await state(page);
   const loadEnd = await page.evaluate(() => performance.now());
+  // When the page's HTML had arrived, and when the largest script (the 3D scene's chunk) had.
+  const [htmlAtMs, sceneChunkAtMs] = await page.evaluate(() => {
+    const nav = performance.getEntriesByType("navigation")[0] as PerformanceNavigationTiming | undefined;
+    const scripts = (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).filter((e) => /\.js(\?|$)/.test(e.name));
+    const largest = scripts.sort((a, b) => b.decodedBodySize - a.decodedBodySize)[0];
+    return [nav ? nav.responseEnd : null, largest ? largest.responseEnd : null];
+  });
   const loadTasks = loaded.longTasks.filter((t) => t.start < loadEnd);
   const firstDraw = loaded.firstDraw;
   const jsWith3dKb = (await Promise.all(scripts.values())).reduce((a, b) => a + b, 0);
@@ -77,6 +87,9 @@ export async function measureEditor(context: BrowserContext, url: string, keystr
   return {
     jsWith3dKb,
     firstDrawMs: firstDraw,
+    syncGlMs: loaded.syncGlMs,
+    sceneChunkAtMs,
+    htmlAtMs,
     loadBlockingMs: loadTasks.reduce((a, t) => a + Math.max(0, t.duration - 50), 0),
     loadLongestTaskMs: Math.max(0, ...loadTasks.map((t) => t.duration)),
     programsAtFirstDraw: firstDraw === null ? 0 : loaded.programs.filter((t) => t <= firstDraw).length,

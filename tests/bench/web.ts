@@ -193,6 +193,9 @@ async function main(): Promise<void> {
   out(`  ${pad("", 44)}${editorRuns.map((e, i) => lpad(e.build ? `${e.build} ${Math.floor(i / builds.length) + 1}` : `run ${i + 1}`, 10)).join("")}`);
   row("JS including the 3D scene, kB gzip", (e) => e.jsWith3dKb, 1, "");
   row("3D first draw after navigation, ms (page canvas)", (e) => e.firstDrawMs, 0, "target ≤ 1500");
+  row("  of which: HTML received, ms", (e) => e.htmlAtMs, 0, "");
+  row("  largest script (the scene) received, ms", (e) => e.sceneChunkAtMs, 0, "");
+  row("  WebGL calls waiting on the GPU before it, ms", (e) => e.syncGlMs, 0, "(compile, link, uniforms)");
   row("main-thread blocking during load, ms", (e) => e.loadBlockingMs, 0, "(sum of long-task time over 50 ms)");
   row("longest task during load, ms", (e) => e.loadLongestTaskMs, 0, "");
   row("shader programs by first draw", (e) => e.programsAtFirstDraw, 0, "");

@@ -10,7 +10,9 @@ import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions"
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
 import { DesignEditor } from "./_components/design-editor";
 import { chosenUnits, readerUnits } from "@/app/_lib/unit-preference";
-import { RevisionsTable } from "./_components/revisions-table";
+import { RevisionsTableLazy } from "./_components/revisions-table-lazy";
+import { REVISIONS_TABLE, revisionColumns } from "./_components/revision-columns";
+import { ServerDataTable } from "@/components/design/server-data-table";
 import { revisionNoteIn } from "@/components/format/revision-note";
 import { shortDateTime } from "@/components/ui/dates";
 import { editorPinnedComments } from "@/app/_lib/services/review-comments";
@@ -54,6 +56,9 @@ async function DesignPage({ params, searchParams }: Props) {
     editorPinnedComments(user, design.id, shown),
     readerUnits(),
   ]);
+
+  const revisionsPage = { ...revisions, rows: revisions.rows.map((r) => ({ ...r, note: revisionNoteIn(r.note, units) })) };
+  const revisionProps = { basePath: path, latestId: latest.id, viewingId: shown.id, timeZone: user.timeZone, units };
 
   return (
     <>
@@ -103,7 +108,10 @@ async function DesignPage({ params, searchParams }: Props) {
           <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
           {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
         </div>
-        <RevisionsTable page={{ ...revisions, rows: revisions.rows.map((r) => ({ ...r, note: revisionNoteIn(r.note, units) })) }} basePath={path} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} units={units} />
+        {/* Below the editor: drawn on the server, the browser's table loads when the reader reaches for it. */}
+        <RevisionsTableLazy page={revisionsPage} {...revisionProps}>
+          <ServerDataTable page={revisionsPage} columns={revisionColumns(revisionProps)} {...REVISIONS_TABLE} pathname={path} search={search} />
+        </RevisionsTableLazy>
       </section>
     </>
   );
