@@ -98,7 +98,7 @@ export function DataTableView<T>({ table, page, text, controls }: { table: Table
           <label htmlFor={id} className="block text-xs font-medium text-slate-600">{filterLabel}</label>
           <input id={id} type="search" {...(linked ? { name: prefix + "q", form: formId, defaultValue: page.q } : { value: controls.filter, onChange: (e) => controls.setFilter(e.target.value) })} className="mt-1 block w-full rounded-md border border-slate-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-accent-600 focus:ring-2 focus:ring-accent-100 focus:outline-none" />
         </div>
-        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.total}`}</p>
+        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.capped ? `${page.total.toLocaleString("en-US")}+` : page.total}`}</p>
       </div>
       {sortable.length > 1 ? (
         <div className="flex items-end gap-2 sm:hidden">
@@ -167,7 +167,7 @@ export function DataTableView<T>({ table, page, text, controls }: { table: Table
       {pageCount > 1 ? (
         <nav aria-label={`${caption} pages`} className="flex items-center justify-end gap-2 text-sm">
           {linked ? pagerLink(page.page - 2, "Previous", table.getCanPreviousPage()) : <button type="button" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()} className={`${BUTTON} disabled:opacity-40`}>Previous</button>}
-          <span className="text-slate-600">Page {page.page} of {pageCount}</span>
+          <span className="text-slate-600">Page {page.page} of {pageCount}{page.capped ? "+" : ""}</span>
           {linked ? pagerLink(page.page, "Next", table.getCanNextPage()) : <button type="button" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()} className={`${BUTTON} disabled:opacity-40`}>Next</button>}
         </nav>
       ) : null}

@@ -78,6 +78,18 @@ export async function engagementsOfPerson(userId: string, email: string): Promis
     .orderBy("g.invited_at", "desc");
 }
 
+/**
+ * The engagements this person has not answered yet (what the queue page lists above the queue):
+ * the same rows as `engagementsOfPerson` with status "invited", newest first, without reading the
+ * accepted, declined and revoked ones (one per project they were ever engaged on).
+ */
+export async function invitationsOfPerson(userId: string, email: string): Promise<Engagement[]> {
+  return engagementQuery()
+    .where("g.status", "invited")
+    .where((w) => w.where("g.engineer_user_id", userId).orWhere((x) => x.whereNull("g.engineer_user_id").where("g.email", email.toLowerCase())))
+    .orderBy("g.invited_at", "desc");
+}
+
 /** Moves an engagement from one of `from` to `to`; false when it was no longer in `from` (a race or a repeat). */
 export async function setEngagementStatus(
   id: string,

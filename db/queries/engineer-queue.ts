@@ -43,6 +43,9 @@ export const QUEUE_SORTS = {
   submittedAt: "submitted_at", decidedAt: "decided_at", contractor: "contractor", projectName: "project_name", designName: "design_name",
   state: "array_position(array['waiting', 'on_hold', 'decided'], state)",
 } as const;
+/** The default order's counts stop past this many rows (or a page past the current one): "1,000+". */
+export const QUEUE_COUNT_CAP = 1000;
+
 const NOT_NULL_SORTS = new Set(["submittedAt", "contractor", "projectName", "designName", "state"]);
 
 export interface QueueFilter {
@@ -55,8 +58,9 @@ export interface QueueFilter {
  * One statement, built so its cost follows the page, not the engineer's whole history:
  * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
  *   their designs (a few rows);
- * - `held`: the designs with an open hold, in the organisations they review for (open holds are
- *   few; read from design_holds alone). An approval is on hold when its design is held: it is
+ * - `held`: the designs with an open hold that a visible review can be on: in the organisation they
+ *   are signed in to, or engaged designs (open holds are few; read from design_holds alone; an
+ *   engaging contractor's other holds would only cost a probe each in `on_hold`). An approval is on hold when its design is held: it is
  *   recorded with its revision's status in one transaction (app/_lib/review/workflow.ts;
  *   20261203100000 refuses the status without the record), after which the pin keeps both, so an
  *   approval's revision is always an approved revision of that design;
@@ -64,15 +68,16 @@ export interface QueueFilter {
  *   (copied onto the review, 20261204100000) is one of `engaged_designs`: both told from the index;
  * - the default order (state, no search) reads each state in its order straight from the
  *   `(engineer_id, decided or not, submitted_at, id)` index and stops at the page: waiting ones,
- *   then on hold, then decided. The count is one index-only pass per state over that index
- *   (`counts`, no joins, no sort), which also collects the first on-hold ids in order, so the
- *   on-hold rows are read by id (at most a page's worth), not by probing each held design;
+ *   then on hold, then decided. On-hold rows are the visible approvals of the held designs
+ *   (`on_hold`, found through reviews' design index: as few as the open holds). The count is an
+ *   index-only pass that stops past QUEUE_COUNT_CAP rows (or one page beyond the current page):
+ *   the page then says "1,000+" (`capped`), so the count does not grow with the engineer's history;
  * - any other order or a search: `picked` is every visible review with its state and sort key
  *   (names joined only when the search or sort needs them), sorted and counted by a window count;
- * - only the page's rows are joined to revision, design, project and contractor, and only their
- *   result JSON is read (for the failing checks; the footing figures are columns).
+ * - only the page's rows are joined to revision, design, project and contractor; no result JSON is
+ *   read (the footing figures and the failing checks' titles are columns, 20261204600000).
  */
-function queueSql(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter) {
+function queueSql(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter, countCap = QUEUE_COUNT_CAP) {
   const q = (query.q ?? "").trim().slice(0, 200);
   const sort = query.sort && Object.hasOwn(QUEUE_SORTS, query.sort) ? (query.sort as keyof typeof QUEUE_SORTS) : "state";
   const dir = query.dir === "asc" || query.dir === "desc" ? query.dir : "asc";
@@ -95,48 +100,54 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
       SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
       SELECT DISTINCT h.design_id AS id FROM design_holds h
-      WHERE h.cleared_at IS NULL AND h.organisation_id IN (SELECT ?::uuid UNION SELECT organisation_id FROM engaged)
+      WHERE h.cleared_at IS NULL AND (h.organisation_id = ? OR h.design_id IN (SELECT id FROM engaged_designs))
         ${waitingOnly ? "AND false" : ""}
     )`;
   const columns = "v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at";
   let body: string;
+  let countedTo: number | undefined;
   if (sort === "state" && !q) {
     // Rows any page up to this one can need from one state: a later page reads further, not more states.
     const reach = page * pageSize;
-    bindings.push(...visibleBindings); // counts, written before the branches
+    // Counts stop here (a count of the engineer's whole history would grow with it); past the cap
+    // the page says "1,000+", and the cap always reaches one page beyond this one, so Next works.
+    const cap = Math.max(countCap, reach + pageSize);
     const branches: string[] = [];
     // `(decision IS NOT NULL) IS FALSE / IS TRUE` match the index's second column as written
     // (a plain `decision IS NULL` would not: the planner compares expressions, not meanings).
+    const waitingWhere = `${visible} AND (v.decision IS NOT NULL) IS FALSE`;
+    const decidedWhere = `${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))`;
+    // On hold: the visible approvals of the held designs, found by design (few: open holds are few).
+    const heldReviews = `, on_hold AS MATERIALIZED (
+      SELECT v.id, v.submitted_at FROM reviews v
+      WHERE v.design_id IN (SELECT id FROM held) AND ${visible} AND v.decision = 'approve'
+    )`;
+    bindings.push(...visibleBindings); // on_hold
+    if (filter.state !== "on_hold") bindings.push(...visibleBindings); // counts, written before the branches
     if (!filter.state || filter.state === "waiting") {
-      branches.push(`(SELECT ${columns}, 'waiting' AS state FROM reviews v
-        WHERE ${visible} AND (v.decision IS NOT NULL) IS FALSE ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
+      branches.push(`(SELECT ${columns}, 'waiting' AS state FROM reviews v WHERE ${waitingWhere} ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
       bindings.push(...visibleBindings);
     }
     if (!filter.state || filter.state === "on_hold") {
-      // The counting pass already tells which are on hold; it hands over the first ones' ids.
-      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v WHERE v.id IN (SELECT unnest(on_hold_ids) FROM counts))`);
+      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
+        WHERE v.id IN (SELECT id FROM on_hold ORDER BY submitted_at, id LIMIT ${reach}))`);
     }
     if (!filter.state || filter.state === "decided") {
-      branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v
-        WHERE ${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))
-        ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
+      branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v WHERE ${decidedWhere} ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
       bindings.push(...visibleBindings);
     }
-    const total = { waiting: "waiting", on_hold: "on_hold", decided: "everything - waiting - on_hold" }[filter.state ?? "waiting"];
-    // A state filter counts only its part of the index (waiting, or decided for on hold and decided).
-    const section = !filter.state ? "" : filter.state === "waiting" ? " AND (v.decision IS NOT NULL) IS FALSE" : " AND (v.decision IS NOT NULL) IS TRUE";
-    body = `, counts AS MATERIALIZED (
-      SELECT count(*) FILTER (WHERE v.decision IS NULL) AS waiting,
-             count(*) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)) AS on_hold,
-             count(*) AS everything,
-             (array_agg(v.id ORDER BY v.submitted_at, v.id) FILTER (WHERE v.decision = 'approve' AND v.design_id IN (SELECT id FROM held)))[1:${reach}] AS on_hold_ids
-      FROM reviews v WHERE ${visible}${section}
+    // The total the page shows, counted up to cap + 1 rows (index-only; no join, no sort).
+    const capped = (where: string) => `(SELECT count(*) FROM (SELECT 1 FROM reviews v WHERE ${where} LIMIT ${cap + 1}) c)`;
+    const total = !filter.state ? capped(visible) : filter.state === "waiting" ? capped(waitingWhere) : filter.state === "decided" ? capped(decidedWhere) : "(SELECT count(*) FROM on_hold)";
+    body = `${heldReviews}, counts AS MATERIALIZED (
+      SELECT ${total} AS total
     ), picked AS (
       ${branches.join(" UNION ALL ")}
     ), page AS (
-      SELECT picked.*, (SELECT ${filter.state ? total : "everything"} FROM counts) AS total, row_number() OVER (ORDER BY ${order}) AS ord
+      SELECT picked.*, (SELECT total FROM counts) AS total, row_number() OVER (ORDER BY ${order}) AS ord
       FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
     )`;
+    countedTo = cap;
   } else {
     const where: string[] = [];
     const whereBindings: unknown[] = [];
@@ -168,23 +179,30 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
            p.name AS "projectName", p.state AS "projectState", o.id AS "organisationId", o.name AS contractor, page.state, page.decision,
            page.submitted_at AS "submittedAt", page.decided_at AS "decidedAt", page.total, page.ord,
            r.footing_depth_in AS "depthIn", r.footing_diameter_in AS "diameterIn", r.field_post_count AS posts,
-           coalesce((SELECT jsonb_agg(c->>'title') FROM jsonb_array_elements(r.result->'footing'->'checks') c WHERE (c->>'pass')::boolean IS FALSE), '[]'::jsonb) AS failing
+           coalesce(r.footing_failing_checks, '[]'::jsonb) AS failing
     FROM page JOIN revisions r ON r.id = page.revision_id JOIN designs d ON d.id = r.design_id
     JOIN projects p ON p.id = d.project_id JOIN organisations o ON o.id = p.organisation_id
     ORDER BY page.ord`;
-  return { sql, bindings, sort, dir, page, pageSize, q };
+  return { sql, bindings, sort, dir, page, pageSize, q, countedTo };
 }
 
-export async function engineerQueue(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter = {}): Promise<ListPage<EngineerQueueRow>> {
-  const built = queueSql(user, query, filter);
+/** `countCap` is QUEUE_COUNT_CAP but for tests, which cannot make a thousand reviews cheaply. */
+export async function engineerQueue(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter = {}, countCap = QUEUE_COUNT_CAP): Promise<ListPage<EngineerQueueRow>> {
+  const built = queueSql(user, query, filter, countCap);
   const { rows } = await db.raw(built.sql, built.bindings as never[]);
   let total = rows.length ? Number(rows[0].total) : 0;
+  let cap = built.countedTo;
   // A page past the end has no row to carry the count: count on its own (only then).
   if (!rows.length && built.page > 1) {
-    const counted = queueSql(user, { ...query, page: 1, pageSize: 1 }, filter);
+    // Counted to this page's cap, so a page past the end says the same count as the last one.
+    const counted = queueSql(user, { ...query, page: 1, pageSize: 1 }, filter, built.countedTo ?? countCap);
     const first = (await db.raw(counted.sql, counted.bindings as never[])).rows[0];
     total = first ? Number(first.total) : 0;
+    cap = counted.countedTo;
   }
+  // Counted up to cap + 1: more than the cap is shown as "cap+".
+  const capped = cap !== undefined && total > cap;
+  if (capped) total = cap!;
   return {
     rows: (rows as (EngineerQueueRow & { submittedAt: Date; decidedAt: Date | null; failing: unknown; total: string; ord: string })[]).map(
       ({ total: _total, ord: _ord, ...r }) => ({
@@ -193,7 +211,7 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
         decidedAt: r.decidedAt ? new Date(r.decidedAt).toISOString() : null,
         failing: (typeof r.failing === "string" ? JSON.parse(r.failing) : r.failing) as string[],
       })),
-    total, page: built.page, pageSize: built.pageSize, sort: built.sort, dir: built.dir, q: built.q,
+    total, ...(capped && { capped }), page: built.page, pageSize: built.pageSize, sort: built.sort, dir: built.dir, q: built.q,
   };
 }
 
@@ -201,7 +219,9 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
  * The contractors that appear in this engineer's queue, for the filter: their own organisation when
  * a review of it was submitted to them, and each organisation that engaged them on a project with
  * a review submitted to them. One early-stopping probe per organisation (the engineer's reviews in
- * it, until one is on a project they are engaged on), not one per engagement.
+ * it, until one is on a project they are engaged on), not one per engagement. The `OFFSET 0` keeps
+ * the planner from turning that EXISTS into a hash of every engaged project's designs (one designs
+ * probe per engagement: 530 buffers for 100 engagements, against 26).
  */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
   const { rows } = await db.raw(
@@ -209,8 +229,9 @@ export async function queueContractors(user: { userId: string; organisationId: s
      WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
         OR (o.id IN (SELECT g.organisation_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted')
             AND EXISTS (SELECT 1 FROM reviews v JOIN designs d ON d.id = v.design_id
-                        JOIN engagements g ON g.project_id = d.project_id AND g.engineer_user_id = ? AND g.status = 'accepted'
-                        WHERE v.engineer_id = ? AND v.organisation_id = o.id))
+                        WHERE v.engineer_id = ? AND v.organisation_id = o.id
+                          AND d.project_id IN (SELECT g.project_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND g.organisation_id = o.id)
+                        OFFSET 0))
      ORDER BY o.name`,
     [user.organisationId, user.userId, user.userId, user.userId, user.userId],
   );

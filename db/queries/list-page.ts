@@ -17,6 +17,8 @@ export interface ListQuery {
 export interface ListPage<T> {
   rows: T[];
   total: number;
+  /** The count stopped at `total`: there are more rows than that ("1–20 of 1,000+"). */
+  capped?: boolean;
   page: number;
   pageSize: number;
   sort: string;

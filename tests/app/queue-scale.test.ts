@@ -93,6 +93,28 @@ describe("the engineer's queue in its default order", () => {
     // A page past the end still says how many there are.
     const past = await engineerQueue(me, { page: 9, pageSize: 5 });
     expect([past.rows, past.total]).toEqual([[], 12]);
+    // With the count capped (QUEUE_COUNT_CAP, 5 here): the same rows on every page, the total is
+    // the cap and says so ("5+"), and it always reaches a page beyond the current one, so paging on
+    // works; once the cap passes the whole queue the count is exact again.
+    const cappedWalk: [string, QueueState][] = [];
+    const seen: [number, number, boolean][] = [];
+    for (let page = 1; page <= 7; page++) {
+      const got = await engineerQueue(me, { page, pageSize: 2 }, {}, 5);
+      seen.push([page, got.total, got.capped === true]);
+      cappedWalk.push(...got.rows.map((r) => [r.reviewId, r.state] as [string, QueueState]));
+    }
+    expect(cappedWalk).toEqual(sorted(1));
+    // cap = max(5, page × 2 + 2): 5, 6, 8, 10 (capped: 12 reviews are more), then 12, 14, 16 (exact;
+    // page 7 is past the end and is counted on its own with its own page's cap).
+    expect(seen).toEqual([[1, 5, true], [2, 6, true], [3, 8, true], [4, 10, true], [5, 12, false], [6, 12, false], [7, 12, false]]);
+    // Six decided (three sent back, three approved, not held) and four waiting, counted to 3.
+    expect(await engineerQueue(me, { pageSize: 1 }, { state: "decided" }, 3)).toMatchObject({ total: 3, capped: true });
+    expect(await engineerQueue(me, { pageSize: 1 }, { state: "waiting" }, 3)).toMatchObject({ total: 3, capped: true });
+    const exact = await engineerQueue(me, { pageSize: 1 }, { state: "waiting" }, 4);
+    expect([exact.total, exact.capped]).toEqual([4, undefined]);
+    const onHold = await engineerQueue(me, { pageSize: 2 }, { state: "on_hold" }, 1);
+    expect([onHold.total, onHold.capped]).toEqual([2, undefined]);
+    expect((await engineerQueue(me, { pageSize: 20 }, {}, 5)).capped).toBeUndefined();
     // The contractor filter lists the demo organisation (reviews on engaged projects), not another
     // contractor that engaged them but submitted nothing, nor their own firm (nothing of it submitted).
     await engage(OTHER_PROJECT_ID, engineer, "accepted", OTHER_ORG_ID);

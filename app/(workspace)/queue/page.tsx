@@ -5,7 +5,7 @@ import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { AnswerForm } from "@/components/engagements/answer-form";
 import { answerEngagementAction } from "@/app/(workspace)/queue/actions";
 import { Caution } from "@/components/ui/caution";
-import { engagementsOfPerson } from "@/db/queries/engagements";
+import { invitationsOfPerson } from "@/db/queries/engagements";
 import { engineerQueue, queueContractors, type QueueState } from "@/db/queries/engineer-queue";
 import { QueueFilters } from "./_components/queue-filters";
 import { QueueTable } from "./_components/queue-table";
@@ -25,12 +25,12 @@ async function QueuePage({ searchParams }: { searchParams: Promise<Record<string
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]) ?? "";
   const state = STATES.find((s) => s === one("state"));
-  const [page, contractors, engagements] = await Promise.all([
+  const [page, contractors, invited] = await Promise.all([
     engineerQueue(user, listQueryLenient(search), { contractor: one("contractor") || undefined, state }),
     queueContractors(user),
-    engagementsOfPerson(user.userId, user.email),
+    // Only the unanswered ones: the page lists nothing else of them.
+    invitationsOfPerson(user.userId, user.email),
   ]);
-  const invited = engagements.filter((e) => e.status === "invited");
   return (
     <>
       <h1 className="text-2xl font-semibold">Review queue</h1>

@@ -8,8 +8,8 @@ import { Caution } from "@/components/ui/caution";
 import { readerUnits } from "@/app/_lib/unit-preference";
 import { composedIn } from "@/components/format/quantity-text";
 import { dateInWords, shortDate } from "@/components/ui/dates";
-import { countOpenHolds, openHoldsOfOrganisation } from "@/db/queries/holds";
-import { countWaitingFor, recentlyDecided, submittedBy, waitingFor, type QueueRow } from "@/db/queries/review-queue";
+import { openHoldsWithCount } from "@/db/queries/holds";
+import { reviewLists, type QueueRow } from "@/db/queries/review-queue";
 
 export const metadata: Metadata = { title: "Reviews" };
 
@@ -17,15 +17,16 @@ async function ReviewsPage() {
   const user = await forPage(() => requireUser(), "/reviews");
   const units = await readerUnits();
   const engineer = hasRole(user, "engineer");
-  // Each list shows its first rows; the counts say how many there are in all.
-  const [holds, holdCount, waiting, waitingCount, mine, decided] = await Promise.all([
-    engineer ? openHoldsOfOrganisation(user.organisationId) : Promise.resolve([]),
-    engineer ? countOpenHolds(user.organisationId) : Promise.resolve(0),
-    engineer ? waitingFor(user.organisationId, user.userId) : Promise.resolve(null),
-    engineer ? countWaitingFor(user.organisationId, user.userId) : Promise.resolve(0),
-    hasRole(user, "designer") ? submittedBy(user.organisationId, user.userId) : Promise.resolve(null),
-    recentlyDecided(user.organisationId),
+  // Each list shows its first rows; the counts say how many there are in all. Two statements: the
+  // open holds with their count, and the three review lists with the waiting count.
+  const [openHolds, lists] = await Promise.all([
+    engineer ? openHoldsWithCount(user.organisationId) : Promise.resolve({ rows: [], total: 0 }),
+    reviewLists(user.organisationId, user.userId, { engineer, designer: hasRole(user, "designer") }),
   ]);
+  const { rows: holds, total: holdCount } = openHolds;
+  const { waiting, waitingTotal: waitingCount, waitingCapped, mine, decided } = lists;
+  // The count stops at 1,000 (WAITING_COUNT_CAP): "1,000+" beyond.
+  const waitingText = `${waitingCount.toLocaleString("en-US")}${waitingCapped ? "+" : ""}`;
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-semibold">Reviews</h1>
@@ -45,8 +46,8 @@ async function ReviewsPage() {
         </section>
       ) : null}
       {waiting ? (
-        <QueueTable timeZone={user.timeZone} title="Waiting for your review" rows={waiting} total={waitingCount} empty="Nothing is waiting for your review." show="submitted"
-          more={{ href: "/queue?state=waiting", label: `All ${waitingCount.toLocaleString("en-US")} waiting, in your review queue` }} />
+        <QueueTable timeZone={user.timeZone} title="Waiting for your review" rows={waiting} total={waitingCount} totalText={waitingText} empty="Nothing is waiting for your review." show="submitted"
+          more={{ href: "/queue?state=waiting", label: `All ${waitingText} waiting, in your review queue` }} />
       ) : null}
       {mine ? <QueueTable timeZone={user.timeZone} title="Submitted by you" rows={mine} empty="You have not submitted a revision yet. Open a design and submit its newest revision for review." show="engineer" /> : null}
       <QueueTable timeZone={user.timeZone} title="Recent decisions in your organisation" rows={decided} empty="No review has been decided yet." show="decided" />
@@ -56,14 +57,14 @@ async function ReviewsPage() {
 }
 
 
-function QueueTable({ title, rows, total, more, empty, show, timeZone }: {
-  title: string; rows: QueueRow[]; total?: number; more?: { href: string; label: string }; empty: string; show: "submitted" | "engineer" | "decided"; timeZone?: string;
+function QueueTable({ title, rows, total, totalText, more, empty, show, timeZone }: {
+  title: string; rows: QueueRow[]; total?: number; totalText?: string; more?: { href: string; label: string }; empty: string; show: "submitted" | "engineer" | "decided"; timeZone?: string;
 }) {
   const when = (d: Date | null) => shortDate(d, timeZone);
   const id = title.toLowerCase().replace(/\W+/g, "-");
   return (
     <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4">
-      <h2 id={id} className="text-base font-semibold">{title} ({total !== undefined && total > rows.length ? `first ${rows.length} of ${total.toLocaleString("en-US")}` : rows.length})</h2>
+      <h2 id={id} className="text-base font-semibold">{title} ({total !== undefined && total > rows.length ? `first ${rows.length} of ${totalText ?? total.toLocaleString("en-US")}` : rows.length})</h2>
       {rows.length === 0 ? <p className="mt-1 text-sm text-slate-600">{empty}</p> : (
         <ul className="mt-2 divide-y divide-slate-100">
           {rows.map((r, i) => (
