@@ -51,8 +51,17 @@ describe("criteria card form in metric", () => {
       expect(await page.getByLabel("Frost depth", { exact: true }).inputValue()).toBe("900");
       expect(await page.getByLabel("Jurisdiction", { exact: true }).inputValue()).toBe(jurisdiction);
       await shot(page, `criteria-card-metric-error-${js ? "js" : "nojs"}-390`);
-      // No sideways scroll of the page at 390 px (the table scrolls inside its own box).
+      // No sideways scroll at 390 px, of the page or inside the form: every criterion's name and
+      // every input lie within the screen, so a phone shows which row an input belongs to.
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
+      const outside = await page.evaluate((width) => {
+        const form = document.querySelector("form:has(#cc-windSpeedMph)") ?? document.body;
+        return [...form.querySelectorAll("th[scope=row], input:not([type=hidden]), select")]
+          .map((el) => ({ el, box: el.getBoundingClientRect() }))
+          .filter(({ box }) => box.width > 0 && (box.left < 0 || box.right > width))
+          .map(({ el }) => (el as HTMLElement).getAttribute("aria-label") ?? el.id ?? el.textContent);
+      }, PHONE.width);
+      expect(outside).toEqual([]);
 
       await page.getByLabel("Building code in force", { exact: true }).fill("IBC 2021");
       await page.getByLabel("Design wind speed", { exact: true }).fill("40");

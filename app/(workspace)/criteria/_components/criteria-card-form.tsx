@@ -34,6 +34,9 @@ function shownValue(stored: unknown, kind: UnitKind, units: UnitSystem): string 
  * card keeps mph, psf and in. The action converts back (actions.ts); a value left as shown keeps
  * its stored number exactly, so saving an unchanged card in metric does not drift by rounding.
  */
+// On a phone the header row is hidden, so the source and date inputs carry their column's name above them.
+const PHONE_LABEL = "max-sm:before:block max-sm:before:text-xs max-sm:before:text-slate-600 max-sm:before:content-[attr(data-label)]";
+
 export function CriteriaCardForm({ card, states, timeZone, units = "imperial" }: { card?: CriteriaCard; states: readonly string[]; timeZone?: string; units?: UnitSystem }) {
   const { state, formProps } = useKeptForm(saveCriteriaCardAction);
   const today = todayInZone(timeZone);
@@ -56,10 +59,12 @@ export function CriteriaCardForm({ card, states, timeZone, units = "imperial" }:
           <E name="state" />
         </div>
       </div>
-      <div className="overflow-x-auto">
-        <table className="min-w-full text-sm">
-          <thead><tr className="text-left text-xs text-slate-600"><th className="py-1 pr-2">Criterion</th><th className="py-1 pr-2">Value</th><th className="py-1 pr-2">Source</th><th className="py-1">Date checked</th></tr></thead>
-          <tbody className="align-top">
+      {/* Below 640 px each criterion reads as a block (name, value, source, date, each with its name),
+          so a phone shows which row an input belongs to without sideways scrolling. */}
+      <div className="sm:overflow-x-auto">
+        <table className="min-w-full text-sm max-sm:block">
+          <thead className="max-sm:sr-only"><tr className="text-left text-xs text-slate-600"><th className="py-1 pr-2">Criterion</th><th className="py-1 pr-2">Value</th><th className="py-1 pr-2">Source</th><th className="py-1">Date checked</th></tr></thead>
+          <tbody className="align-top max-sm:block">
             {ROWS.map((r) => {
               const numberKind = r.kind === "number" ? CRITERIA_NUMBER_KINDS[r.key as keyof typeof CRITERIA_NUMBER_KINDS] : undefined;
               const current = card ? (numberKind ? shownValue(card.values[r.key], numberKind, units) : String(card.values[r.key])) : "";
@@ -68,9 +73,9 @@ export function CriteriaCardForm({ card, states, timeZone, units = "imperial" }:
               const hint = range && numberKind ? `${shownValue(range[0], numberKind, units)}–${shownValue(range[1], numberKind, units)}` : "hint" in r ? r.hint : undefined;
               const src = card?.sources[r.key];
               return (
-                <tr key={r.key} className="border-t border-slate-100">
-                  <th scope="row" className="py-2 pr-2 text-left font-medium whitespace-nowrap"><label htmlFor={`cc-${r.key}`}>{r.label}</label>{unit ? <span className="ml-1 font-normal text-slate-500">({unit})</span> : null}</th>
-                  <td className="py-2 pr-2 min-w-28">
+                <tr key={r.key} className="border-t border-slate-100 max-sm:block max-sm:py-2">
+                  <th scope="row" className="py-2 pr-2 text-left font-medium whitespace-nowrap max-sm:block max-sm:pb-1"><label htmlFor={`cc-${r.key}`}>{r.label}</label>{unit ? <span className="ml-1 font-normal text-slate-500">({unit})</span> : null}</th>
+                  <td className="py-2 pr-2 sm:min-w-28 max-sm:block max-sm:py-1 max-sm:pr-0">
                     {r.kind === "select" ? (
                       <select id={`cc-${r.key}`} name={`values.${r.key}`} defaultValue={v(`values.${r.key}`, current || (r.key === "riskCategory" ? "II" : r.key === "soilClass" ? "4" : r.key === "exposure" ? "C" : "7-16"))} className={box}>
                         {r.options.map(([val, label]) => <option key={val} value={val}>{label}</option>)}
@@ -86,11 +91,11 @@ export function CriteriaCardForm({ card, states, timeZone, units = "imperial" }:
                     ) : null}
                     <E name={`values.${r.key}`} />
                   </td>
-                  <td className="py-2 pr-2 min-w-56">
+                  <td data-label="Source" className={`py-2 pr-2 sm:min-w-56 max-sm:block max-sm:py-1 max-sm:pr-0 ${PHONE_LABEL}`}>
                     <input aria-label={`${r.label}: source`} name={`sources.${r.key}.source`} defaultValue={v(`sources.${r.key}.source`, src?.source ?? "")} placeholder="e.g. county design criteria sheet" aria-invalid={err(`sources.${r.key}.source`) ? true : undefined} className={box} />
                     <E name={`sources.${r.key}.source`} />
                   </td>
-                  <td className="py-2 min-w-36">
+                  <td data-label="Date checked" className={`py-2 sm:min-w-36 max-sm:block max-sm:py-1 ${PHONE_LABEL}`}>
                     <input aria-label={`${r.label}: date checked`} type="date" name={`sources.${r.key}.checkedOn`} defaultValue={v(`sources.${r.key}.checkedOn`, src?.checkedOn ?? today)} aria-invalid={err(`sources.${r.key}.checkedOn`) ? true : undefined} className={box} />
                     <E name={`sources.${r.key}.checkedOn`} />
                   </td>
