@@ -19,6 +19,17 @@ export type ServerPage<T> = ListPage<T>;
 
 export type TableChange = Record<string, string | number | undefined>;
 
+/** What a page passes to a server-paged table, drawn in the browser (DataTable) or on the server (ServerDataTable). */
+export interface DataTableProps<T> {
+  page: ServerPage<T>;
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  columns: ColumnDef<T, any>[];
+  caption: string;
+  prefix?: string;
+  filterLabel?: string;
+  emptyText?: string;
+}
+
 /** How the controls act: navigate in the browser, or link to the changed URL (no JavaScript). */
 export type TableControls =
   | { kind: "navigate"; navigate: (change: TableChange) => void; filter: string; setFilter: (value: string) => void; pending: boolean }

@@ -1,9 +1,9 @@
 "use client";
 
-import { useReactTable, type ColumnDef } from "@tanstack/react-table";
+import { useReactTable } from "@tanstack/react-table";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useState, useTransition } from "react";
-import { DataTableView, serverTableOptions, type ServerPage, type TableChange } from "./data-table-view";
+import { DataTableView, serverTableOptions, type DataTableProps, type TableChange } from "./data-table-view";
 
 /**
  * A table whose sorting, filtering and paging happen on the server: the state lives in the URL
@@ -14,15 +14,7 @@ import { DataTableView, serverTableOptions, type ServerPage, type TableChange } 
  */
 export type { ServerPage } from "./data-table-view";
 
-export function DataTable<T>({ page, columns, caption, prefix = "", filterLabel = "Filter", emptyText = "Nothing here yet." }: {
-  page: ServerPage<T>;
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  columns: ColumnDef<T, any>[];
-  caption: string;
-  prefix?: string;
-  filterLabel?: string;
-  emptyText?: string;
-}) {
+export function DataTable<T>({ page, columns, caption, prefix = "", filterLabel = "Filter", emptyText = "Nothing here yet." }: DataTableProps<T>) {
   const router = useRouter();
   const pathname = usePathname();
   const search = useSearchParams();

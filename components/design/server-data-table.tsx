@@ -1,5 +1,5 @@
-import { createTable, type ColumnDef } from "@tanstack/react-table";
-import { DataTableView, serverTableOptions, type ServerPage, type TableChange } from "./data-table-view";
+import { createTable } from "@tanstack/react-table";
+import { DataTableView, serverTableOptions, type DataTableProps, type TableChange } from "./data-table-view";
 
 /**
  * The same server-paged table drawn on the server only: sorting and paging are links, the filter
@@ -8,14 +8,7 @@ import { DataTableView, serverTableOptions, type ServerPage, type TableChange } 
  * reader first reaches for it (see revisions-table-lazy.tsx). The table is built as the library's
  * useReactTable builds it, without the hook (no state to keep on the server).
  */
-export function ServerDataTable<T>({ page, columns, caption, prefix = "", filterLabel = "Filter", emptyText = "Nothing here yet.", pathname, search }: {
-  page: ServerPage<T>;
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  columns: ColumnDef<T, any>[];
-  caption: string;
-  prefix?: string;
-  filterLabel?: string;
-  emptyText?: string;
+export function ServerDataTable<T>({ page, columns, caption, prefix = "", filterLabel = "Filter", emptyText = "Nothing here yet.", pathname, search }: DataTableProps<T> & {
   pathname: string;
   search: Record<string, string | string[] | undefined>;
 }) {
