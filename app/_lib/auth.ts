@@ -22,8 +22,11 @@ export const currentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
   // The cookie is only a pointer: its server-side record must still be open (sign-out ends it).
-  if (!session.sessionId || !(await sessionIsOpen(session.sessionId, session.userId))) return null;
-  const member = await findActiveMember(session.userId, session.organisationId);
+  if (!session.sessionId) return null;
+  // Both at once (one round trip before every page and route, not two): the member read is used
+  // only when the session is open.
+  const [open, member] = await Promise.all([sessionIsOpen(session.sessionId, session.userId), findActiveMember(session.userId, session.organisationId)]);
+  if (!open) return null;
   // A password reset ends every session that began before it.
   if (member?.passwordChangedAt && (session.signedInAt ?? 0) < new Date(member.passwordChangedAt).getTime()) return null;
   return member ?? null;

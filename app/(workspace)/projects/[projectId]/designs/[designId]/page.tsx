@@ -1,21 +1,19 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AccessError, hasRole, isOutsider, requireUser } from "@/app/_lib/auth";
-import { cardFor, designFor, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
+import { cardFor, designFor, isUuid, projectFor, revisionFor, type DesignRevision } from "@/app/_lib/designs";
 import { forPage, refusable } from "@/app/_lib/page-access";
-import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { StatusBadge } from "@/components/review/status-badge";
-import { DesignReviewBar } from "@/components/review/design-review-bar";
+import { DesignReviewBar, designReviewReads } from "@/components/review/design-review-bar";
 import { clearHoldAction } from "@/app/(workspace)/reviews/[revisionId]/actions";
 import { latestRevision, listRevisions } from "@/db/queries/revisions";
+import { listQueryLenient } from "@/app/_lib/schemas/project";
 import { DesignEditor } from "./_components/design-editor";
 import { chosenUnits, readerUnits } from "@/app/_lib/unit-preference";
-import { RevisionsTableLazy } from "./_components/revisions-table-lazy";
-import { REVISIONS_TABLE, revisionColumns } from "./_components/revision-columns";
-import { ServerDataTable } from "@/components/design/server-data-table";
+import { RevisionsSection } from "./_components/revisions-section";
 import { revisionNoteIn } from "@/components/format/revision-note";
 import { shortDateTime } from "@/components/ui/dates";
-import { editorPinnedComments } from "@/app/_lib/services/review-comments";
+import { editorPinnedComments, readEditorPinnedComments } from "@/app/_lib/services/review-comments";
 
 export const metadata: Metadata = { title: "Design" };
 type Props = { params: Promise<{ projectId: string; designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -29,36 +27,50 @@ async function DesignPage({ params, searchParams }: Props) {
   const search = await searchParams;
   const one = (k: string) => (Array.isArray(search[k]) ? search[k][0] : search[k]);
   const path = `/projects/${projectId}/designs/${designId}`;
-  const { user, project, design, card, latest, viewing, from } = await forPage(async () => {
+  const { user, project, design, card, latest, viewing, from, pinnedRows, revisions, reviewReads } = await forPage(async () => {
     const u = await requireUser();
+    // Every read starts at once (one round trip to the database instead of six in a row); each is
+    // checked, in the order the checks always ran (project, design, revisions: the first refusal
+    // answers), before anything read is used. The design's own reads go by its id from the address
+    // only when it is an id at all; what they return is dropped unless the design check passes.
+    const designKey = isUuid(designId) ? designId : undefined;
     // Reading is open to an engineer engaged on the project; writing stays with members (canWrite below).
-    const p = await projectFor(u, projectId, { engaged: true });
-    const d = await designFor(u, designId, { engaged: true });
-    if (d.projectId !== p.id) throw new AccessError(404, "That design was not found.");
-    const l = (await latestRevision(d.id)) as DesignRevision | undefined;
-    if (!l) throw new Error(`design ${d.id} has no revision`);
-    const pick = async (id: string | undefined) => {
-      if (!id) return null;
-      const r = await revisionFor(u, id, { engaged: true });
-      if (r.designId !== d.id) throw new AccessError(404, "That revision was not found.");
+    const projectAndCard = projectFor(u, projectId, { engaged: true }).then(async (p) => ({ p, card: await cardFor(u, p.criteriaCardId, p) }));
+    const pick = (id: string | undefined) => (id ? revisionFor(u, id, { engaged: true }) : Promise.resolve(null));
+    const latestRead = designKey ? (latestRevision(designKey) as Promise<DesignRevision | undefined>) : Promise.resolve(undefined);
+    const viewingRead = pick(one("revision"));
+    // Beside the fields: the comments of the latest decision at or before the revision shown.
+    // and the review bar's holds and newer approval.
+    const shownRead = Promise.all([latestRead, viewingRead.catch(() => null)]).then(([l, v]) => (v && v.designId === designKey ? v : l));
+    const pinnedRead = shownRead.then((shown) => (designKey && shown ? readEditorPinnedComments(designKey, shown.number) : []));
+    const reviewRead = shownRead.then((shown) => (designKey && shown ? designReviewReads(designKey, shown) : undefined));
+    // Below the editor: a page of the design's revisions.
+    const revisionsRead = designKey ? listRevisions(designKey, listQueryLenient(search, "r_")) : Promise.resolve(undefined);
+    const [pc, d, l, v, f, pinned, list, review] = await Promise.allSettled([projectAndCard, designFor(u, designId, { engaged: true }), latestRead, viewingRead, pick(one("from")), pinnedRead, revisionsRead, reviewRead]);
+    const value = <T,>(r: PromiseSettledResult<T>): T => {
+      if (r.status === "rejected") throw r.reason;
+      return r.value;
+    };
+    const { p, card } = value(pc);
+    const design = value(d);
+    if (design.projectId !== p.id) throw new AccessError(404, "That design was not found.");
+    const latest = value(l);
+    if (!latest) throw new Error(`design ${design.id} has no revision`);
+    const inDesign = (r: DesignRevision | null) => {
+      if (r && r.designId !== design.id) throw new AccessError(404, "That revision was not found.");
       return r;
     };
-    return { user: u, project: p, design: d, card: await cardFor(u, p.criteriaCardId, p), latest: l, viewing: await pick(one("revision")), from: await pick(one("from")) };
+    const viewing = inDesign(value(v));
+    const from = inDesign(value(f));
+    return { user: u, project: p, design, card, latest, viewing, from, pinnedRows: value(pinned), revisions: value(list)!, reviewReads: value(review)! };
   }, path);
 
   const canWrite = !isOutsider(user, project) && hasRole(user, "designer", "admin");
   const shown = viewing ?? latest;
   const isOld = shown.id !== latest.id;
   const start = !isOld && from && canWrite ? from : shown;
-  const [revisions, pinnedComments, units] = await Promise.all([
-    listRevisions(design.id, listQueryLenient(search, "r_")),
-    // Beside the fields: the comments of the latest decision, resolved where the revision shown changed the field.
-    editorPinnedComments(user, design.id, shown),
-    readerUnits(),
-  ]);
-
-  const revisionsPage = { ...revisions, rows: revisions.rows.map((r) => ({ ...r, note: revisionNoteIn(r.note, units) })) };
-  const revisionProps = { basePath: path, latestId: latest.id, viewingId: shown.id, timeZone: user.timeZone, units };
+  const [units, chosen] = await Promise.all([readerUnits(), chosenUnits()]);
+  const pinnedComments = editorPinnedComments(user, pinnedRows, shown.input, units);
 
   return (
     <>
@@ -75,7 +87,7 @@ async function DesignPage({ params, searchParams }: Props) {
         Saved {shortDateTime(shown.createdAt, user.timeZone)} by {shown.authorName ?? "someone"}{shown.note ? ` — “${revisionNoteIn(shown.note, units).replace(/\.$/, "")}”` : ""}.
         <span className="ml-1 font-mono text-xs text-slate-600" title="Content hash (sha256 of input, result and engine version)">#{shown.contentHash.slice(0, 10)}</span>
       </p>
-      <DesignReviewBar designId={design.id} revisionId={shown.id} number={shown.number} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} units={units} />
+      <DesignReviewBar reads={reviewReads} revisionId={shown.id} status={shown.status} clearAction={hasRole(user, "engineer") ? clearHoldAction : undefined} timeZone={user.timeZone} units={units} />
       {isOld ? (
         <div role="status" className="mt-3 flex flex-wrap items-center gap-3 rounded-md border border-sky-300 bg-sky-50 px-3 py-2 text-sm text-sky-950">
           <span>You are reading revision {shown.number}, an older revision. It cannot change.</span>
@@ -99,7 +111,7 @@ async function DesignPage({ params, searchParams }: Props) {
           readOnly={!canWrite || isOld}
           card={card ? { label: `${card.jurisdiction}, ${card.state}`, values: card.values } : null}
           pinnedComments={pinnedComments}
-          units={await chosenUnits()}
+          units={chosen}
         />
       </div>
 
@@ -108,10 +120,7 @@ async function DesignPage({ params, searchParams }: Props) {
           <h2 id="revisions-heading" className="text-lg font-semibold">Revisions</h2>
           {latest.number > 1 ? <Link href={`${path}/diff`} className="text-sm text-accent-800 hover:underline">Compare two revisions</Link> : null}
         </div>
-        {/* Below the editor: drawn on the server, the browser's table loads when the reader reaches for it. */}
-        <RevisionsTableLazy page={revisionsPage} {...revisionProps}>
-          <ServerDataTable page={revisionsPage} columns={revisionColumns(revisionProps)} {...REVISIONS_TABLE} pathname={path} search={search} />
-        </RevisionsTableLazy>
+        <RevisionsSection revisions={revisions} path={path} search={search} latestId={latest.id} viewingId={shown.id} timeZone={user.timeZone} units={units} />
       </section>
     </>
   );
