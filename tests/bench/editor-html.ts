@@ -10,7 +10,12 @@
  * Options (environment): EDITOR_HTML_BUILDS="after=.next-r3fsrv,before=.next-old" (label=dist dir,
  * each a build under the repository root; several are served side by side on the same database and
  * their requests interleaved; default PIERWISE_DIST_DIR or .next), EDITOR_HTML_REQUESTS (default 50),
- * EDITOR_HTML_WARMUP (default 10), EDITOR_HTML_PATH_SUFFIX (e.g. "?revision=<id>", default none).
+ * EDITOR_HTML_WARMUP (default 10), EDITOR_HTML_PATH_SUFFIX (e.g. "?revision=<id>", default none),
+ * EDITOR_HTML_BROWSER_LOADS (default 6: editor loads per build in headless Chromium with WebGL, as
+ * bench:web loads it, reporting where the time to the HTML goes by the navigation's own timing —
+ * before the request left the browser, waiting for the answer, receiving it — and when the 3D
+ * scene's chunk was requested and received; 0 to skip), EDITOR_HTML_SETTLE_MS (default 0: open a
+ * blank page and wait this long before each timed navigation).
  * Build first (`PIERWISE_DIST_DIR=… npx next build`); this script does not build.
  */
 import { spawn, type ChildProcess } from "node:child_process";
@@ -21,6 +26,7 @@ import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import knex from "knex";
+import { chromium } from "playwright-core";
 import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { freePort } from "../../db/lib/ports";
@@ -28,7 +34,8 @@ import { ensureCluster, findServerBinaries, psql, startServer, stopServer, type 
 import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { DEMO_PROJECT_ID } from "../../db/seeds/02_demo_projects";
-import { waitForHttp } from "../support/runner";
+import { CHROMIUM_ARGS } from "../support/browser";
+import { ensureChromium, waitForHttp } from "../support/runner";
 import { percentile } from "./web-http";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
@@ -157,6 +164,45 @@ async function main(): Promise<void> {
   }
   const loadAfter = load();
 
+  // In the browser, as bench:web loads the editor: a fresh signed-in context per load, interleaved.
+  const BROWSER_LOADS = Number(process.env.EDITOR_HTML_BROWSER_LOADS ?? 6);
+  const SETTLE_MS = Number(process.env.EDITOR_HTML_SETTLE_MS ?? 0);
+  type Nav = { requestStart: number; responseStart: number; responseEnd: number; sceneRequested: number; sceneReceived: number; firstScriptRequested: number };
+  const navs = new Map<string, Nav[]>(served.map((s) => [s.label, []]));
+  let browserLoad = "";
+  if (BROWSER_LOADS > 0) {
+    ensureChromium();
+    const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", headless: true, args: CHROMIUM_ARGS });
+    const loadBefore = load();
+    for (let i = 0; i < BROWSER_LOADS; i++) {
+      for (const s of i % 2 === 0 ? served : [...served].reverse()) {
+        const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, baseURL: s.base });
+        await context.request.post("/api/session", { data: { email: "designer@demo.pierwise.test", password: "pierwise-demo" } });
+        const page = await context.newPage();
+        // EDITOR_HTML_SETTLE_MS: open a blank page and wait this long first, so the new tab's own
+        // start-up work (the browser's, on the same cores) is over before the navigation is timed.
+        if (SETTLE_MS > 0) {
+          await page.goto("about:blank");
+          await page.waitForTimeout(SETTLE_MS);
+        }
+        await page.goto(s.base + editorPath, { waitUntil: "load" });
+        await page.waitForTimeout(1500);
+        navs.get(s.label)!.push(await page.evaluate(() => {
+          const nav = performance.getEntriesByType("navigation")[0] as PerformanceNavigationTiming;
+          const scripts = (performance.getEntriesByType("resource") as PerformanceResourceTiming[]).filter((e) => /\.js(\?|$)/.test(e.name));
+          const scene = [...scripts].sort((a, b) => b.decodedBodySize - a.decodedBodySize)[0];
+          return {
+            requestStart: nav.requestStart, responseStart: nav.responseStart, responseEnd: nav.responseEnd,
+            sceneRequested: scene?.startTime ?? NaN, sceneReceived: scene?.responseEnd ?? NaN, firstScriptRequested: Math.min(...scripts.map((e) => e.startTime)),
+          };
+        }));
+        await context.close();
+      }
+    }
+    browserLoad = `${loadBefore} → ${load()}`;
+    await browser.close();
+  }
+
   const lines: string[] = [];
   const out = (line = "") => lines.push(line);
   out(`bench:editor-html — ${new Date().toISOString()} · ${os.cpus().length} cores · load average ${loadBefore} → ${loadAfter}`);
@@ -173,6 +219,23 @@ async function main(): Promise<void> {
     out();
     out(`  statements per editor request, ${s.label}:`);
     for (const q of statements.get(s.label)!.byQuery) out(`    ${f(q.calls, 1).padStart(5)}  ${q.query}`);
+  }
+  if (BROWSER_LOADS > 0) {
+    out();
+    out(`In Chromium (WebGL by software), ${BROWSER_LOADS} loads per build, interleaved${SETTLE_MS ? `, each after a blank page and ${SETTLE_MS} ms` : ""}, load average ${browserLoad}; ms after navigation start, median (min–max):`);
+    const cols: [string, (n: Nav) => number][] = [
+      ["request sent", (n) => n.requestStart], ["answer starts", (n) => n.responseStart], ["HTML received", (n) => n.responseEnd],
+      ["server's part", (n) => n.responseStart - n.requestStart], ["first script requested", (n) => n.firstScriptRequested],
+      ["scene chunk requested", (n) => n.sceneRequested], ["scene chunk received", (n) => n.sceneReceived],
+    ];
+    for (const s of served) {
+      const xs = navs.get(s.label)!;
+      out(`  ${s.label}:`);
+      for (const [name, get] of cols) {
+        const v = xs.map(get);
+        out(`    ${name.padEnd(24)}${f(percentile(v, 50)).padStart(6)} (${f(Math.min(...v))}–${f(Math.max(...v))})   ${v.map((x) => f(x)).join(" ")}`);
+      }
+    }
   }
   // EDITOR_HTML_DUMP=folder: each build's last HTML, and when its parts arrived (ms: bytes).
   if (process.env.EDITOR_HTML_DUMP) {
