@@ -29,7 +29,7 @@ async function DesignPage({ params, searchParams }: Props) {
   const path = `/projects/${projectId}/designs/${designId}`;
   const { user, project, design, card, latest, viewing, from, pinnedRows, revisions, reviewReads } = await forPage(async () => {
     const u = await requireUser();
-    // Every read starts at once (one round trip to the database instead of six in a row); each is
+    // Every read starts at once (three waits on the database at most, not eight in a row); each is
     // checked, in the order the checks always ran (project, design, revisions: the first refusal
     // answers), before anything read is used. The design's own reads go by its id from the address
     // only when it is an id at all; what they return is dropped unless the design check passes.
@@ -39,8 +39,8 @@ async function DesignPage({ params, searchParams }: Props) {
     const pick = (id: string | undefined) => (id ? revisionFor(u, id, { engaged: true }) : Promise.resolve(null));
     const latestRead = designKey ? (latestRevision(designKey) as Promise<DesignRevision | undefined>) : Promise.resolve(undefined);
     const viewingRead = pick(one("revision"));
-    // Beside the fields: the comments of the latest decision at or before the revision shown.
-    // and the review bar's holds and newer approval.
+    // Once the revision shown is known: the pinned comments beside the fields (the latest decision
+    // at or before it) and the review bar's holds and newer approval.
     const shownRead = Promise.all([latestRead, viewingRead.catch(() => null)]).then(([l, v]) => (v && v.designId === designKey ? v : l));
     const pinnedRead = shownRead.then((shown) => (designKey && shown ? readEditorPinnedComments(designKey, shown.number) : []));
     const reviewRead = shownRead.then((shown) => (designKey && shown ? designReviewReads(designKey, shown) : undefined));
