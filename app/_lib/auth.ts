@@ -1,10 +1,10 @@
 import { cache } from "react";
 import { hasAcceptedEngagement, type ProjectScope } from "@/db/queries/engagements";
-import { findActiveMember, type MemberRecord } from "@/db/queries/users";
+import type { MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
 import { readSession } from "./session";
-import { sessionIsOpen } from "@/db/queries/sessions";
+import { openSessionMember } from "@/db/queries/sessions";
 
 /**
  * The data-access checks. Every page, server action and route handler that reads or writes data
@@ -22,8 +22,8 @@ export const currentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
   // The cookie is only a pointer: its server-side record must still be open (sign-out ends it).
-  if (!session.sessionId || !(await sessionIsOpen(session.sessionId, session.userId))) return null;
-  const member = await findActiveMember(session.userId, session.organisationId);
+  // One statement: the session is open (and marked seen) and the member active.
+  const member = session.sessionId ? await openSessionMember(session.sessionId, session.userId, session.organisationId) : undefined;
   // A password reset ends every session that began before it.
   if (member?.passwordChangedAt && (session.signedInAt ?? 0) < new Date(member.passwordChangedAt).getTime()) return null;
   return member ?? null;
