@@ -111,7 +111,6 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     // Counts stop here (a count of the engineer's whole history would grow with it); past the cap
     // the page says "1,000+", and the cap always reaches one page beyond this one, so Next works.
     const cap = Math.max(countCap, reach + pageSize);
-    const branches: string[] = [];
     // `(decision IS NOT NULL) IS FALSE / IS TRUE` match the index's second column as written
     // (a plain `decision IS NULL` would not: the planner compares expressions, not meanings).
     const waitingWhere = `${visible} AND (v.decision IS NOT NULL) IS FALSE`;
@@ -127,27 +126,43 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     )`;
     bindings.push(...visibleBindings); // on_hold
     if (filter.state !== "on_hold") bindings.push(...visibleBindings, cap + 1); // counts, written before the branches
-    if (!filter.state || filter.state === "waiting") {
-      branches.push(`(SELECT ${columns}, 'waiting' AS state FROM reviews v WHERE ${waitingWhere} ORDER BY v.submitted_at, v.id LIMIT ?)`);
-      bindings.push(...visibleBindings, reach);
-    }
-    if (!filter.state || filter.state === "on_hold") {
-      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
-        WHERE v.id IN (SELECT id FROM on_hold ORDER BY submitted_at, id LIMIT ?))`);
-      bindings.push(reach);
-    }
-    if (!filter.state || filter.state === "decided") {
-      branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v WHERE ${decidedWhere} ORDER BY v.submitted_at, v.id LIMIT ?)`);
-      bindings.push(...visibleBindings, reach);
-    }
+    // Each state's rows up to `reach`, a CTE each, in the page's order of states (waiting first, or
+    // decided first when descending). Without a state filter a later state is read only when the
+    // earlier ones leave room on the page (a one-time filter, checked before its scan; CASE, so a
+    // later count is taken only when needed): a first page of waiting reviews reads neither the
+    // held designs' approvals nor the decided ones.
+    const states: QueueState[] = !filter.state ? (dir === "asc" ? ["waiting", "on_hold", "decided"] : ["decided", "on_hold", "waiting"]) : [filter.state];
+    const gate = (earlier: QueueState[]): { sql: string; bindings: unknown[] } => {
+      const n = (state: QueueState) => `(SELECT count(*) FROM in_${state})`;
+      if (!earlier.length) return { sql: "", bindings: [] };
+      if (earlier.length === 1) return { sql: ` AND ${n(earlier[0])} < ?`, bindings: [reach] };
+      return { sql: ` AND CASE WHEN ${n(earlier[0])} >= ? THEN false ELSE ${n(earlier[0])} + ${n(earlier[1])} < ? END`, bindings: [reach, reach] };
+    };
+    const branches = states.map((state, i) => {
+      const g = gate(states.slice(0, i));
+      if (state === "waiting") {
+        return { name: "in_waiting", sql: `SELECT ${columns}, 'waiting' AS state FROM reviews v WHERE ${waitingWhere}${g.sql} ORDER BY v.submitted_at, v.id LIMIT ?`, bindings: [...visibleBindings, ...g.bindings, reach] };
+      }
+      if (state === "on_hold") {
+        return {
+          name: "in_on_hold",
+          sql: `SELECT ${columns}, 'on_hold' AS state FROM reviews v WHERE v.id IN (SELECT id FROM on_hold ORDER BY submitted_at, id LIMIT ?)${g.sql}`,
+          bindings: [reach, ...g.bindings],
+        };
+      }
+      return { name: "in_decided", sql: `SELECT ${columns}, 'decided' AS state FROM reviews v WHERE ${decidedWhere}${g.sql} ORDER BY v.submitted_at, v.id LIMIT ?`, bindings: [...visibleBindings, ...g.bindings, reach] };
+    });
+    for (const b of branches) bindings.push(...b.bindings);
     // The total the page shows, counted up to cap + 1 rows (index-only; no join, no sort). The
     // limits are bindings, so every page and cap is one statement text (run prepared, below).
     const capped = (where: string) => `(SELECT count(*) FROM (SELECT 1 FROM reviews v WHERE ${where} LIMIT ?) c)`;
     const total = !filter.state ? capped(visible) : filter.state === "waiting" ? capped(waitingWhere) : filter.state === "decided" ? capped(decidedWhere) : "(SELECT count(*) FROM on_hold)";
     body = `${heldReviews}, counts AS MATERIALIZED (
       SELECT ${total} AS total
-    ), picked AS (
-      ${branches.join(" UNION ALL ")}
+    )${branches.map((b) => `, ${b.name} AS MATERIALIZED (
+      ${b.sql}
+    )`).join("")}, picked AS (
+      ${branches.map((b) => `SELECT * FROM ${b.name}`).join(" UNION ALL ")}
     ), page AS (
       SELECT picked.*, (SELECT total FROM counts) AS total, row_number() OVER (ORDER BY ${order}) AS ord
       FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
