@@ -18,15 +18,18 @@ interface PgConnection {
  * the text, with `?` bindings, must stay the same from call to call, so numbers that change per
  * request (a page, a limit) are bindings too. The name is a hash of the text.
  */
-export async function preparedRows<T = Record<string, unknown>>(sql: string, bindings: readonly unknown[]): Promise<T[]> {
+export async function preparedRows<T = Record<string, unknown>>(sql: string, bindings: readonly unknown[], options: { plan?: "generic" | "auto" } = {}): Promise<T[]> {
   const native = db.raw(sql, bindings as never[]).toSQL().toNative();
   const name = `pw_${crypto.createHash("sha256").update(native.sql).digest("hex").slice(0, 24)}`;
   const connection = (await db.client.acquireConnection()) as PgConnection;
+  const run = async () => (await connection.query({ name, text: native.sql, values: native.bindings as unknown[] })).rows as T[];
   try {
+    // "auto": PostgreSQL's own choice, which turns to the generic plan after five runs when it
+    // costs no more (key lookups, such as the sign-in check): no SET and RESET round trips.
+    if (options.plan === "auto") return await run();
     await connection.query({ text: "SET plan_cache_mode = force_generic_plan" });
     try {
-      const result = await connection.query({ name, text: native.sql, values: native.bindings as unknown[] });
-      return result.rows as T[];
+      return await run();
     } finally {
       await connection.query({ text: "RESET plan_cache_mode" });
     }

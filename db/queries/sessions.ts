@@ -32,7 +32,8 @@ export async function openSession(s: { userId: string; organisationId: string; t
  */
 export async function openSessionMember(sessionId: string, userId: string, organisationId: string): Promise<MemberRecord | undefined> {
   if (!isUuid(sessionId) || !isUuid(userId) || !isUuid(organisationId)) return undefined;
-  // Prepared (db/prepared.ts): every signed-in request runs it, and planning it cost more than running it.
+  // Prepared (db/prepared.ts): every signed-in request runs it, and planning it cost more than
+  // running it. Key lookups only, so PostgreSQL's own choice settles on the generic plan.
   const rows = await preparedRows<MemberRecord & { roles: unknown }>(
     `WITH s AS (
        SELECT id, last_seen_at < now() - interval '1 minute' AS stale FROM user_sessions
@@ -46,6 +47,7 @@ export async function openSessionMember(sessionId: string, userId: string, organ
      JOIN users u ON u.id = m.user_id JOIN organisations o ON o.id = m.organisation_id
      LIMIT 1`,
     [sessionId, userId, userId, organisationId],
+    { plan: "auto" },
   );
   const row = rows[0];
   return row ? { ...row, roles: parseRoles(row.roles) } : undefined;
