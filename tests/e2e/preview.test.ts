@@ -89,9 +89,9 @@ async function expectLabelsApart(preview: Locator): Promise<string[]> {
   return labels.map((l) => l.id);
 }
 
-/** The preview alone, for reading by eye (SCREENSHOTS=1). */
+/** The preview alone, for reading by eye (SCREENSHOTS=1; SCREENSHOTS_DIR as for `shot`). */
 async function elementShot(element: Locator, name: string): Promise<void> {
-  if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `/tmp/shots/${name}.png` });
+  if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `${process.env.SCREENSHOTS_DIR || "/tmp/shots"}/${name}.png` });
 }
 
 /** Polls until `check` passes: software WebGL and the font take a moment. */
