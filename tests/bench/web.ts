@@ -216,7 +216,8 @@ async function main(): Promise<void> {
     const xs = loads.filter((l) => l.label === label);
     return xs.reduce((a, l) => a + l.requests, 0) / xs.reduce((a, l) => a + l.seconds, 0);
   };
-  for (const t of ONLY_EDITOR ? [] : targets) {
+  // BENCH_ROUNDS=0 measures no handler: nothing to print but the heading's note.
+  for (const t of ONLY_EDITOR || ROUNDS < 1 ? [] : targets) {
     // Against the empty handler of the same build.
     const emptyRate = rateOf(t.label.replace(/[^:]*$/, (m) => (t.label.includes(":") ? " empty handler" : "empty handler")));
     const xs = loads.filter((l) => l.label === t.label);
