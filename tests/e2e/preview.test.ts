@@ -223,6 +223,15 @@ describe("3D preview in the design editor (software WebGL)", () => {
     const host = (await preview.locator("xpath=..").boundingBox())!;
     expect(own.width).toBeLessThanOrEqual(host.width + 1);
     expect((await canvas.boundingBox())!.width).toBeLessThanOrEqual(own.width);
+
+    // Turned to landscape: the canvas follows its box (the root is configured again) and draws at the new size.
+    await page.setViewportSize({ width: 700, height: 844 });
+    const box = preview.locator('[role="img"]');
+    const wider = await eventually(async () => [(await box.boundingBox())!.width, (await canvas.boundingBox())!.width], ([b, c]) => b > own.width + 100 && Math.abs(b - c) <= 1);
+    expect(wider[0]).toBeGreaterThan(own.width + 100);
+    expect(Math.abs(wider[0] - wider[1])).toBeLessThanOrEqual(1);
+    expect(drawnFraction(await eventually(() => canvasPixels(page, canvas), (p) => drawnFraction(p) > 0.03))).toBeGreaterThan(0.03);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
     await page.context().close();
   });
 });
