@@ -146,7 +146,7 @@ describe("3D preview in the design editor (software WebGL)", () => {
     await page.context().close();
   });
 
-  it("draws no frame for a new result whose drawing is the same, and one for a result whose drawing changed", async () => {
+  it("draws no frame for a new result whose drawing is the same or for other units, and one for a result whose drawing changed", async () => {
     const context = await signedInContext(browser, DESIGNER);
     // Counts the draw calls on the page's own canvases (a frame of the scene is a batch of them).
     await context.addInitScript(() => {
@@ -200,6 +200,19 @@ describe("3D preview in the design editor (software WebGL)", () => {
     await wind.fill(String(mph + 60));
     await eventually(() => spec.textContent(), (t) => t !== before.spec);
     expect(await eventually(draws, (n) => n > drawsBefore)).toBeGreaterThan(drawsBefore);
+
+    // Metric units: new label text over the same drawing, placed without drawing a frame.
+    const drawn = await eventually(async () => {
+      const a = await draws();
+      await page.waitForTimeout(1000);
+      return [a, await draws()];
+    }, ([a, b]) => a === b);
+    const embedmentLabel = preview.locator('[data-preview-label="embedment"]');
+    await page.getByRole("radio", { name: "Metric (m, mm, kN)" }).click();
+    expect(await eventually(() => embedmentLabel.textContent(), (t) => / mm/.test(t ?? ""))).toMatch(/^Embedment .* mm/);
+    await page.waitForTimeout(1000);
+    expect(await draws()).toBe(drawn[1]);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
     await context.close();
   });
 
