@@ -1,10 +1,10 @@
 import { cache } from "react";
 import { hasAcceptedEngagement, type ProjectScope } from "@/db/queries/engagements";
-import { findActiveMember, type MemberRecord } from "@/db/queries/users";
+import type { MemberRecord } from "@/db/queries/users";
 import { ROLE_LABELS, type Role } from "@/db/roles";
 import { AccessError } from "./errors";
 import { readSession } from "./session";
-import { sessionIsOpen } from "@/db/queries/sessions";
+import { openSessionMember } from "@/db/queries/sessions";
 
 /**
  * The data-access checks. Every page, server action and route handler that reads or writes data
@@ -22,11 +22,8 @@ export const currentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await readSession();
   if (!session.userId || !session.organisationId) return null;
   // The cookie is only a pointer: its server-side record must still be open (sign-out ends it).
-  if (!session.sessionId) return null;
-  // Both at once (one round trip before every page and route, not two): the member read is used
-  // only when the session is open.
-  const [open, member] = await Promise.all([sessionIsOpen(session.sessionId, session.userId), findActiveMember(session.userId, session.organisationId)]);
-  if (!open) return null;
+  // One statement: the session is open (and marked seen) and the member active.
+  const member = session.sessionId ? await openSessionMember(session.sessionId, session.userId, session.organisationId) : undefined;
   // A password reset ends every session that began before it.
   if (member?.passwordChangedAt && (session.signedInAt ?? 0) < new Date(member.passwordChangedAt).getTime()) return null;
   return member ?? null;

@@ -1,7 +1,6 @@
 "use client";
 import { useCallback, useMemo, useRef, useState } from "react";
 import type { DesignInput } from "@/engine/schema";
-import type { PreviewGeometry } from "@/engine/geometry/preview";
 import type { DesignResult } from "@/engine/types";
 import { sizeParsedDesign } from "@/engine/size-design";
 import { Caution } from "@/components/ui/caution";
@@ -10,6 +9,7 @@ import { ElevationFallback } from "./elevation-fallback";
 import { PreviewErrorBoundary } from "./preview-error-boundary";
 import { northCaption, previewFigures, type UnitSystem } from "./preview-labels";
 import { PreviewToolbar } from "./preview-toolbar";
+import { sameDrawing, sameGeometry } from "./same-drawing";
 import { previewScene } from "./scene-loader";
 import type { SceneProps } from "./scene";
 import { useLoadable } from "./use-loadable";
@@ -59,15 +59,13 @@ function SceneSlot(props: SceneProps) {
 }
 
 /**
- * The same geometry object for as long as its contents are equal: a new result whose drawing did
- * not change (most keystrokes in the editor) then leaves the scene untouched — no re-render, no
- * redraw.
+ * The same object for as long as `same` holds: a new result whose geometry (or drawing) did not
+ * change — most keystrokes in the editor — then leaves what depends on it untouched.
  */
-function useStableGeometry(geometry: PreviewGeometry): PreviewGeometry {
-  const last = useRef<{ key: string; geometry: PreviewGeometry } | null>(null);
-  const key = JSON.stringify(geometry);
-  if (last.current?.key !== key) last.current = { key, geometry };
-  return last.current.geometry;
+function useStable<T>(value: T, same: (a: T, b: T) => boolean): T {
+  const last = useRef(value);
+  if (last.current !== value && !same(last.current, value)) last.current = value;
+  return last.current;
 }
 
 /** The 3D preview of the array, grade and footings, with a 2D elevation where WebGL is missing. */
@@ -81,7 +79,10 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
   // in the editor always shows at once.
   const tiltDeg = chosen && chosen.designTiltDeg === input.array.tiltDeg && settings?.includes(chosen.tiltDeg) ? chosen.tiltDeg : null;
   const atTilt = useMemo(() => geometryAtTilt(input, result, tiltDeg), [input, result, tiltDeg]);
-  const geometry = useStableGeometry(atTilt.geometry);
+  // The caption's and the elevation's geometry, and the 3D scene's: the scene keeps its drawing
+  // (no re-render, no frame) when only figures it shows as text changed.
+  const geometry = useStable(atTilt.geometry, sameGeometry);
+  const drawing = useStable(geometry, sameDrawing);
   const error = atTilt.error;
   const figures = useMemo(() => previewFigures(geometry, unitSystem), [geometry, unitSystem]);
   // Why the 3D scene is not shown (null while it is): no WebGL up front, or it failed or was lost later.
@@ -106,7 +107,7 @@ export default function DesignPreview({ input, result, unitSystem, readOnly = fa
       <div className="relative" style={{ height }}>
         {noScene === null ? (
           <PreviewErrorBoundary fallback={fallback(SCENE_FAILED)} onError={() => setNoScene(SCENE_FAILED)}>
-            <SceneSlot geometry={geometry} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={onContextLost} />
+            <SceneSlot drawing={drawing} figures={figures} view={view} readOnly={readOnly} label={label} onContextLost={onContextLost} />
           </PreviewErrorBoundary>
         ) : (
           fallback(noScene)

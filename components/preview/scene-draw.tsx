@@ -1,20 +1,29 @@
 "use client";
 import { useFrame, useThree } from "@react-three/fiber";
-import { useEffect, useLayoutEffect, useRef, useState } from "react";
+import { useEffect, useLayoutEffect, useRef, type RefObject } from "react";
+import type { PreviewGeometry } from "@/engine/geometry/preview";
 import type { SceneLabel } from "./scene-annotations";
 import { placeLabelElements, type LabelElements, type LabelSizes } from "./scene-labels";
 
 /**
  * The scene's draw, in a useFrame of priority 1 (which hands R3F's own render to it): the labels
  * are placed from the camera the frame is drawn from, then the frame is drawn. With the canvas's
- * frameloop "demand", a frame runs only when asked — a new design, a camera move, a resize, new
- * label text — never on a re-render of the page with the same design.
+ * frameloop "demand", a frame runs only when asked — a new drawing, a camera move, a resize — never
+ * on a re-render of the page with the same drawing. The labels are read from a ref at each frame;
+ * new label text alone is placed by the page without a frame (scene.tsx).
  *
  * Nothing is drawn until every shader program is compiled, so the first frame is complete and
  * nothing compiles after it. Mounted after the scene's parts and lights (its layout effect then
  * runs once they are all in the scene).
  */
-export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels: SceneLabel[]; elements: LabelElements; onReady: () => void; onContextLost: () => void }) {
+export function SceneDraw({ drawing, labels, elements, sizes, onReady, onContextLost }: {
+  drawing: PreviewGeometry;
+  labels: RefObject<SceneLabel[]>;
+  elements: LabelElements;
+  sizes: LabelSizes;
+  onReady: () => void;
+  onContextLost: () => void;
+}) {
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
@@ -23,7 +32,6 @@ export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels
   const invalidate = useThree((s) => s.invalidate);
   const ready = useRef(false);
   const shown = useRef(false);
-  const [sizes] = useState<LabelSizes>(() => new Map());
 
   useLayoutEffect(() => {
     let live = true;
@@ -46,8 +54,8 @@ export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels
     };
   }, [gl, scene, camera, invalidate]);
 
-  // A resize clears the canvas; new label text (a changed unit system) needs placing.
-  useLayoutEffect(() => invalidate(), [labels, width, height, invalidate]);
+  // A new drawing (its parts swapped in just before), and a resize, which clears the canvas.
+  useLayoutEffect(() => invalidate(), [drawing, width, height, invalidate]);
 
   // Removed before R3F gives the context back on unmount (that loss is not the browser's).
   useEffect(() => {
@@ -59,7 +67,7 @@ export function SceneDraw({ labels, elements, onReady, onContextLost }: { labels
   useFrame((state) => {
     if (!ready.current) return;
     state.camera.updateMatrixWorld();
-    placeLabelElements(labels, elements.current, sizes, state.camera, state.size);
+    placeLabelElements(labels.current, elements.current, sizes, state.camera, state.size);
     state.gl.render(state.scene, state.camera);
     if (!shown.current) {
       shown.current = true;

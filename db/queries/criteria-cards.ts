@@ -30,6 +30,42 @@ export async function listCriteriaCards(organisationId: string): Promise<Criteri
   return db("criteria_cards").where({ organisation_id: organisationId }).orderBy([{ column: "state" }, { column: "jurisdiction" }]).select(columns);
 }
 
+/** Cards to a page on /criteria: an organisation can hold one per jurisdiction it builds in. */
+export const CRITERIA_PAGE_SIZE = 20;
+
+export interface CriteriaCardsPage {
+  cards: CriteriaCard[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+/**
+ * One page of the organisation's cards, by state then jurisdiction (as `listCriteriaCards`). The
+ * page's ids and the count come from one index-only pass over `(organisation_id, state,
+ * jurisdiction, id)` (20261205100000), and only the page's cards are read with their values and
+ * sources: the page costs the same whether the organisation has ten cards or a thousand.
+ */
+export async function criteriaCardsPage(organisationId: string, page: number): Promise<CriteriaCardsPage> {
+  const pageSize = CRITERIA_PAGE_SIZE;
+  const current = Number.isFinite(page) ? Math.min(100_000, Math.max(1, Math.floor(page))) : 1;
+  const { rows } = await db.raw(
+    `WITH picked AS (
+       SELECT id, state, jurisdiction, count(*) OVER () AS total FROM criteria_cards WHERE organisation_id = ?
+       ORDER BY state, jurisdiction, id LIMIT ? OFFSET ?
+     )
+     SELECT c.id, c.organisation_id AS "organisationId", c.jurisdiction, c.state, c.values, c.sources, c.updated_at AS "updatedAt", picked.total
+     FROM picked JOIN criteria_cards c ON c.id = picked.id
+     ORDER BY picked.state, picked.jurisdiction, picked.id`,
+    [organisationId, pageSize, (current - 1) * pageSize],
+  );
+  // A page past the end carries no row to hold the count: count on its own (only then).
+  const total = rows.length
+    ? Number(rows[0].total)
+    : current > 1 ? Number((await db("criteria_cards").where({ organisation_id: organisationId }).count({ n: "*" }))[0].n) : 0;
+  return { cards: rows.map(({ total: _total, ...card }: CriteriaCard & { total: string }) => card), total, page: current, pageSize };
+}
+
 export async function getCriteriaCard(id: string): Promise<CriteriaCard | undefined> {
   if (!isUuid(id)) return undefined;
   return db("criteria_cards").where({ id }).first(columns);

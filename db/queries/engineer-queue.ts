@@ -1,4 +1,5 @@
 import { db } from "../client";
+import { preparedRows } from "../prepared";
 import { likePattern, MAX_PAGE_SIZE, type ListPage, type ListQuery } from "./list-page";
 
 /**
@@ -56,16 +57,16 @@ export interface QueueFilter {
 
 /**
  * One statement, built so its cost follows the page, not the engineer's whole history:
- * - `engaged`, `engaged_designs`: the projects this engineer holds an accepted engagement on, and
- *   their designs (a few rows);
+ * - `engaged`: the projects this engineer holds an accepted engagement on (a few rows);
  * - `held`: the designs with an open hold that a visible review can be on: in the organisation they
- *   are signed in to, or engaged designs (open holds are few; read from design_holds alone; an
- *   engaging contractor's other holds would only cost a probe each in `on_hold`). An approval is on hold when its design is held: it is
+ *   are signed in to, or in an organisation that engaged them (open holds are few; read from the
+ *   open-holds index alone; an engaging contractor's holds on other projects are harmless, since
+ *   every use of `held` is on visible reviews). An approval is on hold when its design is held: it is
  *   recorded with its revision's status in one transaction (app/_lib/review/workflow.ts;
  *   20261203100000 refuses the status without the record), after which the pin keeps both, so an
  *   approval's revision is always an approved revision of that design;
- * - a review is visible when it is in the organisation they are signed in to, or its design
- *   (copied onto the review, 20261204100000) is one of `engaged_designs`: both told from the index;
+ * - a review is visible when it is in the organisation they are signed in to, or its project
+ *   (copied onto the review, 20261205100000) is an engaged one: both told from the index;
  * - the default order (state, no search) reads each state in its order straight from the
  *   `(engineer_id, decided or not, submitted_at, id)` index and stops at the page: waiting ones,
  *   then on hold, then decided. On-hold rows are the visible approvals of the held designs
@@ -90,17 +91,15 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
   const waitingOnly = filter.state === "waiting";
   const contractor = filter.contractor && /^[0-9a-f-]{36}$/i.test(filter.contractor) ? filter.contractor : undefined;
   // The visible reviews' where-clause; its `?`s are bound once per use (`visibleBindings`).
-  const visible = `v.engineer_id = ? AND (v.organisation_id = ? OR v.design_id IN (SELECT id FROM engaged_designs))${contractor ? " AND v.organisation_id = ?" : ""}`;
+  const visible = `v.engineer_id = ? AND (v.organisation_id = ? OR v.project_id IN (SELECT project_id FROM engaged))${contractor ? " AND v.organisation_id = ?" : ""}`;
   const visibleBindings = [user.userId, user.organisationId, ...(contractor ? [contractor] : [])];
   const order = `${QUEUE_SORTS[sort]} ${dir}${NOT_NULL_SORTS.has(sort) ? "" : " NULLS LAST"}, submitted_at, id`;
   const head = `
     WITH engaged AS MATERIALIZED (
       SELECT project_id, organisation_id FROM engagements WHERE engineer_user_id = ? AND status = 'accepted'
-    ), engaged_designs AS MATERIALIZED (
-      SELECT d.id FROM designs d WHERE d.project_id IN (SELECT project_id FROM engaged)
     ), held AS MATERIALIZED (
       SELECT DISTINCT h.design_id AS id FROM design_holds h
-      WHERE h.cleared_at IS NULL AND (h.organisation_id = ? OR h.design_id IN (SELECT id FROM engaged_designs))
+      WHERE h.cleared_at IS NULL AND (h.organisation_id = ? OR h.organisation_id IN (SELECT organisation_id FROM engaged))
         ${waitingOnly ? "AND false" : ""}
     )`;
   const columns = "v.id, v.revision_id, v.organisation_id, v.decision, v.submitted_at, v.decided_at";
@@ -112,37 +111,58 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     // Counts stop here (a count of the engineer's whole history would grow with it); past the cap
     // the page says "1,000+", and the cap always reaches one page beyond this one, so Next works.
     const cap = Math.max(countCap, reach + pageSize);
-    const branches: string[] = [];
     // `(decision IS NOT NULL) IS FALSE / IS TRUE` match the index's second column as written
     // (a plain `decision IS NULL` would not: the planner compares expressions, not meanings).
     const waitingWhere = `${visible} AND (v.decision IS NOT NULL) IS FALSE`;
     const decidedWhere = `${visible} AND (v.decision IS NOT NULL) IS TRUE AND NOT (v.decision = 'approve' AND v.design_id IN (SELECT id FROM held))`;
     // On hold: the visible approvals of the held designs, found by design (few: open holds are few).
+    // One index-only probe of the engineer's approvals per held design (`OFFSET 0` keeps each a
+    // probe: flattened, the planner hashes the held designs against every approval of the engineer,
+    // which grows with their history).
     const heldReviews = `, on_hold AS MATERIALIZED (
-      SELECT v.id, v.submitted_at FROM reviews v
-      WHERE v.design_id IN (SELECT id FROM held) AND ${visible} AND v.decision = 'approve'
+      SELECT a.id, a.submitted_at FROM held h CROSS JOIN LATERAL (
+        SELECT v.id, v.submitted_at FROM reviews v WHERE ${visible} AND v.design_id = h.id AND v.decision = 'approve' OFFSET 0
+      ) a
     )`;
     bindings.push(...visibleBindings); // on_hold
-    if (filter.state !== "on_hold") bindings.push(...visibleBindings); // counts, written before the branches
-    if (!filter.state || filter.state === "waiting") {
-      branches.push(`(SELECT ${columns}, 'waiting' AS state FROM reviews v WHERE ${waitingWhere} ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
-      bindings.push(...visibleBindings);
-    }
-    if (!filter.state || filter.state === "on_hold") {
-      branches.push(`(SELECT ${columns}, 'on_hold' AS state FROM reviews v
-        WHERE v.id IN (SELECT id FROM on_hold ORDER BY submitted_at, id LIMIT ${reach}))`);
-    }
-    if (!filter.state || filter.state === "decided") {
-      branches.push(`(SELECT ${columns}, 'decided' AS state FROM reviews v WHERE ${decidedWhere} ORDER BY v.submitted_at, v.id LIMIT ${reach})`);
-      bindings.push(...visibleBindings);
-    }
-    // The total the page shows, counted up to cap + 1 rows (index-only; no join, no sort).
-    const capped = (where: string) => `(SELECT count(*) FROM (SELECT 1 FROM reviews v WHERE ${where} LIMIT ${cap + 1}) c)`;
+    if (filter.state !== "on_hold") bindings.push(...visibleBindings, cap + 1); // counts, written before the branches
+    // Each state's rows up to `reach`, a CTE each, in the page's order of states (waiting first, or
+    // decided first when descending). Without a state filter a later state is read only when the
+    // earlier ones leave room on the page (a one-time filter, checked before its scan; CASE, so a
+    // later count is taken only when needed): a first page of waiting reviews reads neither the
+    // held designs' approvals nor the decided ones.
+    const states: QueueState[] = !filter.state ? (dir === "asc" ? ["waiting", "on_hold", "decided"] : ["decided", "on_hold", "waiting"]) : [filter.state];
+    const gate = (earlier: QueueState[]): { sql: string; bindings: unknown[] } => {
+      const n = (state: QueueState) => `(SELECT count(*) FROM in_${state})`;
+      if (!earlier.length) return { sql: "", bindings: [] };
+      if (earlier.length === 1) return { sql: ` AND ${n(earlier[0])} < ?`, bindings: [reach] };
+      return { sql: ` AND CASE WHEN ${n(earlier[0])} >= ? THEN false ELSE ${n(earlier[0])} + ${n(earlier[1])} < ? END`, bindings: [reach, reach] };
+    };
+    const branches = states.map((state, i) => {
+      const g = gate(states.slice(0, i));
+      if (state === "waiting") {
+        return { name: "in_waiting", sql: `SELECT ${columns}, 'waiting' AS state FROM reviews v WHERE ${waitingWhere}${g.sql} ORDER BY v.submitted_at, v.id LIMIT ?`, bindings: [...visibleBindings, ...g.bindings, reach] };
+      }
+      if (state === "on_hold") {
+        return {
+          name: "in_on_hold",
+          sql: `SELECT ${columns}, 'on_hold' AS state FROM reviews v WHERE v.id IN (SELECT id FROM on_hold ORDER BY submitted_at, id LIMIT ?)${g.sql}`,
+          bindings: [reach, ...g.bindings],
+        };
+      }
+      return { name: "in_decided", sql: `SELECT ${columns}, 'decided' AS state FROM reviews v WHERE ${decidedWhere}${g.sql} ORDER BY v.submitted_at, v.id LIMIT ?`, bindings: [...visibleBindings, ...g.bindings, reach] };
+    });
+    for (const b of branches) bindings.push(...b.bindings);
+    // The total the page shows, counted up to cap + 1 rows (index-only; no join, no sort). The
+    // limits are bindings, so every page and cap is one statement text (run prepared, below).
+    const capped = (where: string) => `(SELECT count(*) FROM (SELECT 1 FROM reviews v WHERE ${where} LIMIT ?) c)`;
     const total = !filter.state ? capped(visible) : filter.state === "waiting" ? capped(waitingWhere) : filter.state === "decided" ? capped(decidedWhere) : "(SELECT count(*) FROM on_hold)";
     body = `${heldReviews}, counts AS MATERIALIZED (
       SELECT ${total} AS total
-    ), picked AS (
-      ${branches.join(" UNION ALL ")}
+    )${branches.map((b) => `, ${b.name} AS MATERIALIZED (
+      ${b.sql}
+    )`).join("")}, picked AS (
+      ${branches.map((b) => `SELECT * FROM ${b.name}`).join(" UNION ALL ")}
     ), page AS (
       SELECT picked.*, (SELECT total FROM counts) AS total, row_number() OVER (ORDER BY ${order}) AS ord
       FROM picked ORDER BY ${order} LIMIT ? OFFSET ?
@@ -162,7 +182,7 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
              ${names ? "pn.name AS project_name, dn.name AS design_name" : "NULL::text AS project_name, NULL::text AS design_name"},
              ${STATE_SQL} AS state
       FROM reviews v ${contractorName ? "JOIN organisations o ON o.id = v.organisation_id" : ""}
-      ${names ? "JOIN designs dn ON dn.id = v.design_id JOIN projects pn ON pn.id = dn.project_id" : ""}
+      ${names ? "JOIN designs dn ON dn.id = v.design_id JOIN projects pn ON pn.id = v.project_id" : ""}
       WHERE ${visible}
         ${where.map((w) => `AND ${w}`).join(" ")}
     ), picked AS (
@@ -183,20 +203,26 @@ function queueSql(user: { userId: string; organisationId: string }, query: ListQ
     FROM page JOIN revisions r ON r.id = page.revision_id JOIN designs d ON d.id = r.design_id
     JOIN projects p ON p.id = d.project_id JOIN organisations o ON o.id = p.organisation_id
     ORDER BY page.ord`;
-  return { sql, bindings, sort, dir, page, pageSize, q, countedTo };
+  // The default order's statement is the same text for every engineer and page: it runs prepared,
+  // with a generic plan (db/prepared.ts). A search or another sort is planned for its values.
+  return { sql, bindings, sort, dir, page, pageSize, q, countedTo, prepared: countedTo !== undefined };
+}
+
+async function queueRows(built: { sql: string; bindings: unknown[]; prepared: boolean }): Promise<any[]> {
+  return built.prepared ? preparedRows(built.sql, built.bindings) : (await db.raw(built.sql, built.bindings as never[])).rows;
 }
 
 /** `countCap` is QUEUE_COUNT_CAP but for tests, which cannot make a thousand reviews cheaply. */
 export async function engineerQueue(user: { userId: string; organisationId: string }, query: ListQuery, filter: QueueFilter = {}, countCap = QUEUE_COUNT_CAP): Promise<ListPage<EngineerQueueRow>> {
   const built = queueSql(user, query, filter, countCap);
-  const { rows } = await db.raw(built.sql, built.bindings as never[]);
+  const rows = await queueRows(built);
   let total = rows.length ? Number(rows[0].total) : 0;
   let cap = built.countedTo;
   // A page past the end has no row to carry the count: count on its own (only then).
   if (!rows.length && built.page > 1) {
     // Counted to this page's cap, so a page past the end says the same count as the last one.
     const counted = queueSql(user, { ...query, page: 1, pageSize: 1 }, filter, built.countedTo ?? countCap);
-    const first = (await db.raw(counted.sql, counted.bindings as never[])).rows[0];
+    const first = (await queueRows(counted))[0];
     total = first ? Number(first.total) : 0;
     cap = counted.countedTo;
   }
@@ -224,16 +250,16 @@ export async function engineerQueue(user: { userId: string; organisationId: stri
  * probe per engagement: 530 buffers for 100 engagements, against 26).
  */
 export async function queueContractors(user: { userId: string; organisationId: string }): Promise<{ id: string; name: string }[]> {
-  const { rows } = await db.raw(
+  // Prepared (db/prepared.ts): planning it took longer than running it.
+  return preparedRows<{ id: string; name: string }>(
     `SELECT o.id, o.name FROM organisations o
      WHERE (o.id = ? AND EXISTS (SELECT 1 FROM reviews v WHERE v.engineer_id = ? AND v.organisation_id = o.id))
         OR (o.id IN (SELECT g.organisation_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted')
-            AND EXISTS (SELECT 1 FROM reviews v JOIN designs d ON d.id = v.design_id
+            AND EXISTS (SELECT 1 FROM reviews v
                         WHERE v.engineer_id = ? AND v.organisation_id = o.id
-                          AND d.project_id IN (SELECT g.project_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND g.organisation_id = o.id)
+                          AND v.project_id IN (SELECT g.project_id FROM engagements g WHERE g.engineer_user_id = ? AND g.status = 'accepted' AND g.organisation_id = o.id)
                         OFFSET 0))
      ORDER BY o.name`,
     [user.organisationId, user.userId, user.userId, user.userId, user.userId],
   );
-  return rows;
 }

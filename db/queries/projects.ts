@@ -76,10 +76,20 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
       w.where("p.organisation_id", organisationId);
       if (engaged.length) w.orWhereIn("p.id", engaged);
     })
-    .select("p.id", db.raw("count(*) over () as total"))
     .orderByRaw(order)
     .limit(pageSize)
     .offset((page - 1) * pageSize);
+  // Without a search, the count is its own index-only aggregate (an InitPlan): half the time of a
+  // window count, which keeps every project of the organisation in a tuplestore before the page's
+  // first row (0.26 against 0.5 ms for 2,200 projects; db/README.md, fifth pass). A search keeps
+  // the window count, so its trigram index is read once for page and count.
+  if (!q) {
+    const counted = db("projects as c").where((w) => {
+      w.where("c.organisation_id", organisationId);
+      if (engaged.length) w.orWhereIn("c.id", engaged);
+    }).count("*");
+    picked.select("p.id", counted.as("total"));
+  } else picked.select("p.id", db.raw("count(*) over () as total"));
   if (q) {
     const pattern = likePattern(q);
     // The organisation's cards whose jurisdiction matches, first (a probe of their trigram index):

@@ -13,6 +13,9 @@
  *   npm run bench:db -- --scales=1,100    a subset (also --sizes=, or PIERWISE_BENCH_SCALES=1,100)
  *   npm run bench:db -- --requests=30
  *   npm run bench:db -- --json=out.json   also write the numbers as JSON
+ *   npm run bench:db -- --routes=queue,criteria   only the routes whose name contains one of these
+ *   npm run bench:db -- --keep            leave the grown cluster (stopped) in .test-data/bench-<pid>/pg,
+ *                                         to try statements against it with EXPLAIN afterwards
  *
  * Not a test: nothing here asserts a time. The targets are in db/README.md.
  */
@@ -40,6 +43,8 @@ const arg = (name: string) => process.argv.find((a) => a.startsWith(`--${name}=`
 const scales = (arg("scales") ?? arg("sizes") ?? process.env.PIERWISE_BENCH_SCALES ?? "1,100,1000").split(",").map(Number).filter((n) => n > 0).sort((a, b) => a - b);
 const requests = Number(arg("requests") ?? 10);
 const jsonOut = arg("json");
+const routeFilter = arg("routes")?.split(",").filter(Boolean);
+const keep = process.argv.includes("--keep");
 const APP_ROLE = "pierwise_bench";
 const PASSWORD = "pierwise-demo";
 
@@ -196,7 +201,8 @@ async function main(): Promise<void> {
     const sizes = (await admin.query("SELECT pg_database_size(current_database()) / 1048576 AS db, pg_total_relation_size('revisions') / 1048576 AS rev")).rows[0];
     const auditEvents = Number((await admin.query("SELECT count(*) AS n FROM audit_events WHERE organisation_id = $1", [DEMO_ORG_ID])).rows[0].n);
     const demoProjects = Number((await admin.query("SELECT count(*) AS n FROM projects WHERE organisation_id = $1", [DEMO_ORG_ID])).rows[0].n);
-    const list = routes(bigDesignId, Math.max(1, Math.ceil(auditEvents / 25)), Math.max(1, Math.ceil(demoProjects / 20 / 2)));
+    const list = routes(bigDesignId, Math.max(1, Math.ceil(auditEvents / 25)), Math.max(1, Math.ceil(demoProjects / 20 / 2)))
+      .filter((r) => !routeFilter || routeFilter.some((part) => r.name.includes(part)));
     const tableRows = await tableSizes(admin);
     const measured: ScaleResult["routes"] = [];
     for (const route of list) {
@@ -222,11 +228,12 @@ async function cleanUp(): Promise<void> {
   server?.kill("SIGTERM");
   await standIns?.stop();
   try {
-    if (cluster) stopServer(cluster, "immediate");
+    if (cluster) stopServer(cluster, keep ? "fast" : "immediate");
   } catch (error) {
     console.error(String(error));
   }
-  fs.rmSync(workDir, { recursive: true, force: true });
+  if (keep && cluster) console.log(`bench:db: cluster kept (stopped) in ${cluster.dataDir}, port ${cluster.port}`);
+  else fs.rmSync(workDir, { recursive: true, force: true });
 }
 
 process.on("SIGINT", () => void cleanUp().then(() => process.exit(130)));

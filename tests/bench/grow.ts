@@ -87,12 +87,14 @@ export interface GrowOptions {
 }
 
 /** The INSERT statements of units [from, to), in dependency order. */
-function statements(from: number, to: number, verifiable: boolean, engaging: boolean, reviewDesign: boolean): string[] {
+function statements(from: number, to: number, verifiable: boolean, engaging: boolean, reviewDesign: boolean, reviewProject: boolean): string[] {
   const units = `generate_series(${from}, ${to - 1}) u`;
   // Reviews carry their revision's design and number once 20261204100000 ran (a trigger fills them,
   // and a bulk load has triggers off, so the rows name them; the trigger would write the same).
-  const designColumns = reviewDesign ? ", design_id, revision_number" : "";
-  const designValues = reviewDesign ? ", md5('d' || u || '-' || k || '-' || j)::uuid, CASE WHEN j = 0 THEN 5 ELSE 10 END" : "";
+  // And their design's project once 20261205100000 ran (the same trigger fills it).
+  const designColumns = (reviewDesign ? ", design_id, revision_number" : "") + (reviewProject ? ", project_id" : "");
+  const designValues = (reviewDesign ? ", md5('d' || u || '-' || k || '-' || j)::uuid, CASE WHEN j = 0 THEN 5 ELSE 10 END" : "")
+    + (reviewProject ? ", md5('p' || u || '-' || k)::uuid" : "");
   // Approvals carry a verify code and a facts snapshot once the approval-signature migration ran.
   const verifyColumns = verifiable ? ", verify_code, facts_snapshot" : "";
   const verifyValues = verifiable
@@ -168,6 +170,7 @@ export async function grow(client: pg.Client, from: number, to: number, options:
   // Once engagements exist, the seeded outside engineer is engaged on one project of each demo unit.
   const engaging = (await client.query("SELECT 1 FROM bench.orgs WHERE outside IS NOT NULL")).rowCount === 1;
   const reviewDesign = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'design_id'")).rowCount === 1;
+  const reviewProject = (await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'project_id'")).rowCount === 1;
   const started = Date.now();
   const seconds = (since: number) => `${((Date.now() - since) / 1000).toFixed(1)} s`;
   const notes: string[] = [];
@@ -192,7 +195,7 @@ export async function grow(client: pg.Client, from: number, to: number, options:
     // One transaction per share: an approved revision needs its approval record by commit
     // (20261203100000), and the reviews are inserted after the revisions they refer to.
     await c.query("BEGIN");
-    for (const sql of statements(a, b, verifiable, engaging, reviewDesign)) {
+    for (const sql of statements(a, b, verifiable, engaging, reviewDesign, reviewProject)) {
       const t = Date.now();
       await c.query(sql);
       const table = /INSERT INTO (\w+)/.exec(sql)![1];

@@ -180,7 +180,7 @@ describe("columns a trigger keeps cannot be forged", () => {
     const rows = await triggers(db);
     const kept = keptColumns(rows);
     // The reader finds the known ones (a broken pattern would find nothing and pass).
-    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at"]));
+    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at", "reviews.project_id"]));
     const unguarded = kept.filter((tc) => !recomputed(rows, ...(tc.split(".") as [string, string])));
     expect(unguarded, "kept columns with no BEFORE INSERT OR UPDATE trigger assigning NEW.<column> (DEVELOPERS.md, Columns a trigger keeps)").toEqual([]);
   });
@@ -241,6 +241,22 @@ describe("columns a trigger keeps cannot be forged", () => {
     expect(await kept(review.id)).toEqual({ design_id: designId, revision_number: 1 });
     await ownerDb("reviews").where({ id: review.id }).update({ revision_number: 7, engineer_name: "owner edit" });
     expect(await kept(review.id)).toEqual({ design_id: designId, revision_number: 1 });
+  });
+
+  it("reviews.project_id: a direct write, from the app role or the owner, is the reviewed design's project again", async () => {
+    const { revisionId, projectId } = await makeDesign();
+    const other = await makeDesign();
+    expect(other.projectId).not.toBe(projectId);
+    const kept = async (id: string) => (await db("reviews").where({ id }).first("project_id")).project_id;
+    const [review] = await db("reviews").insert({
+      revision_id: revisionId, organisation_id: DEMO_ORG_ID, engineer_id: await userId(ENGINEER), submitted_by: await userId(DESIGNER),
+      project_id: other.projectId,
+    }).returning("id");
+    expect(await kept(review.id)).toBe(projectId);
+    await db("reviews").where({ id: review.id }).update({ project_id: other.projectId });
+    expect(await kept(review.id)).toBe(projectId);
+    await ownerDb("reviews").where({ id: review.id }).update({ project_id: other.projectId, engineer_name: "owner edit" });
+    expect(await kept(review.id)).toBe(projectId);
   });
 
   it("projects.criteria_jurisdiction: a direct write, from the app role or the owner, is the card's jurisdiction again", async () => {

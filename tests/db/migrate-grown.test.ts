@@ -1,8 +1,8 @@
 /**
  * The list-index migrations (20261202500000, 20261203500000 with the queue and project-page
  * indexes, 20261204100000 with each review's design and number, 20261204100100 with each
- * project's card jurisdiction) and the triggers that keep their columns unforgeable
- * (20261204400000) run forward on a database that already holds data,
+ * project's card jurisdiction, 20261205100000 with each review's project) and the triggers that
+ * keep their columns unforgeable (20261204400000) run forward on a database that already holds data,
  * without losing a row: a copy of a grown database (every other migration, the demo seed and three
  * generated units of tests/bench/grow.ts) is migrated to the latest schema, then every table is
  * counted again and the new columns are checked against what they are derived from.
@@ -105,6 +105,12 @@ describe("migrating a grown database", () => {
       expect(await one(`SELECT count(*) AS n FROM reviews v JOIN revisions r ON r.id = v.revision_id
         WHERE v.design_id IS DISTINCT FROM r.design_id OR v.revision_number IS DISTINCT FROM r.number`)).toBe(0);
       expect(await one("SELECT count(*) AS n FROM reviews WHERE decision = 'approve'")).toBeGreaterThan(60);
+      // And its design's project (20261205100000), written past by the owner and worked out again.
+      const wrongProject = `SELECT count(*) AS n FROM reviews v JOIN designs d ON d.id = v.design_id WHERE v.project_id IS DISTINCT FROM d.project_id`;
+      expect(await one(wrongProject)).toBe(0);
+      // (Approval records are pinned against any UPDATE, so the others.)
+      expect((await check.query("UPDATE reviews SET project_id = (SELECT id FROM projects ORDER BY id LIMIT 1) WHERE decision IS DISTINCT FROM 'approve'")).rowCount).toBeGreaterThan(60);
+      expect(await one(wrongProject)).toBe(0);
       await expect(check.query("UPDATE reviews SET engineer_name = 'edited' WHERE decision = 'approve'")).rejects.toThrow(/approval record/);
       // The approval pin still holds on the migrated rows.
       await expect(check.query("UPDATE revisions SET note = 'edited' WHERE status = 'approved'")).rejects.toThrow(/approved and pinned/);

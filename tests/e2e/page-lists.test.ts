@@ -1,13 +1,15 @@
 /**
  * The reviews page and the field list show a page, not everything (issue 19): the engineer's
  * waiting list shows its first rows with the total and a link to the full queue; the field list
- * shows 50 specs with an "Older specs" link to the next 50. Screenshots at 390 px and 1280 px go to
+ * shows 50 specs with an "Older specs" link to the next 50; the criteria page shows 20 cards a
+ * page with the count and next and previous pages. Screenshots at 390 px and 1280 px go to
  * /tmp/shots with SCREENSHOTS=1.
  */
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { FIELD_SPEC_LIMIT, REVIEW_LIST_LIMIT } from "@/db/queries/review-queue";
+import { CRITERIA_PAGE_SIZE } from "@/db/queries/criteria-cards";
 import { browserSuite } from "../support/browser-suite";
 import { DESKTOP, PHONE, baseUrl, shot, signedInContext } from "../support/browser";
 import { DESIGNER, ENGINEER, INSTALLER, freshApproved, freshInReview, userId } from "../support/review-fixtures";
@@ -53,6 +55,34 @@ describe("lists that show a page", () => {
       expect(secondPage.length).toBeGreaterThan(0);
       expect(secondPage.filter((href) => firstPage.includes(href))).toEqual([]);
       expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+    }
+  });
+
+  it("criteria cards: 20 a page, how many in all, and next and previous pages", async () => {
+    // Cards in the last state of the list's order, so other suites' cards keep their place.
+    const count = async () => Number((await db("criteria_cards").where({ organisation_id: DEMO_ORG_ID }).count({ n: "*" }))[0].n);
+    const values = { buildingCode: "IBC 2021", asceEdition: "7-16", riskCategory: "II", windSpeedMph: 115, exposure: "C", groundSnowPsf: 30, frostDepthIn: 36, soilClass: 4 };
+    for (let i = 0; (await count()) <= CRITERIA_PAGE_SIZE; i++) {
+      await db("criteria_cards").insert({ organisation_id: DEMO_ORG_ID, jurisdiction: `Zz Paging Test County ${crypto.randomUUID().slice(0, 6)} (invented)`, state: "WY", values: JSON.stringify(values) });
+    }
+    const total = await count();
+    for (const viewport of [PHONE, DESKTOP]) {
+      const context = suite.keep(await signedInContext(suite.browser, DESIGNER, viewport));
+      const page = await context.newPage();
+      await page.goto(`${baseUrl()}/criteria`);
+      await expect(page.getByRole("status").filter({ hasText: "Cards" }).innerText()).resolves.toBe(`Cards 1–${CRITERIA_PAGE_SIZE} of ${total.toLocaleString("en-US")}`);
+      const firstPage = await page.locator("main section h2[id^=card-]").allInnerTexts();
+      expect(firstPage).toHaveLength(CRITERIA_PAGE_SIZE);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+      await shot(page, `criteria-page-${viewport.width}`);
+      await page.getByRole("link", { name: "Next cards" }).click();
+      await page.waitForURL(/\/criteria\?page=2/);
+      const secondPage = await page.locator("main section h2[id^=card-]").allInnerTexts();
+      expect(secondPage.length).toBe(Math.min(CRITERIA_PAGE_SIZE, total - CRITERIA_PAGE_SIZE));
+      expect(secondPage.filter((name) => firstPage.includes(name))).toEqual([]);
+      await page.getByRole("link", { name: "Previous cards" }).click();
+      await page.waitForURL(/\/criteria\?page=1/);
+      expect(await page.locator("main section h2[id^=card-]").allInnerTexts()).toEqual(firstPage);
     }
   });
 

@@ -89,9 +89,9 @@ async function expectLabelsApart(preview: Locator): Promise<string[]> {
   return labels.map((l) => l.id);
 }
 
-/** The preview alone, for reading by eye (SCREENSHOTS=1). */
+/** The preview alone, for reading by eye (SCREENSHOTS=1; SCREENSHOTS_DIR as for `shot`). */
 async function elementShot(element: Locator, name: string): Promise<void> {
-  if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `/tmp/shots/${name}.png` });
+  if (process.env.SCREENSHOTS === "1") await element.screenshot({ path: `${process.env.SCREENSHOTS_DIR || "/tmp/shots"}/${name}.png` });
 }
 
 /** Polls until `check` passes: software WebGL and the font take a moment. */
@@ -146,6 +146,76 @@ describe("3D preview in the design editor (software WebGL)", () => {
     await page.context().close();
   });
 
+  it("draws no frame for a new result whose drawing is the same or for other units, and one for a result whose drawing changed", async () => {
+    const context = await signedInContext(browser, DESIGNER);
+    // Counts the draw calls on the page's own canvases (a frame of the scene is a batch of them).
+    await context.addInitScript(() => {
+      const w = window as unknown as { __draws: number };
+      w.__draws = 0;
+      for (const C of [WebGLRenderingContext, WebGL2RenderingContext]) {
+        for (const name of ["drawElements", "drawArrays", "drawElementsInstanced", "drawArraysInstanced"] as const) {
+          const proto = C.prototype as unknown as Record<string, (...a: unknown[]) => unknown>;
+          const f = proto[name];
+          if (!f) continue;
+          proto[name] = function (this: WebGLRenderingContext, ...a: unknown[]) {
+            if (this.canvas instanceof HTMLCanvasElement && this.canvas.isConnected) w.__draws += 1;
+            return f.apply(this, a);
+          };
+        }
+      }
+    });
+    const page = await context.newPage();
+    await page.goto("/projects?q=Larkspur");
+    await page.getByRole("link", { name: "Larkspur Meadow residence (demo)" }).click();
+    await page.getByRole("link", { name: "Alternative on four posts" }).click();
+    const preview = page.getByTestId("design-preview");
+    await shownLabels(preview);
+    const draws = () => page.evaluate(() => (window as unknown as { __draws: number }).__draws);
+    // Settled: no frame pending (the count holds still over a second).
+    const settled = await eventually(async () => {
+      const a = await draws();
+      await page.waitForTimeout(1000);
+      return [a, await draws()];
+    }, ([a, b]) => a === b && a > 0);
+    expect(settled[0]).toBeGreaterThan(0);
+
+    // One mph more: a larger wind force in the caption, the same footing and dimensions (checked
+    // here, so the step is known not to change what is drawn).
+    const wind = page.getByLabel("Basic wind speed");
+    const mph = Number(await wind.inputValue());
+    const spec = page.getByTestId("footing-spec");
+    const scene = preview.locator('[role="img"]');
+    const before = { spec: await spec.textContent(), caption: await preview.locator("figcaption").textContent(), name: await scene.getAttribute("aria-label") };
+    const drawsBefore = await draws();
+    await wind.fill(String(mph + 1));
+    await eventually(() => preview.locator("figcaption").textContent(), (c) => c !== before.caption);
+    await page.waitForTimeout(1500);
+    expect(await preview.locator("figcaption").textContent()).not.toBe(before.caption);
+    expect(await spec.textContent()).toBe(before.spec);
+    expect(await scene.getAttribute("aria-label")).toBe(before.name);
+    expect(await draws()).toBe(drawsBefore);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
+
+    // A deeper footing is a new drawing: it is drawn.
+    await wind.fill(String(mph + 60));
+    await eventually(() => spec.textContent(), (t) => t !== before.spec);
+    expect(await eventually(draws, (n) => n > drawsBefore)).toBeGreaterThan(drawsBefore);
+
+    // Metric units: new label text over the same drawing, placed without drawing a frame.
+    const drawn = await eventually(async () => {
+      const a = await draws();
+      await page.waitForTimeout(1000);
+      return [a, await draws()];
+    }, ([a, b]) => a === b);
+    const embedmentLabel = preview.locator('[data-preview-label="embedment"]');
+    await page.getByRole("radio", { name: "Metric (m, mm, kN)" }).click();
+    expect(await eventually(() => embedmentLabel.textContent(), (t) => / mm/.test(t ?? ""))).toMatch(/^Embedment .* mm/);
+    await page.waitForTimeout(1000);
+    expect(await draws()).toBe(drawn[1]);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
+    await context.close();
+  });
+
   it("stays within its column on a phone and draws there too", async () => {
     const page = await openDemoDesign(browser, PHONE);
     const preview = page.getByTestId("design-preview");
@@ -166,6 +236,15 @@ describe("3D preview in the design editor (software WebGL)", () => {
     const host = (await preview.locator("xpath=..").boundingBox())!;
     expect(own.width).toBeLessThanOrEqual(host.width + 1);
     expect((await canvas.boundingBox())!.width).toBeLessThanOrEqual(own.width);
+
+    // Turned to landscape: the canvas follows its box (the root is configured again) and draws at the new size.
+    await page.setViewportSize({ width: 700, height: 844 });
+    const box = preview.locator('[role="img"]');
+    const wider = await eventually(async () => [(await box.boundingBox())!.width, (await canvas.boundingBox())!.width], ([b, c]) => b > own.width + 100 && Math.abs(b - c) <= 1);
+    expect(wider[0]).toBeGreaterThan(own.width + 100);
+    expect(Math.abs(wider[0] - wider[1])).toBeLessThanOrEqual(1);
+    expect(drawnFraction(await eventually(() => canvasPixels(page, canvas), (p) => drawnFraction(p) > 0.03))).toBeGreaterThan(0.03);
+    expect(await expectLabelsApart(preview)).toContain("embedment");
     await page.context().close();
   });
 });
