@@ -46,77 +46,85 @@ export async function getProject(id: string): Promise<Project | undefined> {
 export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "p.criteria_jurisdiction", designCount: "p.design_count", updatedAt: "p.updated_at" } as const;
 const NOT_NULL_SORTS = new Set(["name", "state", "designCount", "updatedAt"]);
 
+/** A search's count stops past this many matches (or a page past the current one): "1–20 of 1,000+". */
+export const PROJECT_COUNT_CAP = 1000;
+
 /**
  * One page of the organisation's projects with their criteria card and design count, in one
- * statement: the page's ids are picked first from an index that starts with the organisation and
- * serves the sort (index-only: organisation, sort column, id; migration 20261203500000), counted
- * in the same pass by a window count, and only those rows are joined to their card and
- * organisation. A later page steps over index entries only (about 300 to a page of the index),
- * never over joined rows. The design count and the card's jurisdiction (its sort) are columns
- * kept by triggers (20261204100100); `q` goes through the
- * trigram index over name, address and state, and matches a criteria card through its id (the
- * organisation's matching cards are looked up first, so their ids are known when the page is
- * planned). With
- * `engagedUserId`, also the projects that person holds an accepted engagement on (an outside
- * engineer): those ids are looked up first, so a person with none gets the organisation's index
- * alone, not an OR the index cannot serve.
+ * statement whose cost follows the page, not the organisation: the page's ids are picked first
+ * from an index that starts with the organisation and serves the sort (index-only: organisation,
+ * sort column, id; migrations 20261203500000, 20261205100000), and only those rows are joined to
+ * their card and organisation. A later page steps over index entries only (about 300 to a page of
+ * the index), never over joined rows. The design count and the card's jurisdiction (its sort) are
+ * columns kept by triggers (20261204100100).
+ *
+ * The count rides on the page's rows as an uncorrelated subquery (an InitPlan, run once):
+ * - no search: the organisation's `project_count`, kept by triggers (20261205500000): one row,
+ *   exact, whatever the organisation's size;
+ * - a search: the matches counted up to PROJECT_COUNT_CAP + 1, or one page past the current page,
+ *   whichever is more (`capped`: the table says "1–20 of 1,000+" and "Page 1 of 50+", as the
+ *   engineer's queue does, and Next always works). The page is picked apart from the count, so
+ *   PostgreSQL can walk the sort's index and test each project against the pattern when matches are
+ *   common (it stops at the page), and read the trigram index when they are rare.
+ *
+ * `q` goes through the trigram index over name, address and state, and matches a criteria card
+ * through its id (the organisation's matching cards are looked up first, so their ids are known
+ * when the page is planned). With `engagedUserId`, also the projects that person holds an accepted
+ * engagement on (an outside engineer): those ids are looked up first, so a person with none gets
+ * the organisation's index alone, not an OR the index cannot serve; their count adds the engaged
+ * projects of other organisations (a probe of each id).
  */
-export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string): Promise<ListPage<ProjectRow>> {
+export async function listProjects(organisationId: string, query: ListQuery, engagedUserId?: string, countCap = PROJECT_COUNT_CAP): Promise<ListPage<ProjectRow>> {
   const q = (query.q ?? "").trim().slice(0, 200);
   const sort = query.sort && Object.hasOwn(PROJECT_SORTS, query.sort) ? (query.sort as keyof typeof PROJECT_SORTS) : "updatedAt";
   const dir = query.dir === "asc" || query.dir === "desc" ? query.dir : "desc";
   const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(query.pageSize ?? 20)));
   const page = Math.max(1, Math.floor(query.page ?? 1));
   const engaged: string[] = engagedUserId ? await acceptedProjectIds(engagedUserId).pluck("project_id") : [];
+  // The organisation's cards whose jurisdiction matches, first (a probe of their trigram index):
+  // as known ids the planner ORs them with the projects' trigram index (a BitmapOr), while an
+  // array computed inside the statement made it read every project of the organisation and test
+  // each; with none (the usual case) there is no OR at all.
+  const pattern = q ? likePattern(q) : "";
+  const cards: string[] = q ? await db("criteria_cards").where("organisation_id", organisationId)
+    .whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [pattern]).pluck("id") : [];
+  /** The organisation's projects and the engaged ones, matching the search (`alias` is the table's). */
+  const listed = (alias: string) => db(`projects as ${alias}`).where((w) => {
+    w.where(`${alias}.organisation_id`, organisationId);
+    if (engaged.length) w.orWhereIn(`${alias}.id`, engaged);
+  }).where((w) => {
+    if (!q) return;
+    // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
+    w.whereRaw(`(${alias}.name || ' ' || ${alias}.address || ' ' || ${alias}.state) ILIKE ? ESCAPE '\\'`, [pattern]);
+    if (cards.length) w.orWhereIn(`${alias}.criteria_card_id`, cards);
+  });
+  // A search counts up to this many matches and one more (to know there are more).
+  const cap = q ? Math.max(countCap, page * pageSize + pageSize) : undefined;
+  const counted = () => {
+    if (q) return db.from(listed("c").select(db.raw("1")).limit(cap! + 1).as("m")).select(db.raw("count(*) AS n"));
+    if (!engaged.length) return db("organisations as o").where("o.id", organisationId).select("o.project_count as n");
+    const outside = db("projects as e").whereIn("e.id", engaged).whereNot("e.organisation_id", organisationId).count("*");
+    return db("organisations as o").where("o.id", organisationId).select(db.raw("o.project_count + ? AS n", [outside]));
+  };
 
   // Ties broken by name (for state) and id, so pages neither repeat nor skip a project.
   const order = `${PROJECT_SORTS[sort]} ${dir}${NOT_NULL_SORTS.has(sort) ? "" : " nulls last"}${sort === "state" ? `, p.name ${dir}` : ""}, p.id ${dir}`;
-  const picked = db("projects as p")
-    .where((w) => {
-      w.where("p.organisation_id", organisationId);
-      if (engaged.length) w.orWhereIn("p.id", engaged);
-    })
-    .orderByRaw(order)
-    .limit(pageSize)
-    .offset((page - 1) * pageSize);
-  // Without a search, the count is its own index-only aggregate (an InitPlan): half the time of a
-  // window count, which keeps every project of the organisation in a tuplestore before the page's
-  // first row (0.26 against 0.5 ms for 2,200 projects; db/README.md, fifth pass). A search keeps
-  // the window count, so its trigram index is read once for page and count.
-  if (!q) {
-    const counted = db("projects as c").where((w) => {
-      w.where("c.organisation_id", organisationId);
-      if (engaged.length) w.orWhereIn("c.id", engaged);
-    }).count("*");
-    picked.select("p.id", counted.as("total"));
-  } else picked.select("p.id", db.raw("count(*) over () as total"));
-  if (q) {
-    const pattern = likePattern(q);
-    // The organisation's cards whose jurisdiction matches, first (a probe of their trigram index):
-    // as known ids the planner ORs them with the projects' trigram index (a BitmapOr), while an
-    // array computed inside the statement made it read every project of the organisation and test
-    // each; with none (the usual case) there is no OR at all.
-    const cards: string[] = await db("criteria_cards").where("organisation_id", organisationId)
-      .whereRaw("jurisdiction ILIKE ? ESCAPE '\\'", [pattern]).pluck("id");
-    // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
-    picked.where((w) => {
-      w.whereRaw("(p.name || ' ' || p.address || ' ' || p.state) ILIKE ? ESCAPE '\\'", [pattern]);
-      if (cards.length) w.orWhereIn("p.criteria_card_id", cards);
-    });
-  }
+  const picked = listed("p").select("p.id").orderByRaw(order).limit(pageSize).offset((page - 1) * pageSize);
   const rows: (ProjectRow & { total: string })[] = await db
     .from(picked.as("pg"))
     .join("projects as p", "p.id", "pg.id")
     .leftJoin("criteria_cards as c", "c.id", "p.criteria_card_id")
     .join("organisations as o", "o.id", "p.organisation_id")
-    .select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount", "pg.total")
+    .select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount", counted().as("total"))
     .orderByRaw(order);
   let total = rows.length ? Number(rows[0].total) : 0;
-  // A page past the end has no row to carry the count: count on its own (only then).
-  if (!rows.length && page > 1) total = (await listProjects(organisationId, { ...query, page: 1, pageSize: 1 }, engagedUserId)).total;
+  // A page past the end has no row to carry the count: count on its own (only then), to the same cap.
+  if (!rows.length && page > 1) total = Number((await counted().first() as { n: string } | undefined)?.n ?? 0);
+  const capped = cap !== undefined && total > cap;
+  if (capped) total = cap!;
   return {
     rows: rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })),
-    total, page, pageSize, sort, dir, q,
+    total, ...(capped && { capped }), page, pageSize, sort, dir, q,
   };
 }
 

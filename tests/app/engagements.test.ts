@@ -193,6 +193,8 @@ describe("what an engaged engineer may do", () => {
     await actAs(engineer.email);
     const { json } = await call(listProjects, "GET", {});
     expect(json.rows).toEqual([expect.objectContaining({ id: projectId, organisationName: "Example Ground-Mount Co. (demo)" })]);
+    // Counted as its own organisation's kept count plus the engaged projects of other organisations.
+    expect([json.total, json.capped]).toEqual([1, undefined]);
     expect((await call(getProject, "GET", { projectId })).json.criteriaCard.id).toBe(DEMO_CARD_ID);
   });
 

@@ -77,6 +77,50 @@ describe("projects list pages", () => {
   });
 });
 
+describe("projects list counts that do not grow with the organisation", () => {
+  const projectCount = async (id: string) => (await db("organisations").where({ id }).first("project_count")).project_count as number;
+
+  it("counts the organisation's projects from its kept count, right after inserts, deletes and moves", async () => {
+    const [a, b] = await db("organisations").insert([{ name: "Kept Count A (test)" }, { name: "Kept Count B (test)" }]).returning("id");
+    const designer = await userId(DESIGNER);
+    const site = (org: string, i: number) => ({ organisation_id: org, name: `Count site ${i}`, address: "", state: "CO", created_by: designer });
+    // One statement inserting into two organisations counts both.
+    const ids = (await db("projects").insert([site(a.id, 0), site(a.id, 1), site(a.id, 2), site(b.id, 3)]).returning("id")).map((r) => r.id as string);
+    expect([await projectCount(a.id), await projectCount(b.id)]).toEqual([3, 1]);
+    expect((await listProjects(a.id, {})).total).toBe(3);
+    await db("projects").where({ id: ids[0] }).update({ organisation_id: b.id });
+    expect([(await listProjects(a.id, {})).total, (await listProjects(b.id, {})).total]).toEqual([2, 2]);
+    await db("projects").whereIn("id", [ids[1], ids[3]]).delete();
+    expect([(await listProjects(a.id, {})).total, (await listProjects(b.id, {})).total]).toEqual([1, 1]);
+    // An edit that leaves the organisation alone does not recount, and the count stays right.
+    await db("projects").where({ id: ids[2] }).update({ name: "Count site renamed" });
+    expect(await projectCount(a.id)).toBe(1);
+    // Past the end the kept count still answers.
+    expect(await listProjects(a.id, { page: 5, pageSize: 1 })).toMatchObject({ rows: [], total: 1 });
+    expect((await listProjects(a.id, {})).capped).toBeUndefined();
+  });
+
+  it("counts a search's matches only up to the cap (or a page past the current one) and says it is capped", async () => {
+    const [org] = await db("organisations").insert({ name: "Capped Search Co (test)" }).returning("id");
+    const designer = await userId(DESIGNER);
+    await db("projects").insert(Array.from({ length: 7 }, (_, i) => ({ organisation_id: org.id, name: `Wren site ${i}`, address: "", state: "CO", created_by: designer })));
+    // Cap 2, pages of 2: page 1 counts up to 4 (one page past it) and more are there.
+    const first = await listProjects(org.id, { q: "wren", sort: "name", dir: "asc", pageSize: 2 }, undefined, 2);
+    expect(first).toMatchObject({ total: 4, capped: true });
+    expect(first.rows.map((r) => r.name)).toEqual(["Wren site 0", "Wren site 1"]);
+    // Page 3 counts up to 8: all 7 are counted, exactly.
+    const third = await listProjects(org.id, { q: "wren", sort: "name", dir: "asc", page: 3, pageSize: 2 }, undefined, 2);
+    expect([third.total, third.capped, third.rows.map((r) => r.name)]).toEqual([7, undefined, ["Wren site 4", "Wren site 5"]]);
+    // Past the end: counted on its own to that page's cap.
+    expect(await listProjects(org.id, { q: "wren", page: 9, pageSize: 2 }, undefined, 2)).toMatchObject({ rows: [], total: 7 });
+    // Under the cap the count is exact and not marked; without a search it is exact whatever the cap.
+    expect(await listProjects(org.id, { q: "wren", pageSize: 2 })).toMatchObject({ total: 7 });
+    expect((await listProjects(org.id, { q: "wren", pageSize: 2 })).capped).toBeUndefined();
+    expect((await listProjects(org.id, { pageSize: 2 }, undefined, 2)).total).toBe(7);
+    expect((await listProjects(org.id, { pageSize: 2 }, undefined, 2)).capped).toBeUndefined();
+  });
+});
+
 describe("reviews page lists", () => {
   it("shows at most a page of waiting reviews and counts them all", async () => {
     await freshInReview();

@@ -223,6 +223,11 @@ export async function grow(client: pg.Client, from: number, to: number, options:
       await client.query(`UPDATE projects p SET criteria_jurisdiction = c.jurisdiction FROM criteria_cards c
         WHERE c.id = p.criteria_card_id AND p.criteria_jurisdiction IS DISTINCT FROM c.jurisdiction`);
     }
+    // Each organisation's project count, once 20261205500000 ran (triggers off: set, not recounted).
+    if ((await client.query("SELECT 1 FROM information_schema.columns WHERE table_name = 'organisations' AND column_name = 'project_count'")).rowCount === 1) {
+      await client.query(`UPDATE organisations o SET project_count = n.n FROM (SELECT organisation_id, count(*)::int AS n FROM projects GROUP BY organisation_id) n
+        WHERE n.organisation_id = o.id AND o.project_count <> n.n`);
+    }
     notes.push(`trigger-kept columns ${seconds(t)}`);
     for (const c of clients) await c.query("RESET session_replication_role");
     const ti = Date.now();

@@ -180,7 +180,7 @@ describe("columns a trigger keeps cannot be forged", () => {
     const rows = await triggers(db);
     const kept = keptColumns(rows);
     // The reader finds the known ones (a broken pattern would find nothing and pass).
-    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at", "reviews.project_id"]));
+    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at", "reviews.project_id", "organisations.project_count"]));
     const unguarded = kept.filter((tc) => !recomputed(rows, ...(tc.split(".") as [string, string])));
     expect(unguarded, "kept columns with no BEFORE INSERT OR UPDATE trigger assigning NEW.<column> (DEVELOPERS.md, Columns a trigger keeps)").toEqual([]);
   });
@@ -202,6 +202,20 @@ describe("columns a trigger keeps cannot be forged", () => {
     // A new project cannot start with designs it does not have.
     const [forged] = await db("projects").insert({ organisation_id: DEMO_ORG_ID, name: "Forged count", state: "CO", design_count: 40 }).returning("design_count");
     expect(forged.design_count).toBe(0);
+  });
+
+  it("organisations.project_count: a direct write, from the app role or the owner, is the real count again", async () => {
+    const [org] = await db("organisations").insert({ name: "Forged Project Count (test)", project_count: 40 }).returning(["id", "project_count"]);
+    expect(org.project_count).toBe(0);
+    const stored = async () => (await db("organisations").where({ id: org.id }).first("project_count")).project_count;
+    await db("projects").insert([{ organisation_id: org.id, name: "Counted A", state: "CO" }, { organisation_id: org.id, name: "Counted B", state: "CO" }]);
+    expect(await stored()).toBe(2);
+    await db("organisations").where({ id: org.id }).update({ project_count: 9000 });
+    expect(await stored()).toBe(2);
+    await ownerDb("organisations").where({ id: org.id }).update({ project_count: 0, name: "Forged Project Count, renamed (test)" });
+    expect(await stored()).toBe(2);
+    await db("projects").where({ organisation_id: org.id, name: "Counted B" }).delete();
+    expect(await stored()).toBe(1);
   });
 
   it("designs.approved_revision_id and approved_at: a direct write keeps the newest approved revision and its time", async () => {

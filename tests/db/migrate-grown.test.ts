@@ -112,6 +112,12 @@ describe("migrating a grown database", () => {
       expect((await check.query("UPDATE reviews SET project_id = (SELECT id FROM projects ORDER BY id LIMIT 1) WHERE decision IS DISTINCT FROM 'approve'")).rowCount).toBeGreaterThan(60);
       expect(await one(wrongProject)).toBe(0);
       await expect(check.query("UPDATE reviews SET engineer_name = 'edited' WHERE decision = 'approve'")).rejects.toThrow(/approval record/);
+      // Each organisation's project count (20261205500000), backfilled, and worked out again when written.
+      const wrongCount = "SELECT count(*) AS n FROM organisations o WHERE project_count <> (SELECT count(*) FROM projects p WHERE p.organisation_id = o.id)";
+      expect(await one(wrongCount)).toBe(0);
+      expect(await one("SELECT count(*) AS n FROM organisations WHERE project_count > 0")).toBeGreaterThan(1);
+      await check.query("UPDATE organisations SET project_count = project_count + 3");
+      expect(await one(wrongCount)).toBe(0);
       // The approval pin still holds on the migrated rows.
       await expect(check.query("UPDATE revisions SET note = 'edited' WHERE status = 'approved'")).rejects.toThrow(/approved and pinned/);
     } finally {
