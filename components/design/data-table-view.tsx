@@ -109,7 +109,7 @@ export function DataTableView<T>({ table, page, text, controls }: { table: Table
           <label htmlFor={id} className="block text-xs font-medium text-slate-600">{filterLabel}</label>
           <input id={id} type="search" {...(linked ? { name: prefix + "q", form: formId, defaultValue: page.q } : { value: controls.filter, onChange: (e) => controls.setFilter(e.target.value) })} className="mt-1 block w-full rounded-md border border-slate-300 bg-white px-3 py-1.5 text-sm shadow-sm focus:border-accent-600 focus:ring-2 focus:ring-accent-100 focus:outline-none" />
         </div>
-        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.capped ? `${page.total.toLocaleString("en-US")}+` : page.total}`}</p>
+        <p className="text-xs text-slate-500" aria-live="polite">{page.total === 0 ? "No rows" : `${first}–${last} of ${page.total.toLocaleString("en-US")}${page.capped ? "+" : ""}`}</p>
       </div>
       {sortable.length > 1 ? (
         <div className="flex items-end gap-2 sm:hidden">

@@ -94,8 +94,10 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     if (engaged.length) w.orWhereIn(`${alias}.id`, engaged);
   }).where((w) => {
     if (!q) return;
-    // The expression is the one indexed by projects_search_trgm_idx (migration 20261202500000).
-    w.whereRaw(`(${alias}.name || ' ' || ${alias}.address || ' ' || ${alias}.state) ILIKE ? ESCAPE '\\'`, [pattern]);
+    // The lowered name, address and state (20261205500100), in the trigram index and in the default
+    // order's index, so a common word is tested index-only along the order and a rare one found
+    // through the trigram index; LIKE of the lowered pattern is what ILIKE does per row.
+    w.whereRaw(`${alias}.search_text LIKE lower(?) ESCAPE '\\'`, [pattern]);
     if (cards.length) w.orWhereIn(`${alias}.criteria_card_id`, cards);
   });
   // A search counts up to this many matches and one more (to know there are more).
