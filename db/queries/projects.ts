@@ -67,7 +67,8 @@ export const PROJECT_COUNT_CAP = 1000;
  *   PostgreSQL can walk the sort's index and test each project against the pattern when matches are
  *   common (it stops at the page), and read the trigram index when they are rare.
  *
- * `q` goes through the trigram index over name, address and state, and matches a criteria card
+ * `q` is matched against `search_text` (the lowered name, address and state, 20261205500100): along
+ * the default order's index, which carries it, or through its trigram index; it matches a criteria card
  * through its id (the organisation's matching cards are looked up first, so their ids are known
  * when the page is planned). With `engagedUserId`, also the projects that person holds an accepted
  * engagement on (an outside engineer): those ids are looked up first, so a person with none gets

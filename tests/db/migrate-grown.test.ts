@@ -118,6 +118,8 @@ describe("migrating a grown database", () => {
       expect(await one("SELECT count(*) AS n FROM organisations WHERE project_count > 0")).toBeGreaterThan(1);
       await check.query("UPDATE organisations SET project_count = project_count + 3");
       expect(await one(wrongCount)).toBe(0);
+      // Each project's search text (20261205500100), generated from its name, address and state.
+      expect(await one("SELECT count(*) AS n FROM projects WHERE search_text IS DISTINCT FROM lower(name || ' ' || address || ' ' || state)")).toBe(0);
       // The approval pin still holds on the migrated rows.
       await expect(check.query("UPDATE revisions SET note = 'edited' WHERE status = 'approved'")).rejects.toThrow(/approved and pinned/);
     } finally {

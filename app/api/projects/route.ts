@@ -6,7 +6,10 @@ import { listProjects } from "@/db/queries/projects";
 
 export const dynamic = "force-dynamic";
 
-/** The organisation's projects and those the caller is engaged on: `?q=&sort=name|state|jurisdiction|designCount|updatedAt&dir=&page=&pageSize=`. */
+/**
+ * The organisation's projects and those the caller is engaged on: `?q=&sort=name|state|jurisdiction|designCount|updatedAt&dir=&page=&pageSize=`.
+ * `total` is exact without `q`; with `q` it is counted up to 1,000 (or a page past the asked one), and `capped: true` says there are more.
+ */
 export const GET = apiRoute(async (request) => {
   const user = await requireUser();
   const query = listQueryFrom(new URL(request.url).searchParams);
