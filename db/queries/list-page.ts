@@ -46,6 +46,12 @@ export async function listPage<T>(
     notNull?: string[];
     /** Replaces the column-by-column ILIKE of `search`, e.g. to use a trigram index (`pattern` is already escaped). */
     match?: (qb: Knex.QueryBuilder, pattern: string) => void;
+    /**
+     * A unique column sorted after the chosen one in the same direction, so rows that tie on it
+     * keep one order from page to page (none repeated or skipped at a page boundary). Not added
+     * when the chosen sort is this column itself.
+     */
+    tieBreak?: { sort: string; column: string };
   },
 ): Promise<ListPage<T>> {
   const q = (query.q ?? "").trim().slice(0, 200);
@@ -68,7 +74,7 @@ export async function listPage<T>(
     filtered.clone().clearSelect().clearOrder().count<{ count: string }[]>({ count: "*" }),
     opts
       .select(filtered.clone())
-      .orderByRaw(`${opts.sortable[sort]} ${dir}${opts.notNull?.includes(sort) ? "" : " nulls last"}`)
+      .orderByRaw(`${opts.sortable[sort]} ${dir}${opts.notNull?.includes(sort) ? "" : " nulls last"}${opts.tieBreak && opts.tieBreak.sort !== sort ? `, ${opts.tieBreak.column} ${dir}` : ""}`)
       .limit(pageSize)
       .offset((page - 1) * pageSize) as Promise<T[]>,
   ]);

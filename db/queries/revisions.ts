@@ -131,7 +131,8 @@ export const REVISION_SORTS = { number: "r.number", status: "r.status", authorNa
 /**
  * One page of a design's revisions, without the heavy input and result: the footing headline
  * comes from stored columns. Number, status and time are never null, so the (design_id, number)
- * index serves the default newest-first order.
+ * index serves the default newest-first order; depth, either way, is served by its own index per
+ * direction (migration 20261205400000).
  */
 export async function listRevisions(designId: string, query: ListQuery = {}): Promise<ListPage<RevisionRow>> {
   const base = db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.design_id", designId);
@@ -140,6 +141,8 @@ export async function listRevisions(designId: string, query: ListQuery = {}): Pr
     defaultSort: "number",
     defaultDir: "desc",
     notNull: ["number", "status", "createdAt"],
+    // Equal depths (or statuses) keep one order across pages; the depth indexes end with it.
+    tieBreak: { sort: "number", column: "r.number" },
     search: ["r.note", "u.name", "r.status", "r.number"],
     select: (qb) =>
       qb.select("r.id", "r.number", "r.status", "r.note", "u.name as authorName", "r.created_at as createdAt", "r.engine_version as engineVersion",

@@ -92,6 +92,43 @@ describe("project and revision lists", () => {
     expect(designs.rows[0].depthIn).toBe(stored[1].result.footing.depthIn);
   });
 
+  it("pages a design's revisions by footing depth in both directions with equal depths in one order, each direction read from an index", async () => {
+    // Two hole diameters give two depths, so most revisions tie on depth: the number decides.
+    const { designId } = await makeDesign();
+    const wide = { ...twoPostDesignInput, posts: { ...twoPostDesignInput.posts, holeDiameterIn: 36 } };
+    for (let i = 0; i < 6; i++) await addRevision(designId, i % 2 ? twoPostDesignInput : wide);
+    const stored = await db("revisions").where({ design_id: designId }).select("number", "footing_depth_in as depthIn");
+    expect(new Set(stored.map((r) => r.depthIn)).size).toBe(2);
+    for (const dir of ["asc", "desc"] as const) {
+      const sign = dir === "asc" ? 1 : -1;
+      const expected = [...stored].sort((a, b) => sign * (a.depthIn - b.depthIn) || sign * (a.number - b.number)).map((r) => r.number);
+      const listed: number[] = [];
+      for (let page = 1; page <= 5; page++) listed.push(...(await listRevisions(designId, { sort: "depthIn", dir, page, pageSize: 2 })).rows.map((r) => r.number));
+      expect(listed).toEqual(expected);
+
+      // The page's statement, explained with sorting switched off: a Sort node left in the plan
+      // would mean no index gives this order (the planner sorts anyway when nothing else can).
+      const statements: { sql: string; bindings: unknown[] }[] = [];
+      const seen = (q: { sql: string; bindings: unknown[] }) => statements.push(q);
+      db.on("query", seen);
+      try {
+        await listRevisions(designId, { sort: "depthIn", dir });
+      } finally {
+        db.off("query", seen);
+      }
+      const pageStatement = statements.find((q) => /order by/i.test(q.sql))!;
+      const plan = await db.transaction(async (trx) => {
+        await trx.raw("SET LOCAL enable_sort = off");
+        await trx.raw("SET LOCAL enable_incremental_sort = off");
+        await trx.raw("SET LOCAL enable_seqscan = off");
+        const rows = (await trx.raw(`EXPLAIN ${pageStatement.sql.replace(/\$\d+/g, "?")}`, pageStatement.bindings as never[])).rows as { "QUERY PLAN": string }[];
+        return rows.map((r) => r["QUERY PLAN"]).join("\n");
+      });
+      expect(plan).toMatch(/revisions_design_depth_(asc|desc)_idx/);
+      expect(plan).not.toMatch(/Sort/);
+    }
+  });
+
   it("sorts by the card's jurisdiction (a copy kept on the project) in the card's order, cardless last, through renames, moves and deletions", async () => {
     // A fresh organisation, so other suites' projects do not share the list.
     const [org] = await db("organisations").insert({ name: `Jurisdiction sort test ${crypto.randomUUID().slice(0, 6)} (invented)` }).returning("id");

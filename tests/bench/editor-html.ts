@@ -30,12 +30,13 @@ import { chromium } from "playwright-core";
 import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { freePort } from "../../db/lib/ports";
-import { ensureCluster, findServerBinaries, psql, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureCluster, findServerBinaries, psql, startServer, type Cluster } from "../../db/lib/postgres";
 import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { DEMO_PROJECT_ID } from "../../db/seeds/02_demo_projects";
 import { CHROMIUM_ARGS } from "../support/browser";
 import { ensureChromium, waitForHttp } from "../support/runner";
+import { runBench, stopBench } from "./bench-run";
 import { percentile } from "./web-http";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
@@ -250,22 +251,7 @@ async function main(): Promise<void> {
 }
 
 async function cleanUp(): Promise<void> {
-  for (const s of servers) s.kill("SIGTERM");
-  await Promise.all(servers.map((s) => (s.exitCode !== null ? undefined : new Promise((r) => { s.once("exit", r); setTimeout(r, 10_000); }))));
-  await standIns?.stop();
-  try {
-    if (cluster) stopServer(cluster, "immediate");
-  } catch (error) {
-    console.error(String(error));
-  }
-  fs.rmSync(workDir, { recursive: true, force: true });
+  await stopBench({ servers, standIns, cluster, workDir });
 }
 
-process.on("SIGINT", () => void cleanUp().then(() => process.exit(130)));
-main()
-  .then(cleanUp)
-  .catch(async (error) => {
-    console.error("bench:editor-html failed:", error);
-    await cleanUp();
-    process.exit(1);
-  });
+runBench("bench:editor-html", main, cleanUp);

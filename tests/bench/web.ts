@@ -28,13 +28,14 @@ import knexConfig from "../../knexfile";
 import { appEnvironment } from "../../db/lib/app-env";
 import { buildApp, buildIsStale } from "../../db/lib/build";
 import { freePort } from "../../db/lib/ports";
-import { ensureCluster, findServerBinaries, startServer, stopServer, type Cluster } from "../../db/lib/postgres";
+import { ensureCluster, findServerBinaries, startServer, type Cluster } from "../../db/lib/postgres";
 import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { DEMO_PROJECT_ID } from "../../db/seeds/02_demo_projects";
 import { defaultDesignInput } from "../../engine";
 import { CHROMIUM_ARGS } from "../support/browser";
 import { ensureChromium, waitForHttp } from "../support/runner";
+import { runBench, stopBench } from "./bench-run";
 import { routeWeights } from "./web-bundles";
 import { measureEditor, type EditorFigures } from "./web-editor";
 import { load, median, percentile, type LoadResult } from "./web-http";
@@ -236,23 +237,7 @@ async function main(): Promise<void> {
 
 async function cleanUp(): Promise<void> {
   for (const b of browsers) await b.close().catch(() => undefined);
-  for (const s of servers) s.kill("SIGTERM");
-  // Let them exit (and write any CPU profile) before their database goes.
-  await Promise.all(servers.map((s) => (s.exitCode !== null ? undefined : new Promise((r) => { s.once("exit", r); setTimeout(r, 10_000); }))));
-  await standIns?.stop();
-  try {
-    if (cluster) stopServer(cluster, "immediate");
-  } catch (error) {
-    console.error(String(error));
-  }
-  fs.rmSync(workDir, { recursive: true, force: true });
+  await stopBench({ servers, standIns, cluster, workDir });
 }
 
-process.on("SIGINT", () => void cleanUp().then(() => process.exit(130)));
-main()
-  .then(cleanUp)
-  .catch(async (error) => {
-    console.error("bench:web failed:", error);
-    await cleanUp();
-    process.exit(1);
-  });
+runBench("bench:web", main, cleanUp);
