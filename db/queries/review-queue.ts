@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "../client";
+import { preparedRows } from "../prepared";
 import type { RevisionStatus } from "./reviews";
 
 export interface QueueRow {
@@ -90,14 +91,19 @@ export async function reviewLists(organisationId: string, userId: string, roles:
     ...(roles.designer ? [pick("mine", (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(limit))] : []),
     pick("decided", (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(decidedLimit)),
   ];
-  const rows: (QueueRow & { list: string; waitingTotal?: string })[] = await queue(organisationId, () => db.unionAll(parts, true), { column: "list", order: "asc" })
+  const built = queue(organisationId, () => db.unionAll(parts, true), { column: "list", order: "asc" })
     .select("v.list")
     .modify((qb) => {
       // Counted to countCap + 1 (WAITING_COUNT_CAP but in tests; index-only), so the count does not grow with the backlog.
-      if (roles.engineer) qb.select(db.raw(`(select count(*) from (select 1 from reviews c where c.organisation_id = ? and c.engineer_id = ? and c.decision is null limit ${countCap + 1}) c) as "waitingTotal"`, [organisationId, userId]));
+      if (roles.engineer) qb.select(db.raw(`(select count(*) from (select 1 from reviews c where c.organisation_id = ? and c.engineer_id = ? and c.decision is null limit ?) c) as "waitingTotal"`, [organisationId, userId, countCap + 1]));
     })
     // Each list in its own order, as the single-list reads give it.
-    .orderByRaw("case when v.list = 'waiting' then v.submitted_at end asc, case when v.list = 'mine' then v.submitted_at end desc, case when v.list = 'decided' then v.decided_at end desc");
+    .orderByRaw("case when v.list = 'waiting' then v.submitted_at end asc, case when v.list = 'mine' then v.submitted_at end desc, case when v.list = 'decided' then v.decided_at end desc")
+    .toSQL();
+  // Prepared, with a generic plan (db/prepared.ts): planning this join cost as much as running it.
+  // The text is the same for every person with the same roles (ids and limits are bindings), and
+  // the planner's dependency statistics (20261206000000) keep each pick on its index's order.
+  const rows = await preparedRows<QueueRow & { list: string; waitingTotal?: string }>(built.sql, built.bindings);
   const counted = rows.length && rows[0].waitingTotal !== undefined ? Number(rows[0].waitingTotal) : 0;
   const of = (list: string) => rows.filter((r) => r.list === list).map(({ list: _list, waitingTotal: _total, ...r }) => r);
   return {
