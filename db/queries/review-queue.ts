@@ -84,25 +84,30 @@ export interface ReviewLists {
  * roles do not show are not read (null).
  */
 export async function reviewLists(organisationId: string, userId: string, roles: { engineer: boolean; designer: boolean }, limit = REVIEW_LIST_LIMIT, decidedLimit = 20, countCap = WAITING_COUNT_CAP): Promise<ReviewLists> {
+  // Whole numbers from this module's callers, written into the statement's text (see below).
+  const whole = (n: number) => Math.max(0, Math.floor(Number(n)) || 0);
+  const literal = { skipBinding: true } as const;
   const pick = (list: string, filter: (q: Knex.QueryBuilder) => Knex.QueryBuilder) =>
     filter(db("reviews").where("organisation_id", organisationId)).select("*", db.raw("?::text as list", [list]));
   const parts = [
-    ...(roles.engineer ? [pick("waiting", (v) => v.where("engineer_id", userId).whereNull("decision").orderBy("submitted_at", "asc").limit(limit))] : []),
-    ...(roles.designer ? [pick("mine", (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(limit))] : []),
-    pick("decided", (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(decidedLimit)),
+    ...(roles.engineer ? [pick("waiting", (v) => v.where("engineer_id", userId).whereNull("decision").orderBy("submitted_at", "asc").limit(whole(limit), literal))] : []),
+    ...(roles.designer ? [pick("mine", (v) => v.where("submitted_by", userId).orderBy("submitted_at", "desc").limit(whole(limit), literal))] : []),
+    pick("decided", (v) => v.whereNotNull("decision").orderBy("decided_at", "desc").limit(whole(decidedLimit), literal)),
   ];
   const built = queue(organisationId, () => db.unionAll(parts, true), { column: "list", order: "asc" })
     .select("v.list")
     .modify((qb) => {
       // Counted to countCap + 1 (WAITING_COUNT_CAP but in tests; index-only), so the count does not grow with the backlog.
-      if (roles.engineer) qb.select(db.raw(`(select count(*) from (select 1 from reviews c where c.organisation_id = ? and c.engineer_id = ? and c.decision is null limit ?) c) as "waitingTotal"`, [organisationId, userId, countCap + 1]));
+      if (roles.engineer) qb.select(db.raw(`(select count(*) from (select 1 from reviews c where c.organisation_id = ? and c.engineer_id = ? and c.decision is null limit ${whole(countCap) + 1}) c) as "waitingTotal"`, [organisationId, userId]));
     })
     // Each list in its own order, as the single-list reads give it.
     .orderByRaw("case when v.list = 'waiting' then v.submitted_at end asc, case when v.list = 'mine' then v.submitted_at end desc, case when v.list = 'decided' then v.decided_at end desc")
     .toSQL();
   // Prepared, with a generic plan (db/prepared.ts): planning this join cost as much as running it.
-  // The text is the same for every person with the same roles (ids and limits are bindings), and
-  // the planner's dependency statistics (20261206000000) keep each pick on its index's order.
+  // The text is the same for every person with the same roles (ids are bindings); the limits are
+  // written into it, since a generic plan takes a bound LIMIT for a tenth of the rows and, at
+  // thousands of reviews, sorted them all. The planner's dependency statistics (20261206000000)
+  // keep each pick on its index's order.
   const rows = await preparedRows<QueueRow & { list: string; waitingTotal?: string }>(built.sql, built.bindings);
   const counted = rows.length && rows[0].waitingTotal !== undefined ? Number(rows[0].waitingTotal) : 0;
   const of = (list: string) => rows.filter((r) => r.list === list).map(({ list: _list, waitingTotal: _total, ...r }) => r);
