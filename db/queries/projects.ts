@@ -1,6 +1,6 @@
 import { db } from "../client";
 import { acceptedProjectIds } from "./engagements";
-import { likePattern, MAX_PAGE_SIZE, type ListPage, type ListQuery } from "./list-page";
+import { cappedTotal, countReach, likePattern, MAX_PAGE_SIZE, SEARCH_COUNT_CAP, type ListPage, type ListQuery } from "./list-page";
 import { isUuid } from "../ids";
 
 /** A customer site. */
@@ -47,7 +47,7 @@ export const PROJECT_SORTS = { name: "p.name", state: "p.state", jurisdiction: "
 const NOT_NULL_SORTS = new Set(["name", "state", "designCount", "updatedAt"]);
 
 /** A search's count stops past this many matches (or a page past the current one): "1–20 of 1,000+". */
-export const PROJECT_COUNT_CAP = 1000;
+export const PROJECT_COUNT_CAP = SEARCH_COUNT_CAP;
 
 /**
  * One page of the organisation's projects with their criteria card and design count, in one
@@ -63,7 +63,8 @@ export const PROJECT_COUNT_CAP = 1000;
  *   exact, whatever the organisation's size;
  * - a search: the matches counted up to PROJECT_COUNT_CAP + 1, or one page past the current page,
  *   whichever is more (`capped`: the table says "1–20 of 1,000+" and "Page 1 of 50+", as the
- *   engineer's queue does, and Next always works). The page is picked apart from the count, so
+ *   engineer's queue does, and Next always works; `countReach` and `cappedTotal` of list-page.ts,
+ *   shared with every list that caps its search's count). The page is picked apart from the count, so
  *   PostgreSQL can walk the sort's index and test each project against the pattern when matches are
  *   common (it stops at the page), and read the trigram index when they are rare.
  *
@@ -102,7 +103,7 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     if (cards.length) w.orWhereIn(`${alias}.criteria_card_id`, cards);
   });
   // A search counts up to this many matches and one more (to know there are more).
-  const cap = q ? Math.max(countCap, page * pageSize + pageSize) : undefined;
+  const cap = q ? countReach(countCap, page, pageSize) : undefined;
   const counted = () => {
     if (q) return db.from(listed("c").select(db.raw("1")).limit(cap! + 1).as("m")).select(db.raw("count(*) AS n"));
     if (!engaged.length) return db("organisations as o").where("o.id", organisationId).select("o.project_count as n");
@@ -120,14 +121,12 @@ export async function listProjects(organisationId: string, query: ListQuery, eng
     .join("organisations as o", "o.id", "p.organisation_id")
     .select("p.id", "p.name", "p.address", "p.state", "c.jurisdiction", "p.updated_at as updatedAt", "o.name as organisationName", "p.design_count as designCount", counted().as("total"))
     .orderByRaw(order);
-  let total = rows.length ? Number(rows[0].total) : 0;
+  let found = rows.length ? Number(rows[0].total) : 0;
   // A page past the end has no row to carry the count: count on its own (only then), to the same cap.
-  if (!rows.length && page > 1) total = Number((await counted().first() as { n: string } | undefined)?.n ?? 0);
-  const capped = cap !== undefined && total > cap;
-  if (capped) total = cap!;
+  if (!rows.length && page > 1) found = Number((await counted().first() as { n: string } | undefined)?.n ?? 0);
   return {
     rows: rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: new Date(r.updatedAt).toISOString() })),
-    total, ...(capped && { capped }), page, pageSize, sort, dir, q,
+    ...cappedTotal(found, cap), page, pageSize, sort, dir, q,
   };
 }
 

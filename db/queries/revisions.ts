@@ -1,7 +1,7 @@
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "../client";
-import { listPage, type ListPage, type ListQuery } from "./list-page";
+import { listPage, SEARCH_COUNT_CAP, type ListPage, type ListQuery } from "./list-page";
 
 /**
  * Revisions: every saved state of a design. A revision is written once, by `createRevision`, and
@@ -128,15 +128,25 @@ export async function revisionNumbers(designId: string): Promise<{ id: string; n
 
 export const REVISION_SORTS = { number: "r.number", status: "r.status", authorName: "u.name", createdAt: "r.created_at", depthIn: "r.footing_depth_in" } as const;
 
+/** A search's count of a design's revisions stops past this many (or a page past the current one): "1–20 of 1,000+". */
+export const REVISION_COUNT_CAP = SEARCH_COUNT_CAP;
+
 /**
  * One page of a design's revisions, without the heavy input and result: the footing headline
  * comes from stored columns. Number, status and time are never null, so the (design_id, number)
  * index serves the default newest-first order; depth, either way, is served by its own index per
  * direction (migration 20261205400000).
+ *
+ * The total, so a view reads about a page whatever the design's history: without a search, the
+ * design's `revision_count` (kept by triggers, 20261206100000; one row, exact); with one, the
+ * matches counted up to REVISION_COUNT_CAP (`countCap` in tests) or a page past the current one,
+ * `capped` past that, as the projects search is.
  */
-export async function listRevisions(designId: string, query: ListQuery = {}): Promise<ListPage<RevisionRow>> {
+export async function listRevisions(designId: string, query: ListQuery = {}, countCap = REVISION_COUNT_CAP): Promise<ListPage<RevisionRow>> {
   const base = db("revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.design_id", designId);
   const page = await listPage<RevisionRow & { createdAt: Date }>(base, query, {
+    keptCount: db("designs").where("id", designId).select("revision_count as n"),
+    searchCountCap: countCap,
     sortable: REVISION_SORTS,
     defaultSort: "number",
     defaultDir: "desc",

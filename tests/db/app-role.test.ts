@@ -17,7 +17,8 @@ import { DEMO_ORG_ID } from "@/db/seeds/01_demo_accounts";
 import { ensureDatabaseRoles } from "@/db/lib/database-roles";
 import { psql, type Cluster } from "@/db/lib/postgres";
 import { ownerDb } from "../support/owner-db";
-import { DESIGNER, ENGINEER, freshApproved, makeDesign, userId } from "../support/review-fixtures";
+import { addRevision, DESIGNER, ENGINEER, freshApproved, makeDesign, userId } from "../support/review-fixtures";
+import { twoPostDesignInput } from "@/engine";
 
 const appRole = decodeURIComponent(new URL(process.env.DATABASE_URL!).username);
 const cluster = JSON.parse(process.env.PIERWISE_TEST_CLUSTER ?? "null") as Cluster | null;
@@ -180,7 +181,7 @@ describe("columns a trigger keeps cannot be forged", () => {
     const rows = await triggers(db);
     const kept = keptColumns(rows);
     // The reader finds the known ones (a broken pattern would find nothing and pass).
-    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at", "reviews.project_id", "organisations.project_count"]));
+    expect(kept).toEqual(expect.arrayContaining(["projects.design_count", "designs.approved_revision_id", "designs.approved_at", "reviews.project_id", "organisations.project_count", "designs.revision_count"]));
     const unguarded = kept.filter((tc) => !recomputed(rows, ...(tc.split(".") as [string, string])));
     expect(unguarded, "kept columns with no BEFORE INSERT OR UPDATE trigger assigning NEW.<column> (DEVELOPERS.md, Columns a trigger keeps)").toEqual([]);
   });
@@ -216,6 +217,24 @@ describe("columns a trigger keeps cannot be forged", () => {
     expect(await stored()).toBe(2);
     await db("projects").where({ organisation_id: org.id, name: "Counted B" }).delete();
     expect(await stored()).toBe(1);
+  });
+
+  it("designs.revision_count: a direct write, from the app role or the owner, is the real count again", async () => {
+    const { designId, projectId } = await makeDesign();
+    const stored = async () => (await db("designs").where({ id: designId }).first("revision_count")).revision_count;
+    expect(await stored()).toBe(1);
+    await db("designs").where({ id: designId }).update({ revision_count: 500 });
+    expect(await stored()).toBe(1);
+    await ownerDb("designs").where({ id: designId }).update({ revision_count: 0, name: "Forged revision count (owner)" });
+    expect(await stored()).toBe(1);
+    // The keeping triggers still count: a second revision, then one deleted.
+    const second = await addRevision(designId, twoPostDesignInput);
+    expect(await stored()).toBe(2);
+    await db("revisions").where({ id: second }).delete();
+    expect(await stored()).toBe(1);
+    // A new design cannot start with revisions it does not have.
+    const [forged] = await db("designs").insert({ project_id: projectId, organisation_id: DEMO_ORG_ID, name: "Forged count", created_by: await userId(DESIGNER), revision_count: 40 }).returning("revision_count");
+    expect(forged.revision_count).toBe(0);
   });
 
   it("designs.approved_revision_id and approved_at: a direct write keeps the newest approved revision and its time", async () => {

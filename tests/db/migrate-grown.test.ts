@@ -2,7 +2,8 @@
  * The list-index migrations (20261202500000, 20261203500000 with the queue and project-page
  * indexes, 20261204100000 with each review's design and number, 20261204100100 with each
  * project's card jurisdiction, 20261205100000 with each review's project) and the triggers that
- * keep their columns unforgeable (20261204400000) run forward on a database that already holds data,
+ * keep their columns unforgeable (20261204400000), and the kept counts that came after them
+ * (20261205500000 per organisation, 20261206100000 per design), run forward on a database that already holds data,
  * without losing a row: a copy of a grown database (every other migration, the demo seed and three
  * generated units of tests/bench/grow.ts) is migrated to the latest schema, then every table is
  * counted again and the new columns are checked against what they are derived from.
@@ -118,6 +119,13 @@ describe("migrating a grown database", () => {
       expect(await one("SELECT count(*) AS n FROM organisations WHERE project_count > 0")).toBeGreaterThan(1);
       await check.query("UPDATE organisations SET project_count = project_count + 3");
       expect(await one(wrongCount)).toBe(0);
+      // Each design's revision count (20261206100000), backfilled exactly, and worked out again when written.
+      const wrongRevisionCount = "SELECT count(*) AS n FROM designs d WHERE revision_count <> (SELECT count(*) FROM revisions r WHERE r.design_id = d.id)";
+      expect(await one(wrongRevisionCount)).toBe(0);
+      expect(await one("SELECT sum(revision_count) AS n FROM designs")).toBe(counts.revisions);
+      expect(await one("SELECT count(*) AS n FROM designs WHERE revision_count >= 10")).toBeGreaterThan(60);
+      await check.query("UPDATE designs SET revision_count = revision_count + 2");
+      expect(await one(wrongRevisionCount)).toBe(0);
       // Each project's search text (20261205500100), generated from its name, address and state.
       expect(await one("SELECT count(*) AS n FROM projects WHERE search_text IS DISTINCT FROM lower(name || ' ' || address || ' ' || state)")).toBe(0);
       // The approval pin still holds on the migrated rows.

@@ -7,7 +7,11 @@ import { latestRevision, listRevisions } from "@/db/queries/revisions";
 export const dynamic = "force-dynamic";
 type Context = { params: Promise<{ designId: string }> };
 
-/** A design, its latest revision (input and result) and one page of its revisions (`?q=&sort=&dir=&page=&pageSize=`). */
+/**
+ * A design, its latest revision (input and result) and one page of its revisions (`?q=&sort=&dir=&page=&pageSize=`).
+ * `revisions.total` is exact without `q` (the design's kept count); with `q` it is counted up to 1,000 (or a page past
+ * the asked one), and `revisions.capped: true` says there are more.
+ */
 export const GET = apiRoute<Context>(async (request, { params }) => {
   const user = await requireUser();
   const design = await designFor(user, (await params).designId, { engaged: true });
