@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 
 /**
- * Issue 19, seventh pass (numbers in db/README.md).
+ * Issue 19, eighth pass (numbers in db/README.md).
  *
  * The reviews page's lists run as one prepared statement with a generic plan (db/prepared.ts), so
  * they are planned once per pooled connection instead of on every request (planning the six-table

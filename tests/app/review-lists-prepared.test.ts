@@ -1,12 +1,12 @@
 /**
- * Issue 19, seventh pass: the reviews page's lists are one prepared statement with a generic plan
+ * Issue 19, eighth pass: the reviews page's lists are one prepared statement with a generic plan
  * (planned once per pooled connection, not per request), whose text does not change with the
  * person, so one plan serves every engineer; the limits are written in (a bound LIMIT is taken
  * for a tenth of the rows by a generic plan). The generic plan
  * knows no engineer, so the planner is told that an engineer or a submitter belongs to one
  * organisation (dependency statistics, 20261206000000); without them it took the organisation and
  * the engineer for independent, expected 9 open reviews, and sorted the engineer's whole backlog
- * instead of reading its first page in order (db/README.md, seventh pass).
+ * instead of reading its first page in order (db/README.md, eighth pass).
  */
 import { describe, expect, it, vi } from "vitest";
 import { db } from "@/db/client";
