@@ -7,7 +7,8 @@
  * generated once) and at each scale prints, per route: p50/p95 database time per request
  * (pg_stat_statements over the app's role, planning included), p50/p95 HTTP time, statements per
  * request, and from one auto_explain (ANALYZE, BUFFERS) request the shared buffers touched and every
- * sequential scan of a table over 10,000 rows.
+ * sequential scan of a table over 10,000 rows. Before timing a scale it waits for autovacuum's
+ * workers to finish and holds autovacuum off while it times (tests/bench/settle.ts).
  *
  *   npm run bench:db                      ×1, ×100, ×1000, 10 timed requests per route after 2 warm-ups
  *   npm run bench:db -- --scales=1,100    a subset (also --sizes=, or PIERWISE_BENCH_SCALES=1,100)
@@ -35,6 +36,7 @@ import { ensureDatabaseRoles } from "../../db/lib/database-roles";
 import { startStandIns, type StandIns } from "../../db/lib/stand-ins";
 import { waitForHttp } from "../support/runner";
 import { BIG_DESIGN_ID_SQL, DEMO_ORG_ID, DEMO_PROJECT_ID, grow, prepare, tableCounts } from "./grow";
+import { resumeAutovacuum, settleAutovacuum } from "./settle";
 import { explainRoute, percentile, setAutoExplain, signIn, tableSizes, timeRoute, type PlanSummary, type Route, type Timing } from "./measure";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
@@ -204,6 +206,8 @@ async function main(): Promise<void> {
     const list = routes(bigDesignId, Math.max(1, Math.ceil(auditEvents / 25)), Math.max(1, Math.ceil(demoProjects / 20 / 2)))
       .filter((r) => !routeFilter || routeFilter.some((part) => r.name.includes(part)));
     const tableRows = await tableSizes(admin);
+    const settled = await settleAutovacuum(admin);
+    if (settled.tables.length) console.log(`bench:db: waited ${(settled.waitedMs / 1000).toFixed(0)} s for autovacuum (${settled.tables.join("; ")}); off while timing`);
     const measured: ScaleResult["routes"] = [];
     for (const route of list) {
       const timing = await timeRoute({ baseUrl, route, cookies, admin, appRole: APP_ROLE, warmup: 2, count: requests });
@@ -212,6 +216,7 @@ async function main(): Promise<void> {
     await setAutoExplain(admin, true);
     for (const m of measured) m.plans = await explainRoute({ baseUrl, route: m.route, cookies, admin, appRole: APP_ROLE, logFile, tableRows });
     await setAutoExplain(admin, false);
+    await resumeAutovacuum(admin);
     const result: ScaleResult = { scale, counts, databaseMb: Number(sizes.db), revisionsMb: Number(sizes.rev), routes: measured };
     results.push(result);
     printScale(result);
