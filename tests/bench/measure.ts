@@ -13,7 +13,19 @@ export interface Route {
   path: string;
 }
 
+/** One statement's share of a route's timed requests (summed over them), for `--statements`. */
+export interface StatementShare {
+  query: string;
+  calls: number;
+  planMs: number;
+  execMs: number;
+  /** Time spent compiling the statement (JIT), included in execMs. */
+  jitMs: number;
+}
+
 export interface Timing {
+  /** Per statement text, summed over the timed requests (read with each request's database time). */
+  byStatement?: StatementShare[];
   dbMs: number[];
   httpMs: number[];
   statements: number[];
@@ -52,18 +64,29 @@ async function request(baseUrl: string, route: Route, cookies: Record<string, st
   return { status: response.status, ms: performance.now() - started };
 }
 
-async function appStatements(admin: pg.Client, appRole: string): Promise<{ ms: number; calls: number }> {
+async function appStatements(admin: pg.Client, appRole: string): Promise<{ ms: number; calls: number; rows: StatementShare[] }> {
   const { rows } = await admin.query(
-    `SELECT coalesce(sum(total_exec_time + total_plan_time), 0) AS ms, coalesce(sum(calls), 0) AS calls
+    `SELECT query, calls, total_plan_time AS plan, total_exec_time AS exec,
+            jit_generation_time + jit_inlining_time + jit_optimization_time + jit_emission_time AS jit
      FROM pg_stat_statements WHERE userid = (SELECT oid FROM pg_roles WHERE rolname = $1)`,
     [appRole],
   );
-  return { ms: Number(rows[0].ms), calls: Number(rows[0].calls) };
+  const shares = rows.map((r) => ({ query: String(r.query), calls: Number(r.calls), planMs: Number(r.plan), execMs: Number(r.exec), jitMs: Number(r.jit) }));
+  return { ms: shares.reduce((t, r) => t + r.planMs + r.execMs, 0), calls: shares.reduce((t, r) => t + r.calls, 0), rows: shares };
+}
+
+function addShares(into: Map<string, StatementShare>, rows: StatementShare[]): void {
+  for (const r of rows) {
+    const key = r.query.replace(/\s+/g, " ").trim();
+    const had = into.get(key) ?? { query: key, calls: 0, planMs: 0, execMs: 0, jitMs: 0 };
+    into.set(key, { query: key, calls: had.calls + r.calls, planMs: had.planMs + r.planMs, execMs: had.execMs + r.execMs, jitMs: had.jitMs + r.jitMs });
+  }
 }
 
 /** `warmup` untimed requests, then `count` timed ones, each with its own database-time reading. */
 export async function timeRoute(a: { baseUrl: string; route: Route; cookies: Record<string, string>; admin: pg.Client; appRole: string; warmup: number; count: number }): Promise<Timing> {
   const timing: Timing = { dbMs: [], httpMs: [], statements: [], status: 0 };
+  const shares = new Map<string, StatementShare>();
   for (let i = 0; i < a.warmup; i++) timing.status = (await request(a.baseUrl, a.route, a.cookies)).status;
   for (let i = 0; i < a.count; i++) {
     await a.admin.query("SELECT pg_stat_statements_reset()");
@@ -73,7 +96,9 @@ export async function timeRoute(a: { baseUrl: string; route: Route; cookies: Rec
     timing.httpMs.push(ms);
     timing.dbMs.push(db.ms);
     timing.statements.push(db.calls);
+    addShares(shares, db.rows);
   }
+  timing.byStatement = [...shares.values()].sort((x, y) => y.planMs + y.execMs - (x.planMs + x.execMs));
   return timing;
 }
 
